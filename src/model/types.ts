@@ -1,0 +1,213 @@
+/**
+ * The project file (`*.lamina.json`, schema "lamina/1") and the analysis report
+ * ("lamina-report/1"): the public contract set out in DESIGN.md. Units are in the key names
+ * (practical SI: m, kPa, MPa, GPa, kN/m³, mm, kN). Kernels work in SI base units; conversion
+ * happens in `src/model` and `src/analysis` only.
+ */
+
+export type OpeningType = 'beam' | 'slab' | 'cantilever';
+export type EndCondition = 'clamped' | 'simple';
+export type ModulusBasis = 'mass' | 'intact';
+export type RockClass = 'sedimentary' | 'igneous' | 'metamorphic';
+export type TensileMethod = 'brazilian' | 'direct';
+export type CharacteristicRule = 'mean' | 'lower5';
+export type DesignBasis = 'intact' | 'jointed';
+
+export interface Opening {
+  type: OpeningType;
+  /** Clear span; short side for a slab; overhang length for a cantilever. */
+  span_m: number;
+  /** Slab only: the long side (≥ span_m). `null` otherwise. */
+  length_m: number | null;
+  /** Beam ends / slab edges; ignored for a cantilever. */
+  ends: EndCondition;
+}
+
+export interface Loads {
+  surcharge_kPa: number;
+  support_kPa: number;
+  /** In-situ horizontal stress along the span, compression positive. */
+  horizontalStress_MPa: number;
+}
+
+export interface Specimen {
+  id: string;
+  diameter_mm: number;
+  thickness_mm: number;
+  peakLoad_kN: number;
+  /** True when the specimen broke along a central diametral fracture. */
+  valid: boolean;
+}
+
+export interface Tensile {
+  /** A tensile strength given directly; `null` when only specimens are given. */
+  value_MPa: number | null;
+  method: TensileMethod;
+  specimens: Specimen[];
+}
+
+export interface Jointing {
+  /** Mean spacing of joints that cut the layer across the span; `null` = none seen. */
+  crossJointSpacing_m: number | null;
+  fractureFrequency_per_m: number | null;
+  rqd: number | null;
+  /** JCond89 rating, 0..30. */
+  jointCondition: number;
+  jointFriction_deg: number;
+}
+
+export interface HoekBrownInput {
+  mi: number;
+  disturbance: number;
+}
+
+export interface Layer {
+  name: string;
+  thickness_m: number;
+  unitWeight_kNm3: number;
+  youngModulus_GPa: number;
+  modulusBasis: ModulusBasis;
+  poisson: number;
+  ucs_MPa: number;
+  rockClass: RockClass;
+  tensile: Tensile;
+  jointing: Jointing;
+  hoekBrown: HoekBrownInput;
+}
+
+export interface FsTargets {
+  tension: number;
+  crushing: number;
+  sliding: number;
+}
+
+export interface Design {
+  fsTarget: FsTargets;
+  /** Voussoir midspan deflection / thickness limit. */
+  deflectionLimitRatio: number;
+  characteristic: CharacteristicRule;
+  basis: DesignBasis;
+  /**
+   * Labelled option (Obert & Duvall): use the plane-strain modulus E/(1−ν²) in the beam
+   * deflection and Euler stress. Off by default.
+   */
+  planeStrainModulus: boolean;
+}
+
+export interface Project {
+  schema: 'lamina/1';
+  title: string;
+  description?: string;
+  opening: Opening;
+  loads: Loads;
+  /** layers[0] is the immediate roof; then upward. */
+  layers: Layer[];
+  design: Design;
+}
+
+// ---------------------------------------------------------------- report
+
+export interface Warning {
+  code: string;
+  /** Field path in the project (`layers[0].tensile.specimens[2]`) or report, or "" for global. */
+  path: string;
+  message: string;
+  /** "error" for an error-level warning (e.g. σh ≥ Euler stress); default "warning". */
+  level?: 'warning' | 'error';
+}
+
+export interface StrengthReport {
+  lab_MPa: number;
+  direct_MPa: number;
+  characteristic_MPa: number;
+  block_MPa: number;
+  mass_MPa: number;
+  design_MPa: number;
+  rqd: number;
+  gsi: number;
+  crossJointed: boolean;
+}
+
+export interface ElasticReport {
+  abutmentTension_MPa: number;
+  /** null for a cantilever. */
+  midspanTension_MPa: number | null;
+  maxTension_MPa: number;
+  at: 'abutment' | 'midspan' | 'root';
+  deflection_mm: number;
+  /** null where there is no net tension or the layer is cross-jointed. */
+  fsTension: number | null;
+  bucklingStress_MPa: number;
+}
+
+export interface VoussoirReport {
+  n: number | null;
+  leverArm_m: number | null;
+  maxCompression_MPa: number | null;
+  deflection_mm: number | null;
+  deflectionRatio: number | null;
+  fsCrushing: number | null;
+  fsSliding: number | null;
+  snapThrough: boolean;
+}
+
+export interface PlateReport {
+  maxTension_MPa: number;
+  at: string;
+  deflection_mm: number;
+  beta: number;
+  alpha: number;
+}
+
+export interface LayerReport {
+  name: string;
+  thickness_m: number;
+  group: number;
+  load_kPa: number;
+  strength: StrengthReport;
+  elastic: ElasticReport;
+  voussoir: VoussoirReport | null;
+  plate: PlateReport | null;
+}
+
+export type Mode = 'tension' | 'crushing' | 'sliding' | 'snapThrough' | 'deflection';
+
+export interface Governing {
+  layer: string;
+  mode: Mode;
+  fs: number;
+}
+
+export interface MaxSpanReport {
+  tension: number | null;
+  crushing: number | null;
+  sliding: number | null;
+  snapThrough: number | null;
+  deflection: number | null;
+  governing: number | null;
+}
+
+/**
+ * One step of the calculation trace. `formula` is a mathjs expression over the symbols in
+ * `values`; evaluating it with those values (in the units given) reproduces `result`.
+ */
+export interface TraceEntry {
+  /** Report field path the entry explains, e.g. `layers[0].elastic.maxTension_MPa`. */
+  path: string;
+  label: string;
+  formula: string;
+  values: Record<string, { value: number; unit: string }>;
+  result: number;
+  unit: string;
+  source: string;
+  note?: string;
+}
+
+export interface Report {
+  schema: 'lamina-report/1';
+  layers: LayerReport[];
+  governing: Governing | null;
+  maxSpan_m: MaxSpanReport | null;
+  warnings: Warning[];
+  trace: TraceEntry[];
+}
