@@ -1,0 +1,109 @@
+/**
+ * What the analysis layer hands to the report, the CLI and the app besides the public
+ * `Report` (DESIGN.md): per-layer details for charts and tables, the FS-versus-span curve,
+ * beam profiles and design-chart grids. Values are in practical units with the unit in the
+ * key name, like the report.
+ */
+import type { Mode, Report } from '../model/types';
+
+export interface SpecimenDetail {
+  index: number;
+  id: string;
+  diameter_mm: number;
+  thickness_mm: number;
+  peakLoad_kN: number;
+  /** Brazilian tensile strength 2P/(πDL). */
+  brazilian_MPa: number;
+  /** Direct tensile strength = factor × Brazilian. */
+  direct_MPa: number;
+  accepted: boolean;
+  /** Why the specimen was not used, when `accepted` is false. */
+  reason: string | null;
+  /** Warning messages for this specimen (L/D, diameter). */
+  warnings: string[];
+}
+
+export interface LabDetail {
+  source: 'specimens' | 'value';
+  method: 'brazilian' | 'direct';
+  directFactor: number;
+  specimens: SpecimenDetail[];
+  n: number;
+  mean_MPa: number | null;
+  sd_MPa: number | null;
+  cov: number | null;
+  kn: number | null;
+  characteristic_MPa: number;
+  rule: 'mean' | 'lower5';
+}
+
+/** One step of the strength chain, for the step chart and the report. */
+export interface StrengthStep {
+  key: 'lab' | 'direct' | 'characteristic' | 'block' | 'mass' | 'design';
+  label: string;
+  value_MPa: number;
+  /** Why this step reduces (or keeps) the value, in one sentence. */
+  reason: string;
+  source: string;
+}
+
+export interface LayerDetail {
+  lab: LabDetail;
+  steps: StrengthStep[];
+  /** Modulus used in the mechanics (after modulusBasis / plane-strain options). */
+  modulusUsed_GPa: number;
+  /** Effective unit weight γ' = q/t used by the voussoir. */
+  effectiveUnitWeight_kNm3: number;
+  hoekBrown: { mb: number; s: number; a: number; massUcs_MPa: number };
+  blockSize: { dLab_mm: number; dEffRaw_mm: number; dEff_mm: number; clamped: boolean; factor: number };
+}
+
+export interface Analysis {
+  report: Report;
+  layers: LayerDetail[];
+  /** Index pairs [below, above] of adjacent layers predicted to separate (different groups). */
+  separations: Array<[number, number]>;
+}
+
+/** Governing FS per mode (least over the layers) at a series of spans. */
+export interface SpanCurve {
+  spans_m: number[];
+  /** null where the mode does not apply at that span (or at all). snapThrough: 1 stands, 0 snaps. */
+  fs: Record<Mode, (number | null)[]>;
+  /** Targets on the same scale as `fs` (deflection and snapThrough: 1). */
+  targets: Record<Mode, number>;
+  currentSpan_m: number;
+}
+
+/** Stress and deflection along the span of one layer (elastic beam). */
+export interface BeamProfile {
+  layer: number;
+  x_m: number[];
+  /** Net tension (tension positive) on the top and bottom fibres. */
+  topTension_MPa: number[];
+  bottomTension_MPa: number[];
+  /** Downward deflection. */
+  deflection_mm: number[];
+}
+
+/** FS per mode of one layer on a grid of spans × thicknesses. */
+export interface DesignChart {
+  layer: number;
+  spans_m: number[];
+  thicknesses_m: number[];
+  /** fs[mode][thicknessIndex][spanIndex]; null where the mode does not apply. */
+  fs: Record<Mode, (number | null)[][]>;
+  targets: Record<Mode, number>;
+}
+
+/** Bending-stress field over a slab (for contour plots). */
+export interface SlabField {
+  layer: number;
+  /** Coordinates along the long side (x, 0..length) and the short side (y, 0..span). */
+  x_m: number[];
+  y_m: number[];
+  /** Row-major, y outer: stress_MPa[j * x_m.length + i]. Largest principal bending tension. */
+  stress_MPa: number[];
+  maxTension_MPa: number;
+  at: string;
+}

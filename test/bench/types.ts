@@ -1,0 +1,9 @@
+/** One benchmark figure, printed by `npm run bench` (test/bench/run.ts). */
+export type BenchResult = {
+  name: string;
+  median_us: number;
+  baseline?: string;
+  ratio?: number;
+  target?: string;
+  pass?: boolean;
+};
