@@ -1,16 +1,14 @@
 /**
  * Launch Debian's chromium for browser tests with the flags this machine needs (no GPU, no
- * background networking, a fresh profile). Never downloads a browser.
+ * background networking, a fresh profile per launch). Never downloads a browser.
  */
 import { chromium, type Browser } from 'playwright-core';
-import { mkdtempSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
 
 export const CHROMIUM_PATH = process.env.LAMINA_CHROMIUM ?? '/usr/bin/chromium';
 
 export async function launchChromium(): Promise<Browser> {
-  const profile = mkdtempSync(join(tmpdir(), 'lamina-chromium-'));
+  // playwright-core gives every launch a fresh, empty profile directory of its own (it refuses
+  // a --user-data-dir argument), so each run starts clean.
   return chromium.launch({
     executablePath: CHROMIUM_PATH,
     headless: true,
@@ -23,7 +21,6 @@ export async function launchChromium(): Promise<Browser> {
       '--disable-background-networking',
       '--disable-component-update',
       '--disable-sync',
-      `--user-data-dir=${profile}`,
     ],
   });
 }
