@@ -1,0 +1,16 @@
+export { brazilianTensileStrength } from './brazilian';
+export { reduceSpecimens, REASON_INVALID, REASON_TOO_THICK } from './specimens';
+export type { SpecimenSI, SpecimenReduction, AcceptedSpecimen, RejectedSpecimen, SpecimenWarning } from './specimens';
+export { directFactor } from './direct-factor';
+export type { RockClassName } from './direct-factor';
+export { summarise, knLower5, characteristicValue, studentTQuantile } from './statistics';
+export type { Summary, Characteristic, CharacteristicRuleName } from './statistics';
+export { rqdFromFrequency } from './rqd';
+export { gsiFromJointing } from './gsi';
+export { hoekBrownParameters, rockMassTensileStrength, rockMassUcs } from './hoek-brown';
+export type { HoekBrownParameters } from './hoek-brown';
+export { rockMassModulus } from './rock-mass-modulus';
+export { sizeEffectFactor, effectiveBlockSize, SIZE_EFFECT_MAX_MM, DEFAULT_LAB_DIAMETER_MM } from './size-effect';
+export type { BlockSize, BlockSizeInput } from './size-effect';
+export { strengthChain } from './chain';
+export type { StrengthChain, StrengthChainInput, StrengthChainWarning } from './chain';
