@@ -1,0 +1,81 @@
+/**
+ * Layered roof: load sharing and bed separation (Obert & Duvall 1967). Layers that bend
+ * together share curvature, so layer i of a group carries
+ *     qᵢ = Eᵢ tᵢ³ · Σ(γⱼ tⱼ) / Σ(Eⱼ tⱼ³)      (sums over the group).
+ * Groups are built upward from the immediate roof: the next layer joins while the load it puts
+ * on the group's lowest layer does not fall, (q_{n+1})₁ ≥ (q_n)₁; the first layer whose addition
+ * lowers it is stiffer, separates, and starts the next group. The test uses self-weights only;
+ * surcharge (top group) and support pressure (group 0) are shared afterwards in the same
+ * stiffness proportion. SI: γ in N/m³, t in m, E in Pa, pressures in Pa.
+ *
+ *     groupLayers([{ unitWeight: 25e3, thickness: 0.5, modulus: 10e9 },
+ *                  { unitWeight: 25e3, thickness: 1.0, modulus: 20e9 }]) // [0, 1]
+ */
+export interface BedStiffness {
+  unitWeight: number;
+  thickness: number;
+  modulus: number;
+}
+
+/** Load on the lowest layer of `beds` when they all bend together: E₁t₁³ Σγt / ΣEt³. */
+export function loadOnLowest(beds: readonly BedStiffness[]): number {
+  if (beds.length === 0) throw new RangeError('loadOnLowest needs at least one bed');
+  let weight = 0;
+  let stiffness = 0;
+  for (const b of beds) {
+    weight += b.unitWeight * b.thickness;
+    stiffness += b.modulus * b.thickness ** 3;
+  }
+  const lowest = beds[0];
+  return (lowest.modulus * lowest.thickness ** 3 * weight) / stiffness;
+}
+
+/** Group index of every bed, layers[0] upward. */
+export function groupLayers(beds: readonly BedStiffness[]): number[] {
+  const groups: number[] = [];
+  let group = 0;
+  let start = 0;
+  for (let i = 0; i < beds.length; i++) {
+    if (i > start) {
+      const before = loadOnLowest(beds.slice(start, i));
+      const after = loadOnLowest(beds.slice(start, i + 1));
+      if (after < before) {
+        group += 1;
+        start = i;
+      }
+    }
+    groups.push(group);
+  }
+  return groups;
+}
+
+export interface SharedLoads {
+  /** Load carried by each bed, Pa. */
+  loads: number[];
+  /** Per group: Σγt (self-weight), ΣEt³, and the extra pressure (surcharge − support) applied. */
+  groups: { first: number; last: number; weight: number; stiffness: number; extra: number }[];
+}
+
+/** Loads per bed after sharing within groups; surcharge on the top group, support on group 0. */
+export function shareLoads(beds: readonly BedStiffness[], groups: readonly number[], surcharge: number, support: number): SharedLoads {
+  if (groups.length !== beds.length) throw new RangeError('groups must give one index per bed');
+  const count = beds.length === 0 ? 0 : groups[groups.length - 1] + 1;
+  const summary: SharedLoads['groups'] = [];
+  for (let g = 0; g < count; g++) {
+    const first = groups.indexOf(g);
+    const last = groups.lastIndexOf(g);
+    let weight = 0;
+    let stiffness = 0;
+    for (let i = first; i <= last; i++) {
+      weight += beds[i].unitWeight * beds[i].thickness;
+      stiffness += beds[i].modulus * beds[i].thickness ** 3;
+    }
+    const extra = (g === count - 1 ? surcharge : 0) - (g === 0 ? support : 0);
+    summary.push({ first, last, weight, stiffness, extra });
+  }
+  const loads = beds.map((b, i) => {
+    const g = summary[groups[i]];
+    return (b.modulus * b.thickness ** 3 * (g.weight + g.extra)) / g.stiffness;
+  });
+  return { loads, groups: summary };
+}
