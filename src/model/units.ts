@@ -1,0 +1,206 @@
+/**
+ * Units at the boundary: the ONE module that owns mathjs for units. Text typed into a form
+ * field (`20 ft`, `2500 psi`, `160 lbf/ft^3`) is parsed with a strict pattern and converted
+ * with `math.unit(value, unit)`; user text is never evaluated as an expression.
+ * Display conversions (SI ↔ US customary) go through the same instance.
+ *
+ * Custom units defined here: psf = lbf/ft², ksf = 1000 lbf/ft², ksi = 1000 psi,
+ * pcf = lbf/ft³, kcf = 1000 lbf/ft³. mathjs supplies psi = 6894.757 Pa, lbf = 4.448222 N,
+ * ft = 0.3048 m, in = 0.0254 m (METHODS §13: 1 psi = 6894.757 Pa; 1 lbf/ft³ = 0.157087 kN/m³;
+ * 1 ft = 0.3048 m; 1 ksf = 47.880 kPa).
+ *
+ *     parseQuantity('20 ft', 'm')   // 6.096
+ *     parseQuantity('2500 psi', 'MPa') // 17.2369
+ *     parseQuantity('0.45', 'm')    // 0.45 (a bare number is already in the given unit)
+ */
+import { all, create, type Unit } from 'mathjs';
+
+const math = create(all, {});
+
+const CUSTOM_UNITS: ReadonlyArray<[string, string]> = [
+  ['psf', '1 lbf/ft^2'],
+  ['ksf', '1000 lbf/ft^2'],
+  ['ksi', '1000 psi'],
+  ['pcf', '1 lbf/ft^3'],
+  ['kcf', '1000 lbf/ft^3'],
+];
+for (const [name, definition] of CUSTOM_UNITS) {
+  if (!math.Unit.isValuelessUnit(name)) math.createUnit(name, definition);
+}
+
+/** Thrown on unparsable text or a quantity of the wrong dimension. */
+export class UnitError extends Error {
+  constructor(message: string) {
+    super(message);
+    this.name = 'UnitError';
+  }
+}
+
+const NUMBER = String.raw`[-+]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][-+]?\d+)?`;
+const UNIT_TOKEN = String.raw`[A-Za-zµμ°]+(?:[²³]|\^?[-+]?\d+)?`;
+const UNIT = String.raw`${UNIT_TOKEN}(?:\s*[/*·.]\s*${UNIT_TOKEN}|\s+${UNIT_TOKEN})*`;
+const QUANTITY = new RegExp(String.raw`^\s*(${NUMBER})\s*(${UNIT})?\s*$`);
+
+/** What a unit measures, for messages: base SI unit of the dimension → name and example. */
+const DIMENSIONS: ReadonlyArray<{ probe: string; name: string; example: string }> = [
+  { probe: 'm', name: 'a length', example: '6 m or 20 ft' },
+  { probe: 'Pa', name: 'a stress or pressure', example: '3 MPa or 450 psi' },
+  { probe: 'N/m^3', name: 'a unit weight', example: '25 kN/m³ or 160 lbf/ft³' },
+  { probe: 'N', name: 'a force', example: '10 kN or 2250 lbf' },
+  { probe: 'rad', name: 'an angle', example: '30 deg' },
+];
+
+function dimensionOf(siUnit: string): { name: string; example: string } {
+  const target = math.unit(1, siUnit);
+  for (const d of DIMENSIONS) if (target.equalBase(math.unit(1, d.probe))) return d;
+  return { name: `a quantity in ${siUnit}`, example: `1 ${siUnit}` };
+}
+
+/** Accept the pretty forms people type: ³ ², `·` for a product, `m3` for `m^3`. */
+function normaliseUnit(text: string): string {
+  return text
+    .trim()
+    .replace(/³/g, '^3')
+    .replace(/²/g, '^2')
+    .replace(/[·]/g, ' ')
+    .replace(/μ/g, 'u')
+    .replace(/µ/g, 'u')
+    .replace(/°/g, 'deg')
+    .replace(/([A-Za-z])([23])(?![\d.])/g, '$1^$2');
+}
+
+/** Drop floating-point noise from a conversion (15 significant digits) and −0. */
+function tidy(x: number): number {
+  const v = Number(x.toPrecision(15));
+  return v === 0 ? 0 : v;
+}
+
+function toUnit(value: number, unitText: string): Unit | undefined {
+  try {
+    return math.unit(value, unitText);
+  } catch {
+    return undefined;
+  }
+}
+
+/**
+ * Parse `text` (a number, optionally followed by a unit) and return it in `siUnit`
+ * (e.g. 'm', 'mm', 'MPa', 'kPa', 'GPa', 'kN/m^3', 'kN'). A bare number is taken as already
+ * in `siUnit`. Throws `UnitError` on unparsable text or a wrong dimension.
+ *     parseQuantity('160 lbf/ft^3', 'kN/m^3') // 25.134
+ */
+export function parseQuantity(text: string, siUnit: string): number {
+  const target = toUnit(1, siUnit);
+  if (!target) throw new RangeError(`parseQuantity: unknown target unit ${JSON.stringify(siUnit)}`);
+  const dim = dimensionOf(siUnit);
+  const expected = `expected ${dim.name} (e.g. ${dim.example}), got ${JSON.stringify(String(text))}`;
+  if (typeof text !== 'string') throw new UnitError(expected);
+  const m = QUANTITY.exec(text);
+  if (!m) throw new UnitError(expected);
+  const value = Number(m[1]);
+  if (!Number.isFinite(value)) throw new UnitError(expected);
+  const unitText = m[2]?.trim();
+  if (!unitText) return value;
+  const unit = toUnit(value, normaliseUnit(unitText));
+  if (!unit || !unit.equalBase(target)) throw new UnitError(expected);
+  const result = tidy(unit.toNumber(siUnit));
+  if (!Number.isFinite(result)) throw new UnitError(expected);
+  return result;
+}
+
+// ---------------------------------------------------------------- display unit systems
+
+export type UnitSystem = 'SI' | 'US';
+
+export type Quantity =
+  | 'length'
+  | 'smallLength'
+  | 'stress'
+  | 'pressure'
+  | 'modulus'
+  | 'unitWeight'
+  | 'force'
+  | 'deflection';
+
+interface QuantityUnits {
+  /** Unit the project file stores this quantity in. */
+  file: string;
+  SI: string;
+  US: string;
+  label: Record<UnitSystem, string>;
+}
+
+/**
+ * Display units per quantity. Pressure (surcharge, support, distributed load) is shown in psf
+ * in US units, as surface loads are in US practice; stresses are in psi.
+ */
+export const QUANTITIES: Readonly<Record<Quantity, QuantityUnits>> = {
+  length: { file: 'm', SI: 'm', US: 'ft', label: { SI: 'm', US: 'ft' } },
+  smallLength: { file: 'mm', SI: 'mm', US: 'in', label: { SI: 'mm', US: 'in' } },
+  stress: { file: 'MPa', SI: 'MPa', US: 'psi', label: { SI: 'MPa', US: 'psi' } },
+  pressure: { file: 'kPa', SI: 'kPa', US: 'psf', label: { SI: 'kPa', US: 'psf' } },
+  modulus: { file: 'GPa', SI: 'GPa', US: 'ksi', label: { SI: 'GPa', US: 'ksi' } },
+  unitWeight: { file: 'kN/m^3', SI: 'kN/m^3', US: 'lbf/ft^3', label: { SI: 'kN/m³', US: 'lbf/ft³' } },
+  force: { file: 'kN', SI: 'kN', US: 'lbf', label: { SI: 'kN', US: 'lbf' } },
+  deflection: { file: 'mm', SI: 'mm', US: 'in', label: { SI: 'mm', US: 'in' } },
+};
+
+const factorCache = new Map<string, number>();
+
+/** Display units per file unit for `quantity` in `system` (all conversions are linear). */
+function displayFactor(quantity: Quantity, system: UnitSystem): number {
+  const q = QUANTITIES[quantity];
+  if (!q) throw new RangeError(`unknown quantity ${JSON.stringify(quantity)}`);
+  if (system !== 'SI' && system !== 'US') throw new RangeError(`unknown unit system ${JSON.stringify(system)}`);
+  const key = `${quantity}|${system}`;
+  let f = factorCache.get(key);
+  if (f === undefined) {
+    f = math.unit(1, q.file).toNumber(q[system]);
+    factorCache.set(key, f);
+  }
+  return f;
+}
+
+/** Convert a value in the file unit of `quantity` to the display unit of `system`. */
+export function toDisplay(valueInFileUnit: number, quantity: Quantity, system: UnitSystem): number {
+  if (!Number.isFinite(valueInFileUnit)) throw new RangeError(`toDisplay: value must be finite, got ${valueInFileUnit}`);
+  return tidy(valueInFileUnit * displayFactor(quantity, system));
+}
+
+/** Convert a value in the display unit of `system` back to the file unit of `quantity`. */
+export function fromDisplay(valueInDisplayUnit: number, quantity: Quantity, system: UnitSystem): number {
+  if (!Number.isFinite(valueInDisplayUnit)) throw new RangeError(`fromDisplay: value must be finite, got ${valueInDisplayUnit}`);
+  return tidy(valueInDisplayUnit / displayFactor(quantity, system));
+}
+
+/** The display unit as a mathjs unit string ('lbf/ft^3'), e.g. for `parseQuantity`. */
+export const displayUnit = (quantity: Quantity, system: UnitSystem): string => QUANTITIES[quantity][system];
+
+/** The file unit of `quantity` as a mathjs unit string ('kN/m^3'). */
+export const fileUnit = (quantity: Quantity): string => QUANTITIES[quantity].file;
+
+/** Pretty unit label for display: 'kN/m³', 'lbf/ft³', 'psi'. */
+export function unitLabel(quantity: Quantity, system: UnitSystem): string {
+  displayFactor(quantity, system); // validates both arguments
+  return QUANTITIES[quantity].label[system];
+}
+
+/**
+ * Format a value given in the file unit as display text with its unit, to `digits`
+ * significant digits (default 4): formatQuantity(6, 'length', 'US') // "19.69 ft".
+ * `null` formats as "—".
+ */
+export function formatQuantity(value: number | null, quantity: Quantity, system: UnitSystem, digits = 4): string {
+  if (value === null) return '—';
+  if (!(Number.isInteger(digits) && digits >= 1 && digits <= 15)) {
+    throw new RangeError(`formatQuantity: digits must be an integer from 1 to 15, got ${digits}`);
+  }
+  const shown = Number(toDisplay(value, quantity, system).toPrecision(digits));
+  return `${shown === 0 ? 0 : shown} ${unitLabel(quantity, system)}`;
+}
+
+/** Parse text typed into a field showing `quantity` in `system`; returns the file unit value. */
+export function parseDisplayQuantity(text: string, quantity: Quantity, system: UnitSystem): number {
+  const bareInDisplay = parseQuantity(text, displayUnit(quantity, system));
+  return fromDisplay(bareInDisplay, quantity, system);
+}
