@@ -1,0 +1,278 @@
+/**
+ * The one place the analysis runs in the app. Components dispatch `project-edit`,
+ * `project-replace`, `units-change`, `chart-layer-change`; the shell forwards them here. Every
+ * edit is validated by the model before it lands (a rejected edit keeps the project and sets
+ * `fieldErrors`); accepted edits push undo history, autosave, and schedule the analysis
+ * ~150 ms after the last edit (`flush()` runs it at once, for tests and the benchmark).
+ */
+import type { Project } from '../../model/types';
+import type { Analysis, DesignChart, SpanCurve } from '../../analysis/types';
+import { setAtPath } from './project-path';
+import { UndoHistory } from './undo-history';
+import { writeAutosave, type KeyValueStorage } from './autosave';
+
+export type UnitSystem = 'SI' | 'US';
+
+export interface FieldError {
+  path: string;
+  message: string;
+}
+
+export interface AppState {
+  project: Project;
+  units: UnitSystem;
+  analysis: Analysis | null;
+  curve: SpanCurve | null;
+  chart: DesignChart | null;
+  chartLayer: number;
+  minThickness_m: number | null;
+  error: string | null;
+  fieldErrors: FieldError[];
+  canUndo: boolean;
+  canRedo: boolean;
+  /** True between an accepted edit and the analysis that follows it. */
+  pending: boolean;
+  /** Validation warnings of the current project (ASSUMED defaults and the like). */
+  inputWarnings: FieldError[];
+  /** A one-line message for the user (file opened, link copied, autosave ignored …). */
+  notice: string | null;
+}
+
+export type ValidationOutcome =
+  | { ok: true; project: Project; warnings: ReadonlyArray<{ path: string; message: string }> }
+  | {
+      ok: false;
+      errors: ReadonlyArray<{ path: string; message: string }>;
+      warnings?: ReadonlyArray<{ path: string; message: string }>;
+    };
+
+export interface StoreDeps {
+  validate(input: unknown): ValidationOutcome;
+  analyse(project: Project): Analysis;
+  spanCurve(project: Project): SpanCurve;
+  designChart(project: Project, layerIndex: number): DesignChart;
+  minimumThickness(project: Project, layerIndex: number): number | null;
+  storage?: KeyValueStorage | null;
+  debounceMs?: number;
+  /** Marks for the edit → results measure (performance.mark in the browser). */
+  mark?: (name: string) => void;
+}
+
+export type Listener = (state: AppState) => void;
+
+const plain = (e: { path: string; message: string }): FieldError => ({ path: e.path, message: e.message });
+
+/** Error text for the user: the message only, never a stack trace. */
+export function errorText(err: unknown): string {
+  if (err instanceof Error) return err.message || err.name;
+  return String(err);
+}
+
+export class ProjectStore {
+  private state: AppState;
+  private readonly history = new UndoHistory<Project>(100, 1000);
+  private readonly listeners = new Set<Listener>();
+  private timer: ReturnType<typeof setTimeout> | null = null;
+  /** True once the user picked a layer for the chart; until then it follows the governing layer. */
+  private chartLayerChosen = false;
+  readonly debounceMs: number;
+
+  constructor(private readonly deps: StoreDeps, initial: Project, units: UnitSystem = 'SI') {
+    this.debounceMs = deps.debounceMs ?? 150;
+    const checked = deps.validate(initial);
+    if (!checked.ok) {
+      throw new RangeError(`initial project refused: ${checked.errors.map((e) => `${e.path}: ${e.message}`).join('; ')}`);
+    }
+    this.state = {
+      project: checked.project,
+      units,
+      analysis: null,
+      curve: null,
+      chart: null,
+      chartLayer: 0,
+      minThickness_m: null,
+      error: null,
+      fieldErrors: [],
+      canUndo: false,
+      canRedo: false,
+      pending: true,
+      inputWarnings: checked.warnings.map(plain),
+      notice: null,
+    };
+    this.runAnalysis();
+  }
+
+  getState(): AppState {
+    return this.state;
+  }
+
+  subscribe(listener: Listener): () => void {
+    this.listeners.add(listener);
+    return () => this.listeners.delete(listener);
+  }
+
+  /** Set one field by its project path. Returns true when the edit was accepted. */
+  edit(path: string, value: unknown): boolean {
+    this.deps.mark?.('lamina:edit');
+    let candidate: Project;
+    try {
+      candidate = setAtPath(this.state.project, path, value);
+    } catch (err) {
+      this.set({ fieldErrors: [{ path, message: errorText(err) }] });
+      return false;
+    }
+    return this.accept(candidate, path);
+  }
+
+  /** Replace the whole project (open file, preset, paste, layer add/remove/reorder). */
+  replace(input: unknown, source: string): boolean {
+    this.deps.mark?.('lamina:edit');
+    return this.accept(input, null, source);
+  }
+
+  private accept(candidate: unknown, key: string | null, source?: string): boolean {
+    let checked: ValidationOutcome;
+    try {
+      checked = this.deps.validate(candidate);
+    } catch (err) {
+      checked = { ok: false, errors: [{ path: '', message: errorText(err) }] };
+    }
+    if (!checked.ok) {
+      const errors = checked.errors.length > 0 ? checked.errors.map(plain) : [{ path: '', message: 'refused' }];
+      this.set({
+        fieldErrors: errors,
+        notice: source ? `${source}: not loaded — ${errors.length} field error${errors.length === 1 ? '' : 's'}; the current project is unchanged.` : this.state.notice,
+      });
+      return false;
+    }
+    this.history.record(this.state.project, key);
+    if (source) this.chartLayerChosen = false;
+    this.set({
+      project: checked.project,
+      inputWarnings: checked.warnings.map(plain),
+      fieldErrors: [],
+      pending: true,
+      notice: source ? `${source}: loaded.` : this.state.notice,
+    });
+    writeAutosave(this.deps.storage ?? null, checked.project);
+    this.schedule();
+    return true;
+  }
+
+  undo(): boolean {
+    const previous = this.history.undo(this.state.project);
+    return previous ? this.restore(previous) : false;
+  }
+
+  redo(): boolean {
+    const next = this.history.redo(this.state.project);
+    return next ? this.restore(next) : false;
+  }
+
+  private restore(project: Project): boolean {
+    this.deps.mark?.('lamina:edit');
+    this.set({ project, fieldErrors: [], pending: true });
+    writeAutosave(this.deps.storage ?? null, project);
+    this.schedule();
+    return true;
+  }
+
+  setUnits(units: UnitSystem): void {
+    if (units !== 'SI' && units !== 'US') return;
+    if (units !== this.state.units) this.set({ units });
+  }
+
+  setChartLayer(layer: number): void {
+    const n = this.state.project.layers.length;
+    if (!Number.isInteger(layer) || layer < 0 || layer >= n) return;
+    this.chartLayerChosen = true;
+    if (layer === this.state.chartLayer && this.state.chart) return;
+    const extra = this.computeChart(this.state.project, layer);
+    this.set({ chartLayer: layer, ...extra });
+  }
+
+  setNotice(notice: string | null): void {
+    this.set({ notice });
+  }
+
+  /** Show errors that did not come from an edit (a file that failed to parse). */
+  setFieldErrors(errors: FieldError[], notice: string | null = null): void {
+    this.set({ fieldErrors: errors.map(plain), notice });
+  }
+
+  /** Run a pending analysis now (tests, benchmark). */
+  flush(): void {
+    if (this.timer !== null) {
+      clearTimeout(this.timer);
+      this.timer = null;
+    }
+    if (this.state.pending) this.runAnalysis();
+  }
+
+  private schedule(): void {
+    if (this.timer !== null) clearTimeout(this.timer);
+    this.timer = setTimeout(() => {
+      this.timer = null;
+      this.runAnalysis();
+    }, this.debounceMs);
+  }
+
+  private computeChart(project: Project, layer: number): Pick<AppState, 'chart' | 'minThickness_m'> {
+    let chart: DesignChart | null = null;
+    let minThickness_m: number | null = null;
+    try {
+      chart = this.deps.designChart(project, layer);
+    } catch {
+      chart = null;
+    }
+    try {
+      const t = this.deps.minimumThickness(project, layer);
+      minThickness_m = typeof t === 'number' && Number.isFinite(t) ? t : null;
+    } catch {
+      minThickness_m = null;
+    }
+    return { chart, minThickness_m };
+  }
+
+  private runAnalysis(): void {
+    const project = this.state.project;
+    let analysis: Analysis | null = null;
+    let curve: SpanCurve | null = null;
+    let error: string | null = null;
+    try {
+      analysis = this.deps.analyse(project);
+    } catch (err) {
+      error = `The analysis failed: ${errorText(err)}`;
+    }
+    if (analysis) {
+      try {
+        curve = this.deps.spanCurve(project);
+      } catch {
+        curve = null;
+      }
+    }
+    const n = project.layers.length;
+    let chartLayer = Math.min(this.state.chartLayer, n - 1);
+    if (!this.chartLayerChosen && analysis) chartLayer = governingLayerIndex(analysis);
+    const extra = analysis ? this.computeChart(project, chartLayer) : { chart: null, minThickness_m: null };
+    this.set({ analysis, curve, error, chartLayer, pending: false, ...extra });
+  }
+
+  private set(patch: Partial<AppState>): void {
+    this.state = {
+      ...this.state,
+      ...patch,
+      canUndo: this.history.canUndo,
+      canRedo: this.history.canRedo,
+    };
+    for (const l of this.listeners) l(this.state);
+  }
+}
+
+/** Index of the governing layer (the report names it), 0 when there is none. */
+export function governingLayerIndex(analysis: Analysis): number {
+  const g = analysis.report.governing;
+  if (!g) return 0;
+  const i = analysis.report.layers.findIndex((l) => l.name === g.layer);
+  return i >= 0 ? i : 0;
+}

@@ -1,0 +1,155 @@
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { ProjectStore, type StoreDeps, type ValidationOutcome } from '../../../src/ui/state/project-store';
+import { AUTOSAVE_KEY } from '../../../src/ui/state/autosave';
+import { defaultLayer, defaultProject } from '../../../src/model/defaults';
+import type { Project } from '../../../src/model/types';
+import type { Analysis } from '../../../src/analysis/types';
+
+/** Fixture model: refuses a thickness ≤ 0 (DESIGN.md "Invalid input"), like the real validator. */
+function validate(input: unknown): ValidationOutcome {
+  const p = input as Project;
+  const errors = p.layers
+    .map((l, i) => (l.thickness_m > 0 ? null : { path: `layers[${i}].thickness_m`, message: `must be > 0 m, got ${l.thickness_m}` }))
+    .filter((e): e is { path: string; message: string } => e !== null);
+  return errors.length ? { ok: false, errors } : { ok: true, project: structuredClone(p), warnings: [] };
+}
+
+/** Fixture analysis: the governing layer is the thinnest one; FS = thickness (a stand-in number). */
+function analyse(p: Project): Analysis {
+  let gi = 0;
+  p.layers.forEach((l, i) => { if (l.thickness_m < p.layers[gi].thickness_m) gi = i; });
+  return {
+    report: {
+      schema: 'lamina-report/1',
+      layers: p.layers.map((l) => ({ name: l.name, thickness_m: l.thickness_m } as never)),
+      governing: { layer: p.layers[gi].name, mode: 'tension', fs: p.layers[gi].thickness_m },
+      maxSpan_m: null,
+      warnings: [],
+      trace: [],
+    },
+    layers: [],
+    separations: [],
+  };
+}
+
+function deps(extra: Partial<StoreDeps> = {}) {
+  const storage = new Map<string, string>();
+  const d: StoreDeps & { storage: Storage; calls: { analyse: number; chart: number[] } } = {
+    ...extra,
+    calls: { analyse: 0, chart: [] },
+    validate,
+    analyse: (p) => { d.calls.analyse++; return analyse(p); },
+    spanCurve: (p) => ({ spans_m: [1], fs: {} as never, targets: {} as never, currentSpan_m: p.opening.span_m }),
+    designChart: (_p, layer) => { d.calls.chart.push(layer); return { layer } as never; },
+    minimumThickness: () => 0.3,
+    storage: {
+      getItem: (k: string) => storage.get(k) ?? null,
+      setItem: (k: string, v: string) => void storage.set(k, v),
+      removeItem: (k: string) => void storage.delete(k),
+    } as Storage,
+  };
+  if (extra.analyse) d.analyse = extra.analyse;
+  return d;
+}
+
+function twoLayers(): Project {
+  const p = defaultProject();
+  p.layers = [{ ...defaultLayer(), name: 'Shale', thickness_m: 0.5 }, { ...defaultLayer(), name: 'Sandstone', thickness_m: 1.2 }];
+  return p;
+}
+
+describe('ProjectStore', () => {
+  beforeEach(() => vi.useFakeTimers());
+  afterEach(() => vi.useRealTimers());
+
+  it('analyses the initial project at once and puts the chart on the governing layer', () => {
+    const d = deps();
+    const p = twoLayers();
+    p.layers[1].thickness_m = 0.2;
+    const s = new ProjectStore(d, p);
+    const st = s.getState();
+    expect(st.analysis?.report.governing?.layer).toBe('Sandstone');
+    expect(st.chartLayer).toBe(1);
+    expect(st.minThickness_m).toBe(0.3);
+    expect(st.pending).toBe(false);
+  });
+
+  it('an accepted edit lands at once, and the analysis runs once, 150 ms after the last of several edits (debounce)', () => {
+    const d = deps();
+    const s = new ProjectStore(d, twoLayers());
+    const before = d.calls.analyse;
+    expect(s.edit('layers[0].thickness_m', 0.4)).toBe(true);
+    expect(s.edit('layers[0].thickness_m', 0.45)).toBe(true);
+    expect(s.getState().project.layers[0].thickness_m).toBe(0.45);
+    expect(s.getState().pending).toBe(true);
+    vi.advanceTimersByTime(149);
+    expect(d.calls.analyse).toBe(before);
+    vi.advanceTimersByTime(1);
+    expect(d.calls.analyse).toBe(before + 1);
+    expect(s.getState().analysis?.report.governing?.fs).toBe(0.45);
+    expect(JSON.parse(d.storage.getItem(AUTOSAVE_KEY) ?? 'null').layers[0].thickness_m).toBe(0.45);
+  });
+
+  it('a rejected edit keeps the project, sets fieldErrors with the path, and runs no analysis', () => {
+    const d = deps();
+    const s = new ProjectStore(d, twoLayers());
+    const before = d.calls.analyse;
+    expect(s.edit('layers[1].thickness_m', -0.2)).toBe(false);
+    expect(s.getState().project.layers[1].thickness_m).toBe(1.2);
+    expect(s.getState().fieldErrors).toEqual([{ path: 'layers[1].thickness_m', message: 'must be > 0 m, got -0.2' }]);
+    s.flush();
+    expect(d.calls.analyse).toBe(before);
+    expect(s.edit('layers[1].thickness_m', 1.0)).toBe(true);
+    expect(s.getState().fieldErrors).toEqual([]);
+  });
+
+  it('undo restores the previous project and redo re-applies it; flush() analyses at once', () => {
+    const s = new ProjectStore(deps(), twoLayers());
+    s.edit('opening.span_m', 8);
+    vi.advanceTimersByTime(2000);
+    s.edit('layers[0].name', 'Mudstone');
+    expect(s.getState().canUndo).toBe(true);
+    expect(s.undo()).toBe(true);
+    expect(s.getState().project.layers[0].name).toBe('Shale');
+    expect(s.getState().project.opening.span_m).toBe(8);
+    s.flush();
+    expect(s.getState().pending).toBe(false);
+    expect(s.getState().analysis?.report.layers[0].name).toBe('Shale');
+    expect(s.redo()).toBe(true);
+    expect(s.getState().project.layers[0].name).toBe('Mudstone');
+    expect(s.getState().canRedo).toBe(false);
+  });
+
+  it('replace with a refused project leaves the old one and lists the errors', () => {
+    const s = new ProjectStore(deps(), twoLayers());
+    const bad = twoLayers();
+    bad.layers[0].thickness_m = 0;
+    expect(s.replace(bad, 'bad.lamina.json')).toBe(false);
+    expect(s.getState().project.layers[0].thickness_m).toBe(0.5);
+    expect(s.getState().fieldErrors[0].path).toBe('layers[0].thickness_m');
+    expect(s.getState().notice).toMatch(/bad\.lamina\.json: not loaded/);
+  });
+
+  it('units change display state only: no analysis runs', () => {
+    const d = deps();
+    const s = new ProjectStore(d, twoLayers());
+    const before = d.calls.analyse;
+    s.setUnits('US');
+    expect(s.getState().units).toBe('US');
+    s.flush();
+    expect(d.calls.analyse).toBe(before);
+  });
+
+  it('a chosen chart layer is kept over later analyses; an analysis error gives text, not a throw', () => {
+    const d = deps();
+    const s = new ProjectStore(d, twoLayers());
+    s.setChartLayer(1);
+    expect(s.getState().chartLayer).toBe(1);
+    s.edit('layers[1].thickness_m', 2);
+    s.flush();
+    expect(s.getState().chartLayer).toBe(1);
+    const failing = new ProjectStore(deps({ analyse: () => { throw new Error('no convergence'); } }), twoLayers());
+    expect(failing.getState().analysis).toBeNull();
+    expect(failing.getState().error).toBe('The analysis failed: no convergence');
+  });
+});
