@@ -166,7 +166,7 @@ export function leverArmAt(input: VoussoirInput, n: number): number | null {
   const K = ((3 * s) / 8) * L * ((2 / 3 + n) / 3) * ((g * s * s) / (4 * n * E));
   const h = K / (KC_FACTOR * z0 * z0 * z0);
   if (!(h <= 1)) return null;
-  return ((2 * z0) / SQRT3) * Math.cos(Math.acos(-h) / 3);
+  return Math.min(z0, ((2 * z0) / SQRT3) * Math.cos(Math.acos(-h) / 3));
 }
 
 /**
@@ -360,7 +360,9 @@ function loadRatio(s: number, t: number, kScale: number, n: number): number {
 
 /** Largest root of z³ − z0²z + K = 0 for h = K/Kc ∈ [0, 1]: (2z0/√3)·cos(arccos(−h)/3). */
 function leverArmFromRatio(t: number, n: number, h: number): number {
-  return ((2 * t * (1 - (2 * n) / 3)) / SQRT3) * Math.cos(Math.acos(-h) / 3);
+  const z0 = t * (1 - (2 * n) / 3);
+  // min: at h → 0 rounding in cos(π/6)·2/√3 could put z a hair above z0.
+  return Math.min(z0, ((2 * z0) / SQRT3) * Math.cos(Math.acos(-h) / 3));
 }
 
 /** D(n) = d(n·z)/dn = z + n·z', z' = (2z0·z0'·z − K')/(3z² − z0²), at a solved (n, z). */
