@@ -9,5 +9,6 @@ export function rqdFromFrequency(frequency: number): number {
     throw new RangeError(`fracture frequency must be a finite number ≥ 0 per m, got ${frequency}`);
   }
   const x = 0.1 * frequency;
-  return 100 * Math.exp(-x) * (x + 1);
+  // e^(−x)(1 + x) ≤ 1 exactly; the min keeps round-off at tiny λ from exceeding 100.
+  return Math.min(100, 100 * Math.exp(-x) * (x + 1));
 }
