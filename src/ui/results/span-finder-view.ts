@@ -1,0 +1,171 @@
+/**
+ * `<span-finder-view>`: the largest span per mode and the governing one, the current span, the
+ * FS-versus-span chart, the minimum thickness of a chosen layer, and a button that adopts the
+ * governing largest span. Renders the store's results; computes nothing.
+ *
+ * @fires show-trace - detail `{ path }` when a traced number is clicked
+ * @fires chart-layer-change - detail `{ layer: number }` when another layer is chosen
+ * @fires project-edit - detail `{ path: 'opening.span_m', value: number }` from "Use this span"
+ */
+import { LitElement, html, nothing, type PropertyValues } from 'lit';
+import { customElement, property } from 'lit/decorators.js';
+import { unsafeSVG } from 'lit/directives/unsafe-svg.js';
+import type { MaxSpanReport, Mode, Project } from '../../model/types';
+import type { UnitSystem } from '../../model/units';
+import type { Analysis, SpanCurve } from '../../analysis/types';
+import { fsSpanSvg } from '../../report/charts';
+import { MODE_NAME } from './check-rows';
+import { displayText, displayValue } from './display-value';
+import { tracedNumber } from './traced-number';
+import { resultsStyles } from './results-styles';
+
+const SPAN_MODES: readonly Mode[] = ['tension', 'crushing', 'sliding', 'snapThrough', 'deflection'];
+
+const WHY_NULL: Record<Mode, string> = {
+  tension: 'does not limit the span (no layer without cross-joints carries net tension, or the mode does not apply)',
+  crushing: 'does not limit the span here',
+  sliding: 'never limits the span: the sliding FS rises with span; a shortfall shows at the current span',
+  snapThrough: 'does not limit the span here',
+  deflection: 'does not limit the span here',
+};
+
+/** The span offered by "Use this span": the governing largest span, rounded down to 1 mm. */
+export function adoptableSpan(maxSpan: MaxSpanReport | null | undefined): number | null {
+  const g = maxSpan?.governing;
+  if (g === null || g === undefined || !(g > 0)) return null;
+  const mm = Math.floor(g * 1000 + 1e-9) / 1000;
+  return mm > 0 ? mm : g;
+}
+
+@customElement('span-finder-view')
+export class SpanFinderView extends LitElement {
+  static override styles = [resultsStyles];
+
+  @property({ attribute: false }) project: Project | null = null;
+  @property({ attribute: false }) analysis: Analysis | null = null;
+  @property({ attribute: false }) curve: SpanCurve | null = null;
+  @property() units: UnitSystem = 'SI';
+  @property({ attribute: false }) minThickness: number | null = null;
+  @property({ type: Number }) chartLayer = 0;
+
+  private chart = '';
+
+  protected override willUpdate(changed: PropertyValues<this>): void {
+    if (changed.has('curve') || changed.has('analysis') || changed.has('units') || changed.has('project')) {
+      this.chart = '';
+      if (this.curve) {
+        try {
+          this.chart = fsSpanSvg(this.curve, this.analysis?.report.maxSpan_m ?? null, {
+            units: this.units,
+            basis: this.project?.design.basis ?? 'intact',
+          });
+        } catch {
+          this.chart = '';
+        }
+      }
+    }
+  }
+
+  private useSpan(value: number): void {
+    this.dispatchEvent(
+      new CustomEvent('project-edit', { detail: { path: 'opening.span_m', value }, bubbles: true, composed: true }),
+    );
+  }
+
+  private chooseLayer(event: Event): void {
+    const layer = Number((event.target as HTMLSelectElement).value);
+    this.dispatchEvent(new CustomEvent('chart-layer-change', { detail: { layer }, bubbles: true, composed: true }));
+  }
+
+  override render() {
+    const p = this.project;
+    const a = this.analysis;
+    if (!p || !a) return html`<p class="empty">No results yet: the analysis has not run.</p>`;
+    const u = this.units;
+    const m = a.report.maxSpan_m;
+    const adopt = adoptableSpan(m);
+    const current = p.opening.span_m;
+    const jointed = p.design.basis === 'jointed';
+    const governingMode = m
+      ? SPAN_MODES.filter((k) => !(jointed && k === 'tension')).find((k) => m[k] !== null && m[k] === m.governing)
+      : undefined;
+    const spanWord = p.opening.type === 'cantilever' ? 'overhang' : p.opening.type === 'slab' ? 'short span' : 'span';
+    const layerIndex = Math.min(Math.max(0, this.chartLayer), p.layers.length - 1);
+    return html`
+      <table>
+        <caption>Largest ${spanWord} that meets each target (all else held fixed)</caption>
+        <thead>
+          <tr><th scope="col">Mode</th><th scope="col" class="num">Largest ${spanWord}</th><th scope="col">Note</th></tr>
+        </thead>
+        <tbody>
+          ${SPAN_MODES.map((k) => {
+            const v = m ? m[k] : null;
+            const d = displayValue(v, 'length', u);
+            return html`<tr data-mode=${k}>
+              <th scope="row">${MODE_NAME[k]}</th>
+              <td class="num">${v === null ? '—' : tracedNumber(`maxSpan_m.${k}`, d.text, d.unit, v)}</td>
+              <td class="note">
+                ${v === null ? WHY_NULL[k] : v >= current ? 'meets the target at the current span' : 'below the current span: this mode fails now'}
+                ${jointed && k === 'tension' ? html` — not counted (design basis "jointed")` : nothing}
+              </td>
+            </tr>`;
+          })}
+        </tbody>
+        <tfoot>
+          <tr data-mode="governing">
+            <th scope="row">Governing</th>
+            <td class="num">
+              ${m?.governing === null || m?.governing === undefined
+                ? '—'
+                : tracedNumber('maxSpan_m.governing', displayValue(m.governing, 'length', u).text, displayValue(m.governing, 'length', u).unit, m.governing)}
+            </td>
+            <td class="note">${governingMode ? `set by ${MODE_NAME[governingMode]}` : m?.governing === null ? 'no mode limits the span' : ''}</td>
+          </tr>
+          <tr data-mode="current">
+            <th scope="row">Current ${spanWord}</th>
+            <td class="num" data-role="current-span" data-si-value=${current}>${displayText(current, 'length', u, 4)}</td>
+            <td class="note">
+              ${adopt === null ? '' : adopt >= current ? 'within the governing largest span' : html`<strong>exceeds the governing largest span</strong>`}
+            </td>
+          </tr>
+        </tfoot>
+      </table>
+      <div class="controls">
+        <button
+          type="button"
+          class="action"
+          data-role="use-span"
+          ?disabled=${adopt === null}
+          @click=${() => adopt !== null && this.useSpan(adopt)}
+          title="Set the ${spanWord} to the governing largest span (rounded down to 1 mm)"
+        >
+          Use this span${adopt !== null ? ` (${displayText(adopt, 'length', u, 4)})` : ''}
+        </button>
+      </div>
+      ${this.chart
+        ? html`<div class="chart" data-role="fs-span-chart">${unsafeSVG(this.chart)}</div>`
+        : html`<p class="empty">No FS-versus-span curve.</p>`}
+      <h3>Minimum thickness</h3>
+      <div class="controls">
+        <label for="thk-layer">Layer</label>
+        <select id="thk-layer" data-role="chart-layer" @change=${this.chooseLayer}>
+          ${p.layers.map((l, i) => html`<option value=${i} ?selected=${i === layerIndex}>${i + 1}. ${l.name}</option>`)}
+        </select>
+      </div>
+      <p data-role="min-thickness">
+        ${this.minThickness === null
+          ? html`No thickness of <strong>${p.layers[layerIndex]?.name ?? ''}</strong> meets every target at the current ${spanWord}
+              (or the thickness does not control it).`
+          : html`Thinnest <strong>${p.layers[layerIndex]?.name ?? ''}</strong> that meets every target at the current ${spanWord}:
+              <strong data-si-value=${this.minThickness}>${displayText(this.minThickness, 'length', u, 3)}</strong>
+              (now ${displayText(p.layers[layerIndex]?.thickness_m ?? null, 'length', u, 3)}).`}
+      </p>
+    `;
+  }
+}
+
+declare global {
+  interface HTMLElementTagNameMap {
+    'span-finder-view': SpanFinderView;
+  }
+}
