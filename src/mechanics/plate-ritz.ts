@@ -255,3 +255,77 @@ export function plateFieldAt(sol: RitzPlate, xs: ArrayLike<number>, ys: ArrayLik
   }
   return { w, mx, my, mxy };
 }
+
+interface PointWork {
+  lx: Float64Array[]; // Legendre p, p′, p″ for x
+  ly: Float64Array[];
+  X: Float64Array[]; // basis value, d1, d2 at x
+  Y: Float64Array[];
+}
+const work = new WeakMap<RitzPlate, PointWork>();
+
+function combine(basis: Basis1D, xi: number, jac: number, l: Float64Array[], out: Float64Array[]): void {
+  legendre(basis.degree, xi, l[0], l[1], l[2]);
+  const n = basis.index.length;
+  for (let f = 0; f < n; f++) {
+    const k = basis.index[f];
+    const cf = basis.coef[f];
+    let a0 = 0;
+    let a1 = 0;
+    let a2 = 0;
+    for (let j = 0; j < cf.length; j++) {
+      a0 += cf[j] * l[0][k + j];
+      a1 += cf[j] * l[1][k + j];
+      a2 += cf[j] * l[2][k + j];
+    }
+    out[0][f] = a0;
+    out[1][f] = a1 * jac;
+    out[2][f] = a2 * jac * jac;
+  }
+}
+
+/**
+ * Deflection and moments at one point, allocation-free (for the maximum search):
+ * writes [w, Mx, My, Mxy] (dimensionless as in `plateFieldAt`) into `out`.
+ */
+export function plateAtPoint(sol: RitzPlate, x: number, y: number, out: Float64Array): void {
+  let wk = work.get(sol);
+  if (!wk) {
+    const mk = (n: number) => [new Float64Array(n), new Float64Array(n), new Float64Array(n)];
+    wk = { lx: mk(sol.bx.degree + 1), ly: mk(sol.by.degree + 1), X: mk(sol.bx.index.length), Y: mk(sol.by.index.length) };
+    work.set(sol, wk);
+  }
+  const xi = Math.min(1, Math.max(-1, (2 * x) / sol.aspect - 1));
+  const eta = Math.min(1, Math.max(-1, 2 * y - 1));
+  combine(sol.bx, xi, 2 / sol.aspect, wk.lx, wk.X);
+  combine(sol.by, eta, 2, wk.ly, wk.Y);
+  const nX = sol.bx.index.length;
+  const nY = sol.by.index.length;
+  const [X0, X1, X2] = wk.X;
+  const [Y0, Y1, Y2] = wk.Y;
+  let w = 0;
+  let wxx = 0;
+  let wyy = 0;
+  let wxy = 0;
+  for (let i = 0; i < nX; i++) {
+    let s0 = 0;
+    let s1 = 0;
+    let s2 = 0;
+    const o = i * nY;
+    for (let j = 0; j < nY; j++) {
+      const c = sol.c[o + j];
+      s0 += c * Y0[j];
+      s1 += c * Y1[j];
+      s2 += c * Y2[j];
+    }
+    w += X0[i] * s0;
+    wxx += X2[i] * s0;
+    wyy += X0[i] * s2;
+    wxy += X1[i] * s1;
+  }
+  const nu = sol.poisson;
+  out[0] = w;
+  out[1] = -(wxx + nu * wyy);
+  out[2] = -(wyy + nu * wxx);
+  out[3] = -(1 - nu) * wxy;
+}
