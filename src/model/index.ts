@@ -4,4 +4,5 @@ export * from './defaults';
 export * from './validate';
 export * from './project-file';
 export * from './units';
+export * from './caution';
 export * from './specimens-csv';
