@@ -172,8 +172,11 @@ export function leverArmAt(input: VoussoirInput, n: number): number | null {
 /**
  * Voussoir roof beam, optimised solver (METHODS §3). For each trial n the lever arm is the
  * largest root of z³ − z0²z + K = 0 in closed form (see the file header). The equilibrium n,
- * where fc = γ's²/(4nz) is least, i.e. n·z is greatest, is bracketed on a 10-point scan of n
- * and refined to 1e-7 in n by a safeguarded false-position (Illinois) search for the root of
+ * where fc = γ's²/(4nz) is least, i.e. n·z is greatest, is bracketed by a scan of h = K/Kc at
+ * n = 0.1 … 0.9 (which points have a lever arm) and a walk over those points from n = 0.75 (the
+ * rigid-beam optimum) until d(nz)/dn changes sign — n·z is taken as unimodal over the feasible
+ * window, which the tests check against the 0.01-step sweep on thousands of beams — and
+ * refined to 1e-7 in n by a safeguarded false-position (Illinois) search for the root of
  *     D(n) = d(nz)/dn = z + n·z',   z' = (2z0·z0'·z − K')/(3z² − z0²)   (implicit derivative
  * of the cubic), bisecting wherever a trial n has no lever arm. D → +∞ at the left edge of the
  * feasible window and −∞ at its right edge, so the window always holds the root. Where no scan
