@@ -17,22 +17,22 @@ export function summarise(values: readonly number[]): Summary {
   const n = values.length;
   if (n === 0) throw new RangeError('summarise needs at least one value, got none');
   let sum = 0;
-  values.forEach((v, i) => {
+  for (let i = 0; i < n; i++) {
+    const v = values[i];
     if (!Number.isFinite(v)) throw new RangeError(`values[${i}] must be a finite number, got ${v}`);
     sum += v;
-  });
+  }
   const mean = sum / n;
   let squares = 0;
-  for (const v of values) squares += (v - mean) * (v - mean);
+  for (let i = 0; i < n; i++) squares += (values[i] - mean) * (values[i] - mean);
   const sd = n > 1 ? Math.sqrt(squares / (n - 1)) : 0;
   if (!(sd === 0 || mean > 0)) throw new RangeError(`coefficient of variation needs a mean > 0, got ${mean}`);
   return { n, mean, sd, cov: sd === 0 ? 0 : sd / mean };
 }
 
 /** EN 1990 Annex D Table D1, 5 % fractile, V unknown (from memory). */
-const KN_TABLE: readonly (readonly [number, number])[] = [
-  [3, 3.37], [4, 2.63], [5, 2.33], [6, 2.18], [8, 2.0], [10, 1.92], [20, 1.76], [30, 1.73],
-];
+const KN_N = [3, 4, 5, 6, 8, 10, 20, 30];
+const KN_VALUE = [3.37, 2.63, 2.33, 2.18, 2.0, 1.92, 1.76, 1.73];
 const KN_INFINITE = 1.64;
 
 /**
@@ -46,7 +46,7 @@ export function knLower5(n: number): number | null {
   if (n === Infinity) return KN_INFINITE;
   if (!(n >= 0) || !Number.isInteger(n)) throw new RangeError(`n must be a whole number ≥ 0, got ${n}`);
   let kn: number | null = null;
-  for (const [tabulated, value] of KN_TABLE) if (n >= tabulated) kn = value;
+  for (let i = 0; i < KN_N.length && n >= KN_N[i]; i++) kn = KN_VALUE[i];
   return kn;
 }
 
@@ -66,27 +66,23 @@ export interface Characteristic extends Summary {
  */
 export function characteristicValue(values: readonly number[], rule: CharacteristicRuleName): Characteristic {
   if (rule !== 'mean' && rule !== 'lower5') throw new RangeError(`rule must be "mean" or "lower5", got ${JSON.stringify(rule)}`);
-  const summary = summarise(values);
-  if (rule === 'mean') return { ...summary, value: summary.mean, kn: null };
-  const kn = knLower5(summary.n);
+  const { n, mean, sd, cov } = summarise(values);
+  if (rule === 'mean') return { n, mean, sd, cov, value: mean, kn: null };
+  const kn = knLower5(n);
   if (kn === null) {
     return {
-      ...summary,
-      value: summary.mean,
-      kn: null,
-      warning: `only ${summary.n} result(s): a 5 % fractile needs at least 3 (EN 1990 Annex D); the mean is used`,
+      n, mean, sd, cov, value: mean, kn: null,
+      warning: `only ${n} result(s): a 5 % fractile needs at least 3 (EN 1990 Annex D); the mean is used`,
     };
   }
-  const fractile = summary.mean * (1 - kn * summary.cov);
+  const fractile = mean * (1 - kn * cov);
   if (fractile < 0) {
     return {
-      ...summary,
-      value: 0,
-      kn,
-      warning: `the 5 % fractile m(1 − kn·V) is negative (V = ${summary.cov.toFixed(3)}, kn = ${kn}); taken as 0`,
+      n, mean, sd, cov, value: 0, kn,
+      warning: `the 5 % fractile m(1 − kn·V) is negative (V = ${cov.toFixed(3)}, kn = ${kn}); taken as 0`,
     };
   }
-  return { ...summary, value: fractile, kn };
+  return { n, mean, sd, cov, value: fractile, kn };
 }
 
 // ---------------------------------------------------------------- Student t
