@@ -250,9 +250,13 @@ describe('mixed edges against the Lévy series (written in this test)', () => {
     expect(p.at).toBe('middle of short edge');
   });
 
-  it('sanity bound: mixed-edge deflection lies between all-clamped and all-simple (property over b/a, ν)', () => {
+  // Only up to b/a = 2.5: beyond ≈ 2.8 the all-clamped plate's largest deflection (≈ 1.4 a from a
+  // short edge, where it overshoots the strip by up to 0.5%) passes that of the plate with simple
+  // short edges, which approaches the strip from below. Extra restraint lowers the work of the
+  // load, not necessarily the peak deflection.
+  it('sanity bound: mixed-edge deflection lies between all-clamped and all-simple (property over b/a ≤ 2.5, ν)', () => {
     fc.assert(
-      fc.property(fc.double({ min: 1, max: 4, noNaN: true }), fc.double({ min: 0, max: 0.45, noNaN: true }), (r, nu) => {
+      fc.property(fc.double({ min: 1, max: 2.5, noNaN: true }), fc.double({ min: 0, max: 0.45, noNaN: true }), (r, nu) => {
         const c = plateCoefficients({ aspect: r, edges: 'clamped', poisson: nu }).alpha;
         const s = plateCoefficients({ aspect: r, edges: 'simple', poisson: nu }).alpha;
         const m1 = plateCoefficients({ aspect: r, edges: { longEdges: 'clamped', shortEdges: 'simple' }, poisson: nu }).alpha;
