@@ -81,7 +81,10 @@ export class ChecksTable extends LitElement {
     const byLayer = report.layers.map((_, i) => this.rows.filter((r) => r.layer === i));
     const basis = p.design.basis;
     return html`
-      <p class="verdict" data-role="verdict">${this.verdict}</p>
+      <p class="verdict" data-role="verdict">
+        ${this.verdict}
+        ${report.governing ? html`<span class="note">(governing FS ${tracedNumber('governing.fs', numberText(report.governing.fs, 3), '', report.governing.fs)})</span>` : nothing}
+      </p>
       <p class="note">
         Design basis: <strong>${basis}</strong> —
         ${basis === 'intact'

@@ -10,11 +10,12 @@
 import { LitElement, html, nothing, type PropertyValues } from 'lit';
 import { customElement, property } from 'lit/decorators.js';
 import { unsafeSVG } from 'lit/directives/unsafe-svg.js';
-import type { MaxSpanReport, Mode, Project } from '../../model/types';
+import type { Mode, Project } from '../../model/types';
 import type { UnitSystem } from '../../model/units';
 import type { Analysis, SpanCurve } from '../../analysis/types';
 import { fsSpanSvg } from '../../report/charts';
 import { MODE_NAME } from './check-rows';
+import { adoptableSpan } from './adoptable-span';
 import { displayText, displayValue } from './display-value';
 import { tracedNumber } from './traced-number';
 import { resultsStyles } from './results-styles';
@@ -28,14 +29,6 @@ const WHY_NULL: Record<Mode, string> = {
   snapThrough: 'does not limit the span here',
   deflection: 'does not limit the span here',
 };
-
-/** The span offered by "Use this span": the governing largest span, rounded down to 1 mm. */
-export function adoptableSpan(maxSpan: MaxSpanReport | null | undefined): number | null {
-  const g = maxSpan?.governing;
-  if (g === null || g === undefined || !(g > 0)) return null;
-  const mm = Math.floor(g * 1000 + 1e-9) / 1000;
-  return mm > 0 ? mm : g;
-}
 
 @customElement('span-finder-view')
 export class SpanFinderView extends LitElement {

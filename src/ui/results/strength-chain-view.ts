@@ -92,7 +92,8 @@ export class StrengthChainView extends LitElement {
             Lab results: ${d.lab.source === 'specimens'
               ? html`${d.lab.n} accepted specimen${d.lab.n === 1 ? '' : 's'} of ${d.lab.specimens.length}
                   (${d.lab.method} test${d.lab.method === 'brazilian' ? html`, direct = ${numberText(d.lab.directFactor, 2)} × Brazilian` : ''}),
-                  mean ${displayText(d.lab.mean_MPa, 'stress', u)}, CoV ${d.lab.cov === null ? '—' : numberText(d.lab.cov * 100, 3) + ' %'},
+                  mean ${d.lab.mean_MPa === null ? '—' : tracedNumber(`detail.layers[${i}].lab.mean_MPa`, displayValue(d.lab.mean_MPa, 'stress', u).text, displayValue(d.lab.mean_MPa, 'stress', u).unit, d.lab.mean_MPa)},
+                  CoV ${d.lab.cov === null ? '—' : tracedNumber(`detail.layers[${i}].lab.cov`, numberText(d.lab.cov, 3), '', d.lab.cov)},
                   characteristic value by the ${d.lab.rule === 'mean' ? 'mean' : 'lower 5 % fractile'} rule${d.lab.kn !== null ? html` (kn = ${numberText(d.lab.kn, 3)})` : ''}.`
               : html`a tensile strength given directly (${d.lab.method}).`}
           </p>`
@@ -113,8 +114,12 @@ export class StrengthChainView extends LitElement {
           ${d
             ? html`<tr>
                   <th scope="row">Hoek–Brown mb, s, a</th>
-                  <td class="num">${numberText(d.hoekBrown.mb, 4)}, ${numberText(d.hoekBrown.s, 4)}, ${numberText(d.hoekBrown.a, 4)}</td>
-                  <td class="note">From GSI, mi = ${input ? numberText(input.hoekBrown.mi, 3) : '—'} and D = ${input ? numberText(input.hoekBrown.disturbance, 2) : '—'} (Hoek, Carranza-Torres &amp; Corkum 2002); rock-mass tension = characteristic × s·mi/mb; rock-mass UCS ${displayText(d.hoekBrown.massUcs_MPa, 'stress', u)}.</td>
+                  <td class="num">
+                    ${tracedNumber(`detail.layers[${i}].hoekBrown.mb`, numberText(d.hoekBrown.mb, 4), '', d.hoekBrown.mb)},
+                    ${tracedNumber(`detail.layers[${i}].hoekBrown.s`, numberText(d.hoekBrown.s, 4), '', d.hoekBrown.s)},
+                    ${tracedNumber(`detail.layers[${i}].hoekBrown.a`, numberText(d.hoekBrown.a, 4), '', d.hoekBrown.a)}
+                  </td>
+                  <td class="note">From GSI, mi = ${input ? numberText(input.hoekBrown.mi, 3) : '—'} and D = ${input ? numberText(input.hoekBrown.disturbance, 2) : '—'} (Hoek, Carranza-Torres &amp; Corkum 2002); rock-mass tension = characteristic × s·mi/mb; rock-mass UCS ${tracedNumber(`detail.layers[${i}].hoekBrown.massUcs_MPa`, displayValue(d.hoekBrown.massUcs_MPa, 'stress', u).text, displayValue(d.hoekBrown.massUcs_MPa, 'stress', u).unit, d.hoekBrown.massUcs_MPa)}.</td>
                 </tr>
                 <tr>
                   <th scope="row">Block size</th>

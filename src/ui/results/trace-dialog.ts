@@ -1,0 +1,229 @@
+/**
+ * `<trace-dialog>`: a modal dialog showing how one reported number was calculated — label,
+ * formula (rendered by the report's formula renderer from the same mathjs expression the
+ * analysis evaluated), the substituted values with units (and their US equivalents when US
+ * units are chosen), the result, the source and any note — plus the related entries of the
+ * same layer to step through. Esc or "Close" closes it and focus returns to where it was.
+ *
+ * @fires trace-close - when the dialog closes
+ */
+import { LitElement, css, html, nothing, type PropertyValues } from 'lit';
+import { customElement, property, query, state } from 'lit/decorators.js';
+import type { Report, TraceEntry } from '../../model/types';
+import type { UnitSystem } from '../../model/units';
+import { formulaText, substitutedText } from '../../report/formula-text';
+import { symbolText } from '../../report/symbol-text';
+import { relatedEntries, safeText, valueText } from './trace-entries';
+import { resultsStyles } from './results-styles';
+
+function deepActiveElement(): HTMLElement | null {
+  let el: Element | null = document.activeElement;
+  while (el && el.shadowRoot && el.shadowRoot.activeElement) el = el.shadowRoot.activeElement;
+  return el instanceof HTMLElement ? el : null;
+}
+
+@customElement('trace-dialog')
+export class TraceDialog extends LitElement {
+  static override styles = [
+    resultsStyles,
+    css`
+      dialog {
+        max-width: min(46rem, 94vw);
+        width: 100%;
+        border: 1px solid #000;
+        padding: 1em 1.2em;
+        color: #000;
+        background: #fff;
+      }
+      dialog::backdrop {
+        background: rgba(0, 0, 0, 0.35);
+      }
+      .head {
+        display: flex;
+        justify-content: space-between;
+        align-items: baseline;
+        gap: 1em;
+      }
+      h2 {
+        font-size: 1.15em;
+        margin: 0 0 0.3em;
+      }
+      .formula {
+        font-size: 1.1em;
+        font-family: 'Cambria Math', 'STIX Two Math', 'Times New Roman', serif;
+        margin: 0.3em 0;
+        overflow-wrap: anywhere;
+      }
+      .result {
+        font-weight: 600;
+      }
+      dl {
+        display: grid;
+        grid-template-columns: max-content 1fr;
+        gap: 0.25em 1em;
+        margin: 0.6em 0;
+      }
+      dt {
+        font-weight: 600;
+      }
+      dd {
+        margin: 0;
+      }
+      ol.related {
+        max-height: 14em;
+        overflow: auto;
+        padding-left: 1.6em;
+        margin: 0.3em 0;
+      }
+      ol.related button {
+        font: inherit;
+        background: none;
+        border: none;
+        padding: 0.1em 0;
+        text-align: left;
+        cursor: pointer;
+        color: inherit;
+        text-decoration: underline dotted;
+      }
+      ol.related li[aria-current='true'] button {
+        font-weight: 700;
+        text-decoration: none;
+      }
+      .nav {
+        display: flex;
+        gap: 0.6em;
+        margin-top: 0.8em;
+      }
+    `,
+  ];
+
+  @property({ attribute: false }) report: Report | null = null;
+  @property() path = '';
+  @property() units: UnitSystem = 'SI';
+  @property({ type: Boolean, reflect: true }) open = false;
+
+  /** The entry being shown (starts at `path`, changes when stepping through related entries). */
+  @state() private current = '';
+
+  @query('dialog') private dialog!: HTMLDialogElement;
+
+  private returnFocus: HTMLElement | null = null;
+
+  protected override willUpdate(changed: PropertyValues): void {
+    if (changed.has('path') || (changed.has('open') && this.open)) this.current = this.path;
+  }
+
+  protected override updated(changed: PropertyValues): void {
+    const d = this.dialog;
+    if (!d) return;
+    if (this.open && !d.open) {
+      this.returnFocus = deepActiveElement();
+      d.showModal();
+      (this.renderRoot.querySelector('[data-role="close"]') as HTMLElement | null)?.focus();
+    } else if (!this.open && d.open) {
+      d.close();
+    }
+    if (changed.has('current') && this.open) {
+      const li = this.renderRoot.querySelector('ol.related li[aria-current="true"]');
+      li?.scrollIntoView?.({ block: 'nearest' });
+    }
+  }
+
+  /** Close the dialog (as Esc and the Close button do). */
+  close(): void {
+    this.dialog?.close();
+  }
+
+  private onClose = (): void => {
+    this.open = false;
+    this.dispatchEvent(new CustomEvent('trace-close', { bubbles: true, composed: true }));
+    const target = this.returnFocus;
+    this.returnFocus = null;
+    if (target && target.isConnected) target.focus();
+  };
+
+  private step(delta: number, related: TraceEntry[]): void {
+    const k = related.findIndex((t) => t.path === this.current);
+    const next = related[Math.min(related.length - 1, Math.max(0, (k < 0 ? 0 : k) + delta))];
+    if (next) this.current = next.path;
+  }
+
+  private entryView(entry: TraceEntry) {
+    const u = this.units;
+    const symbols = Object.entries(entry.values);
+    return html`
+      <h2 id="trace-title">${entry.label}</h2>
+      <p class="note"><code data-role="trace-path">${entry.path}</code></p>
+      <p class="formula" data-role="formula">${safeText(() => formulaText(entry.formula), entry.formula)}</p>
+      <p class="formula" data-role="substituted">
+        = ${safeText(() => substitutedText(entry.formula, entry.values), entry.formula)}
+      </p>
+      <p class="formula result" data-role="result">= ${valueText(entry.result, entry.unit, u)}</p>
+      ${symbols.length
+        ? html`<table data-role="values">
+            <caption>Values used</caption>
+            <thead><tr><th scope="col">Symbol</th><th scope="col" class="num">Value</th></tr></thead>
+            <tbody>
+              ${symbols.map(
+                ([name, v]) => html`<tr>
+                  <th scope="row">${safeText(() => symbolText(name), name)} <span class="note">(${name})</span></th>
+                  <td class="num">${valueText(v.value, v.unit, u)}</td>
+                </tr>`,
+              )}
+            </tbody>
+          </table>`
+        : nothing}
+      <dl>
+        <dt>Result</dt>
+        <dd>${valueText(entry.result, entry.unit, u)}</dd>
+        <dt>Source</dt>
+        <dd class="source" data-role="source">${entry.source}</dd>
+        ${entry.note ? html`<dt>Note</dt><dd data-role="note">${entry.note}</dd>` : nothing}
+      </dl>
+    `;
+  }
+
+  override render() {
+    const trace = this.report?.trace ?? [];
+    const entry = trace.find((t) => t.path === this.current);
+    const related = relatedEntries(trace, this.current);
+    const k = related.findIndex((t) => t.path === this.current);
+    return html`<dialog aria-labelledby="trace-title" @close=${this.onClose}>
+      ${this.open
+        ? html`
+            <div class="head">
+              <span class="note">Calculation trace</span>
+              <button type="button" class="action" data-role="close" @click=${() => this.close()}>Close</button>
+            </div>
+            ${entry
+              ? this.entryView(entry)
+              : html`<h2 id="trace-title">No calculation recorded</h2>
+                  <p data-role="missing">
+                    No trace entry exists for <code>${this.current || '(no path)'}</code>: this value is an input or is not
+                    traced by the analysis.
+                  </p>`}
+            ${related.length
+              ? html`<h3>Related steps (${related.length})</h3>
+                  <ol class="related" data-role="related">
+                    ${related.map(
+                      (t) => html`<li aria-current=${t.path === this.current ? 'true' : 'false'}>
+                        <button type="button" data-path=${t.path} @click=${() => (this.current = t.path)}>${t.label}</button>
+                      </li>`,
+                    )}
+                  </ol>
+                  <div class="nav">
+                    <button type="button" class="action" data-role="prev" ?disabled=${k <= 0} @click=${() => this.step(-1, related)}>← Previous</button>
+                    <button type="button" class="action" data-role="next" ?disabled=${k < 0 || k >= related.length - 1} @click=${() => this.step(1, related)}>Next →</button>
+                  </div>`
+              : nothing}
+          `
+        : nothing}
+    </dialog>`;
+  }
+}
+
+declare global {
+  interface HTMLElementTagNameMap {
+    'trace-dialog': TraceDialog;
+  }
+}
