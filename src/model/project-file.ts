@@ -127,7 +127,7 @@ export function locateJsonError(text: string): { position: number; reason: strin
 
 /**
  * Serialise a normalised project with the key order of DESIGN.md, 2-space indent and a
- * trailing newline. `length_m` is written for a slab only (it is `null` otherwise), so
+ * trailing newline. `length_m` is written for a slab only (validation sets it to `null` otherwise), so
  * `readProjectText(writeProjectText(p)).project` deep-equals a validated `p`.
  */
 export function writeProjectText(project: Project): string {
@@ -138,7 +138,7 @@ function orderedProject(p: Project): Record<string, unknown> {
   const out: Record<string, unknown> = { schema: p.schema, title: p.title };
   if (p.description !== undefined) out.description = p.description;
   const opening: Record<string, unknown> = { type: p.opening.type, span_m: p.opening.span_m };
-  if (p.opening.length_m !== null && p.opening.length_m !== undefined) opening.length_m = p.opening.length_m;
+  if (p.opening.type === 'slab' && p.opening.length_m !== null) opening.length_m = p.opening.length_m;
   opening.ends = p.opening.ends;
   out.opening = opening;
   out.loads = {

@@ -300,13 +300,11 @@ class Reader {
 function scanForbidden(value: unknown, path: string, reader: Reader, seen: Set<object>): void {
   if (typeof value !== 'object' || value === null || seen.has(value)) return;
   seen.add(value);
-  if (Array.isArray(value)) {
-    const n = Math.min(value.length, MAX_SPECIMENS + 1);
-    for (let i = 0; i < n; i++) scanForbidden(value[i], `${path}[${i}]`, reader, seen);
-    return;
-  }
+  const isArray = Array.isArray(value);
+  // own names only, so sparse arrays cost what they hold
   for (const key of Object.getOwnPropertyNames(value)) {
-    const p = child(path, key);
+    if (isArray && key === 'length') continue;
+    const p = isArray && /^\d+$/.test(key) ? `${path}[${key}]` : child(path, key);
     if (FORBIDDEN_KEYS.has(key)) {
       reader.error(p, `forbidden key ${JSON.stringify(key)}`, 'FORBIDDEN_KEY');
       continue;

@@ -164,3 +164,14 @@ describe('projectHash — 64-bit FNV-1a of the UTF-8 bytes', () => {
     }));
   });
 });
+
+describe('writeProjectText — length_m', () => {
+  it('writes length_m for a slab and never for a beam or cantilever, even if the object carries one', () => {
+    const slab = defaultProject();
+    slab.opening = { type: 'slab', span_m: 6, length_m: 9, ends: 'simple' };
+    expect(JSON.parse(writeProjectText(slab)).opening.length_m).toBe(9);
+    const beam = defaultProject();
+    beam.opening = { type: 'beam', span_m: 6, length_m: 9, ends: 'clamped' };
+    expect(writeProjectText(beam)).not.toContain('length_m');
+  });
+});

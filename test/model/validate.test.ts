@@ -531,3 +531,19 @@ describe('validateProject — warnings (accepted, flagged)', () => {
     expect(p.design.fsTarget).not.toBe(raw.design.fsTarget);
   });
 });
+
+describe('validateProject — hostile objects passed in (not from JSON)', () => {
+  it('a huge sparse layers array is refused quickly by its length', () => {
+    const raw = complete();
+    raw.layers = new Array(1e9);
+    const t0 = Date.now();
+    expect(errorsOf(raw).map((e) => e.message)).toEqual(['layers: must have at most 100 entries, got 1000000000']);
+    expect(Date.now() - t0).toBeLessThan(1000);
+  });
+
+  it('an own "constructor" key on an array inside the project is refused', () => {
+    const raw = complete();
+    Object.defineProperty(raw.layers, 'constructor', { value: 1, enumerable: false });
+    expect(errorsOf(raw).map((e) => e.path)).toEqual(['layers.constructor']);
+  });
+});
