@@ -50,17 +50,35 @@ export interface StrengthStep {
 export interface LayerDetail {
   lab: LabDetail;
   steps: StrengthStep[];
-  /** Modulus used in the mechanics (after modulusBasis / plane-strain options). */
+  /** Modulus in the elastic beam and layering (after modulusBasis and the plane-strain option). */
   modulusUsed_GPa: number;
+  /** Rock-mass modulus (after modulusBasis), used by the voussoir and the plate. */
+  modulusMass_GPa: number;
   /** Effective unit weight γ' = q/t used by the voussoir. */
   effectiveUnitWeight_kNm3: number;
   hoekBrown: { mb: number; s: number; a: number; massUcs_MPa: number };
   blockSize: { dLab_mm: number; dEffRaw_mm: number; dEff_mm: number; clamped: boolean; factor: number };
+  /** Intermediate voussoir quantities at equilibrium; null for a cantilever, an unloaded layer or after snap-through. */
+  voussoirSteps: { initialLeverArm_m: number; arcLength_m: number; averageStress_MPa: number; shortening_mm: number } | null;
+  /** The fracture frequency actually used for RQD (given, or 1/cross-joint spacing); null when RQD was given or none. */
+  fractureFrequency_per_m: number | null;
+}
+
+export interface GroupDetail {
+  first: number;
+  last: number;
+  /** Σ γ t of the group's layers. */
+  weight_kPa: number;
+  /** Σ E t³ of the group's layers. */
+  stiffness_GPam3: number;
+  /** Surcharge (top group) minus support (group 0) applied to the group. */
+  extra_kPa: number;
 }
 
 export interface Analysis {
   report: Report;
   layers: LayerDetail[];
+  groups: GroupDetail[];
   /** Index pairs [below, above] of adjacent layers predicted to separate (different groups). */
   separations: Array<[number, number]>;
 }

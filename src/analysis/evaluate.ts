@@ -1,0 +1,165 @@
+/**
+ * The numeric core of an analysis: every layer's strength chain, modulus, group, load, elastic
+ * beam, plate and voussoir state at one span, with no trace or formatting. `analyse` builds the
+ * report from it; the span, thickness and chart searches call it (or its parts) many times.
+ */
+import { elasticBeam, type BeamEnds, type BeamResult } from '../mechanics/beam';
+import { groupLayers, shareLoads, type SharedLoads } from '../mechanics/layering';
+import { plateCoefficients, type PlateCoefficients } from '../mechanics/plate';
+import { solveVoussoir, type VoussoirResult } from '../mechanics/voussoir';
+import { rockMassModulus } from '../strength/rock-mass-modulus';
+import { strengthChain, type StrengthChain } from '../strength/chain';
+import type { LayerSI, ProjectSI } from './inputs';
+
+export interface PlateState {
+  coefficients: PlateCoefficients;
+  /** Net maximum tension β q a²/t² − σh, Pa. */
+  maxTension: number;
+  /** α q a⁴/(E t³), m. */
+  deflection: number;
+}
+
+export interface LayerState {
+  chain: StrengthChain;
+  /** Modulus after the modulus basis (rock-mass modulus when the input is intact). */
+  modulusMass: number;
+  /** Modulus in the elastic beam: modulusMass, or modulusMass/(1 − ν²) with the plane-strain option. */
+  modulusBeam: number;
+  group: number;
+  /** Load carried by the layer, Pa. */
+  load: number;
+  beam: BeamResult;
+  plate: PlateState | null;
+  /** Net maximum tension used for FS tension (plate for a slab), Pa. */
+  maxTension: number;
+  /**
+   * FS tension; null where it does not apply (cross-jointed roof beam: the voussoir governs;
+   * no net tension). A cross-jointed cantilever has no capacity at all: FS 0.
+   */
+  fsTension: number | null;
+  fsTensionNote: 'crossJointed' | 'noNetTension' | 'jointedOverhang' | null;
+  /** Effective unit weight γ' = q/t, N/m³. */
+  effectiveUnitWeight: number;
+  /** null for a cantilever, or when the layer carries no net downward load. */
+  voussoir: VoussoirResult | null;
+}
+
+export interface State {
+  span: number;
+  ends: BeamEnds;
+  shared: SharedLoads;
+  layers: LayerState[];
+}
+
+export function beamEnds(p: ProjectSI): BeamEnds {
+  return p.type === 'cantilever' ? 'cantilever' : p.ends;
+}
+
+export function chainFor(layer: LayerSI, span: number, p: ProjectSI): StrengthChain {
+  return strengthChain({
+    specimens: layer.specimens,
+    value: layer.tensileValue,
+    method: layer.tensileMethod,
+    rockClass: layer.rockClass,
+    characteristic: p.design.characteristic,
+    thickness: layer.thickness,
+    span,
+    crossJointSpacing: layer.crossJointSpacing,
+    fractureFrequency: layer.fractureFrequency,
+    rqd: layer.rqd,
+    jointCondition: layer.jointCondition,
+    ucs: layer.ucs,
+    mi: layer.mi,
+    disturbance: layer.disturbance,
+  });
+}
+
+export function moduliFor(layer: LayerSI, chain: StrengthChain, p: ProjectSI): { mass: number; beam: number } {
+  const mass = layer.modulusBasis === 'intact' ? rockMassModulus(layer.modulus, chain.gsi, layer.disturbance) : layer.modulus;
+  const beam = p.design.planeStrainModulus ? mass / (1 - layer.poisson * layer.poisson) : mass;
+  return { mass, beam };
+}
+
+/** β, α for a slab; the aspect ratio is the project's, held fixed when the span varies (METHODS §11). */
+export function plateFor(p: ProjectSI, poisson: number): PlateCoefficients | null {
+  if (p.type !== 'slab' || p.length === null) return null;
+  return plateCoefficients({ aspect: p.length / p.span, edges: p.ends, poisson });
+}
+
+export interface EvaluateOptions {
+  /** Span to evaluate at (default: the project's). */
+  span?: number;
+  /** Strength chains to hold fixed (the current-span values), instead of recomputing. */
+  chains?: StrengthChain[];
+  /** Solve the voussoir only for this layer (design-chart cells); others get null. */
+  voussoirOnly?: number;
+}
+
+export function voussoirFor(layer: LayerSI, span: number, thickness: number, effectiveUnitWeight: number, modulus: number): VoussoirResult | null {
+  if (!(effectiveUnitWeight > 0)) return null;
+  return solveVoussoir({
+    span,
+    thickness,
+    unitWeight: effectiveUnitWeight,
+    modulus,
+    ucs: layer.ucs,
+    frictionDeg: layer.jointFriction,
+  });
+}
+
+export function evaluate(p: ProjectSI, options: EvaluateOptions = {}): State {
+  const span = options.span ?? p.span;
+  const ends = beamEnds(p);
+  const chains = options.chains ?? p.layers.map((layer) => chainFor(layer, span, p));
+  const moduli = p.layers.map((layer, i) => moduliFor(layer, chains[i], p));
+  const beds = p.layers.map((layer, i) => ({ unitWeight: layer.unitWeight, thickness: layer.thickness, modulus: moduli[i].beam }));
+  const groups = groupLayers(beds);
+  const shared = shareLoads(beds, groups, p.surcharge, p.support);
+  const layers = p.layers.map((layer, i): LayerState => {
+    const chain = chains[i];
+    const load = shared.loads[i];
+    const t = layer.thickness;
+    const beam = elasticBeam({ ends, span, thickness: t, load, modulus: moduli[i].beam, horizontalStress: p.horizontalStress });
+    const coefficients = plateFor(p, layer.poisson);
+    const plate: PlateState | null = coefficients
+      ? {
+          coefficients,
+          maxTension: (coefficients.beta * load * span * span) / (t * t) - p.horizontalStress,
+          deflection: (coefficients.alpha * load * span ** 4) / (moduli[i].mass * t ** 3),
+        }
+      : null;
+    const maxTension = plate ? plate.maxTension : beam.maxTension;
+    let fsTension: number | null;
+    let fsTensionNote: LayerState['fsTensionNote'] = null;
+    if (chain.crossJointed && ends === 'cantilever') {
+      fsTension = 0;
+      fsTensionNote = 'jointedOverhang';
+    } else if (chain.crossJointed) {
+      fsTension = null;
+      fsTensionNote = 'crossJointed';
+    } else if (!(maxTension > 0)) {
+      fsTension = null;
+      fsTensionNote = 'noNetTension';
+    } else {
+      fsTension = chain.design / maxTension;
+    }
+    const effectiveUnitWeight = load / t;
+    const wantVoussoir = ends !== 'cantilever' && (options.voussoirOnly === undefined || options.voussoirOnly === i);
+    const voussoir = wantVoussoir ? voussoirFor(layer, span, t, effectiveUnitWeight, moduli[i].mass) : null;
+    return {
+      chain,
+      modulusMass: moduli[i].mass,
+      modulusBeam: moduli[i].beam,
+      group: groups[i],
+      load,
+      beam,
+      plate,
+      maxTension,
+      fsTension,
+      fsTensionNote,
+      effectiveUnitWeight,
+      voussoir,
+    };
+  });
+  return { span, ends, shared, layers };
+}

@@ -1,0 +1,24 @@
+/** The bending-stress field over a slab, scaled from the plate solution's coefficient field. */
+import type { Project } from '../model/types';
+import { plateCoefficients } from '../mechanics/plate';
+import { projectToSI } from './inputs';
+import type { Analysis, SlabField } from './types';
+
+export function slabField(project: Project, analysis: Analysis, layerIndex: number): SlabField | null {
+  const p = projectToSI(project);
+  if (p.type !== 'slab' || p.length === null) return null;
+  const layer = p.layers[layerIndex];
+  const lr = analysis.report.layers[layerIndex];
+  if (!layer || !lr) throw new RangeError(`layer index ${layerIndex} is out of range (0..${p.layers.length - 1})`);
+  const c = plateCoefficients({ aspect: p.length / p.span, edges: p.ends, poisson: layer.poisson });
+  const scale = (lr.load_kPa * 1e3 * p.span * p.span) / (layer.thickness * layer.thickness);
+  const f = c.field;
+  return {
+    layer: layerIndex,
+    x_m: f.x.map((x) => x * p.span),
+    y_m: f.y.map((y) => y * p.span),
+    stress_MPa: f.values.map((v) => (v * scale - p.horizontalStress) * 1e-6),
+    maxTension_MPa: lr.plate ? lr.plate.maxTension_MPa : (c.beta * scale - p.horizontalStress) * 1e-6,
+    at: c.at,
+  };
+}

@@ -1,0 +1,26 @@
+/**
+ * Minimum thickness of one layer for the current span and targets (METHODS §11, extended):
+ * the smallest t with every applicable check meeting its target, all else fixed (the strength
+ * chain, layering and loads recomputed for each trial thickness), scanned upward then bisected.
+ */
+import type { Project } from '../model/types';
+import { smallestPassingValue } from '../mechanics/span-search';
+import { governingCheck, layerChecks } from './checks';
+import { withThickness } from './design-chart';
+import { evaluate } from './evaluate';
+import { projectToSI } from './inputs';
+
+export const THICKNESS_MIN_M = 0.01;
+export const THICKNESS_TOLERANCE_M = 1e-3;
+
+export function minimumThickness(project: Project, layerIndex: number): number | null {
+  const p = projectToSI(project);
+  if (!(layerIndex >= 0 && layerIndex < p.layers.length)) throw new RangeError(`layer index ${layerIndex} is out of range (0..${p.layers.length - 1})`);
+  const hi = Math.max(20, 3 * p.layers[layerIndex].thickness);
+  const ratio = (t: number): number => {
+    const state = evaluate(withThickness(p, layerIndex, t));
+    const g = governingCheck(layerChecks(state, p.design));
+    return g === null ? 1e12 : g.ratio;
+  };
+  return smallestPassingValue(ratio, THICKNESS_MIN_M, hi, { tolerance: THICKNESS_TOLERANCE_M });
+}

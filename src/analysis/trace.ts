@@ -1,0 +1,45 @@
+/**
+ * The calculation trace: for every reported number, the formula as a mathjs expression over
+ * named symbols, the substituted values with their units, the result with its unit, and the
+ * published source. Evaluating `formula` with the values (as mathjs units) reproduces `result`
+ * (a test checks this for every entry), so the trace cannot drift from the computation.
+ */
+import type { TraceEntry } from '../model/types';
+
+export type TraceValues = Record<string, [number, string]>;
+
+export class TraceBuilder {
+  readonly entries: TraceEntry[] = [];
+
+  add(path: string, label: string, formula: string, values: TraceValues, result: number, unit: string, source: string, note?: string): void {
+    const entry: TraceEntry = {
+      path,
+      label,
+      formula,
+      values: Object.fromEntries(Object.entries(values).map(([k, [value, u]]) => [k, { value, unit: u }])),
+      result,
+      unit,
+      source,
+    };
+    if (note) entry.note = note;
+    this.entries.push(entry);
+  }
+}
+
+export const SOURCES = {
+  obertDuvall: 'Obert & Duvall (1967), Rock Mechanics and the Design of Structures in Rock',
+  brazilian: 'ISRM Suggested Method (1978); ASTM D3967',
+  perras: 'Perras & Diederichs (2014), Geotech Geol Eng 32:525–546',
+  en1990: 'EN 1990 Annex D, Table D1 (V unknown)',
+  statistics: 'Sample statistics',
+  sizeEffect: 'Hoek & Brown (1980), Underground Excavations in Rock',
+  priestHudson: 'Priest & Hudson (1976)',
+  gsi: 'Hoek, Carter & Diederichs (2013), 47th US Rock Mechanics Symposium',
+  hoekBrown: 'Hoek, Carranza-Torres & Corkum (2002)',
+  hoekDiederichs: 'Hoek & Diederichs (2006)',
+  crossJoint: 'Common practice: a jointed mass has no tensile strength across its joints',
+  voussoir: 'Diederichs & Kaiser (1999), IJRMMS 36:97–117; Brady & Brown, Rock Mechanics for Underground Mining, §8.4',
+  plate: 'Kirchhoff thin-plate theory (Timoshenko & Woinowsky-Krieger 1959); Lamina Ritz solution',
+  euler: 'Euler buckling of a strut, as used by Obert & Duvall (1967)',
+  lamina: 'Lamina (METHODS §10–§11)',
+} as const;
