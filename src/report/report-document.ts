@@ -1,0 +1,71 @@
+/**
+ * Builds the one structured report model from a project and its analysis; Markdown, HTML and
+ * the app all render this model. Sections, in order: header (with the caution), verdict,
+ * inputs, strength chain, checks, calculation trace, assumptions and warnings, charts, and the
+ * caution again at the end.
+ *
+ *     const doc = buildReportDocument({ project, analysis, curve, units: 'SI', version: '0.1.0' });
+ *     renderMarkdown(doc); renderHtml(doc);
+ */
+import type { Analysis, SpanCurve } from '../analysis/types';
+import { projectHash, writeProjectText } from '../model/project-file';
+import type { Project } from '../model/types';
+import type { UnitSystem } from '../model/units';
+import { checkRows } from './check-rows';
+import type { ReportDocument } from './document-types';
+import { assumptionsSection } from './sections/assumptions';
+import { chartsSection } from './sections/charts';
+import { checksSection } from './sections/checks';
+import type { SectionContext } from './sections/context';
+import { closingSection, headerSection } from './sections/header';
+import { inputsSection } from './sections/inputs';
+import { strengthSection } from './sections/strength';
+import { traceSection } from './sections/trace';
+import { verdictSection } from './sections/verdict';
+
+export interface ReportInput {
+  project: Project;
+  analysis: Analysis;
+  curve?: SpanCurve | null;
+  /** The project file's text as read (hashed for the header); defaults to writeProjectText(project). */
+  projectText?: string;
+  units: UnitSystem;
+  /** Report date; defaults to today (ISO date, UTC). */
+  date?: string;
+  /** Lamina version (the CLI/app read it from package.json). */
+  version?: string;
+}
+
+export function buildReportDocument(input: ReportInput): ReportDocument {
+  const { project, analysis, units } = input;
+  if (units !== 'SI' && units !== 'US') throw new RangeError(`units must be "SI" or "US", got ${JSON.stringify(units)}`);
+  const ctx: SectionContext = {
+    project,
+    analysis,
+    curve: input.curve ?? null,
+    units,
+    rows: checkRows(project, analysis.report),
+  };
+  const meta = {
+    date: input.date ?? new Date().toISOString().slice(0, 10),
+    version: input.version ?? 'unknown',
+    hash: projectHash(input.projectText ?? writeProjectText(project)),
+    units,
+  };
+  return {
+    schema: 'lamina-report-document/1',
+    title: `Lamina roof check — ${project.title}`,
+    meta,
+    sections: [
+      headerSection(ctx, meta),
+      verdictSection(ctx),
+      inputsSection(ctx),
+      strengthSection(ctx),
+      checksSection(ctx),
+      traceSection(ctx),
+      assumptionsSection(ctx),
+      chartsSection(ctx),
+      closingSection(),
+    ],
+  };
+}

@@ -1,0 +1,140 @@
+/** Section 5: checks per layer and mode, the layer results behind them and the largest spans. */
+import type { Mode } from '../../model/types';
+import type { Block, Cell, Section } from '../document-types';
+import { MODE_LABEL, type CheckRow } from '../check-rows';
+import { fsText, quantityText, titleWithUnit } from '../format';
+import { MISSING, numberText } from '../number-text';
+import { STATUS_LEGEND } from '../status';
+import { nCell, qCell, textCell } from './cells';
+import type { SectionContext } from './context';
+import { governingSentence } from './verdict';
+
+function amount(row: CheckRow, value: number | null, ctx: SectionContext): Cell {
+  if (value === null || row.kind === 'none') return { text: MISSING, value: null, numeric: true };
+  if (row.kind === 'ratio') return { text: `δ/t = ${numberText(value, 3)}`, value, numeric: true };
+  return { text: quantityText(value, 'stress', ctx.units), value, numeric: true };
+}
+
+export function checkRowCells(row: CheckRow, ctx: SectionContext): Cell[] {
+  return [
+    textCell(row.governing ? `${row.label} (governing)` : row.label),
+    amount(row, row.demand, ctx),
+    amount(row, row.capacity, ctx),
+    { text: row.mode === 'snapThrough' && row.fs !== null ? (row.fs > 0 ? 'stands (1)' : 'snaps (0)') : fsText(row.fs), value: row.fs, numeric: true },
+    { text: numberText(row.target, 3), value: row.target, numeric: true },
+    { text: row.status.text, status: row.status.kind },
+    textCell(row.note),
+  ];
+}
+
+const SPAN_NOTE: Record<Mode | 'governing', string> = {
+  tension: 'layers not cross-jointed at the current span; strengths held at current-span values',
+  crushing: 'arch thrust reaches UCS / target',
+  sliding: 'FS sliding rises with span, so sliding never limits the span from above',
+  snapThrough: 'largest span at which an arch still forms',
+  deflection: 'δ/t reaches the limit',
+  governing: 'smallest of the counted modes',
+};
+
+export function checksSection(ctx: SectionContext): Section {
+  const { analysis, units, project } = ctx;
+  const report = analysis.report;
+  const blocks: Block[] = [];
+  blocks.push({ kind: 'paragraph', strong: true, text: governingSentence(ctx) });
+  blocks.push({ kind: 'list', items: STATUS_LEGEND.map((s) => `${s.text}: ${s.meaning}`) });
+
+  report.layers.forEach((layer, i) => {
+    blocks.push({ kind: 'heading', level: 3, text: `Layer ${i + 1}: ${layer.name}` });
+    blocks.push({
+      kind: 'table',
+      caption: `Checks of layer ${i + 1}`,
+      columns: [{ title: 'Mode' }, { title: 'Demand' }, { title: 'Capacity' }, { title: 'FS', numeric: true }, { title: 'Target', numeric: true }, { title: 'Status' }, { title: 'Note' }],
+      rows: ctx.rows.filter((r) => r.layerIndex === i).map((r) => checkRowCells(r, ctx)),
+    });
+  });
+
+  blocks.push({ kind: 'heading', level: 3, text: 'Intact beam results' });
+  blocks.push({
+    kind: 'table',
+    caption: 'Elastic beam per layer (net of horizontal stress, tension positive)',
+    columns: [
+      { title: 'Layer' }, { title: 'Group', numeric: true },
+      { title: titleWithUnit('Load carried', 'pressure', units), numeric: true },
+      { title: titleWithUnit('Abutment/root tension', 'stress', units), numeric: true },
+      { title: titleWithUnit('Midspan tension', 'stress', units), numeric: true },
+      { title: titleWithUnit('Max tension', 'stress', units), numeric: true },
+      { title: 'At' },
+      { title: titleWithUnit('Deflection', 'deflection', units), numeric: true },
+      { title: titleWithUnit('Euler stress', 'stress', units), numeric: true },
+    ],
+    rows: report.layers.map((l, i): Cell[] => [
+      textCell(`${i + 1} ${l.name}`), nCell(l.group + 1, 3), qCell(l.load_kPa, 'pressure', units),
+      qCell(l.elastic.abutmentTension_MPa, 'stress', units), qCell(l.elastic.midspanTension_MPa, 'stress', units),
+      qCell(l.elastic.maxTension_MPa, 'stress', units), textCell(l.elastic.at),
+      qCell(l.elastic.deflection_mm, 'deflection', units), qCell(l.elastic.bucklingStress_MPa, 'stress', units),
+    ]),
+  });
+
+  if (report.layers.some((l) => l.voussoir !== null)) {
+    blocks.push({ kind: 'heading', level: 3, text: 'Voussoir (cracked beam) results' });
+    if (project.opening.type === 'slab') {
+      blocks.push({ kind: 'paragraph', text: 'For a slab the voussoir uses the short span in plane strain (conservative).' });
+    }
+    blocks.push({
+      kind: 'table',
+      caption: 'Voussoir arch per layer (Diederichs & Kaiser 1999)',
+      columns: [
+        { title: 'Layer' }, { title: 'n (zone depth / t)', numeric: true },
+        { title: titleWithUnit('Lever arm z', 'length', units), numeric: true },
+        { title: titleWithUnit('Max compression fc', 'stress', units), numeric: true },
+        { title: titleWithUnit('Midspan deflection δ', 'deflection', units), numeric: true },
+        { title: 'δ/t', numeric: true }, { title: 'Snap-through' },
+      ],
+      rows: report.layers.map((l, i): Cell[] => {
+        const v = l.voussoir;
+        if (v === null) return [textCell(`${i + 1} ${l.name}`), nCell(null), nCell(null), nCell(null), nCell(null), nCell(null), textCell('n/a (cantilever)')];
+        return [
+          textCell(`${i + 1} ${l.name}`), nCell(v.n, 3), qCell(v.leverArm_m, 'length', units), qCell(v.maxCompression_MPa, 'stress', units),
+          qCell(v.deflection_mm, 'deflection', units), nCell(v.deflectionRatio, 3), textCell(v.snapThrough ? 'yes ✗' : 'no ✓'),
+        ];
+      }),
+    });
+  }
+
+  if (report.layers.some((l) => l.plate !== null)) {
+    blocks.push({ kind: 'heading', level: 3, text: 'Roof slab (plate) results' });
+    blocks.push({
+      kind: 'table',
+      caption: 'Rectangular plate per layer, σ = β·q·a²/t², w = α·q·a⁴/(E·t³)',
+      columns: [
+        { title: 'Layer' }, { title: titleWithUnit('Max tension', 'stress', units), numeric: true }, { title: 'At' },
+        { title: titleWithUnit('Deflection', 'deflection', units), numeric: true }, { title: 'β', numeric: true }, { title: 'α', numeric: true },
+      ],
+      rows: report.layers.map((l, i): Cell[] => {
+        const p = l.plate;
+        if (p === null) return [textCell(`${i + 1} ${l.name}`), nCell(null), textCell('—'), nCell(null), nCell(null), nCell(null)];
+        return [textCell(`${i + 1} ${l.name}`), qCell(p.maxTension_MPa, 'stress', units), textCell(p.at), qCell(p.deflection_mm, 'deflection', units), nCell(p.beta, 4), nCell(p.alpha, 4)];
+      }),
+    });
+  }
+
+  blocks.push({ kind: 'heading', level: 3, text: 'Largest span per mode' });
+  const spans = report.maxSpan_m;
+  if (spans === null) {
+    blocks.push({ kind: 'paragraph', text: 'No span search was run for this project.' });
+  } else {
+    const modes: Array<Mode | 'governing'> = ['tension', 'crushing', 'sliding', 'snapThrough', 'deflection', 'governing'];
+    blocks.push({
+      kind: 'table',
+      caption: `Largest span meeting the target (searched up to 100 m; current span ${quantityText(project.opening.span_m, 'length', units)})`,
+      columns: [{ title: 'Mode' }, { title: titleWithUnit('Largest span', 'length', units), numeric: true }, { title: 'Note' }],
+      rows: modes.map((m): Cell[] => {
+        const value = spans[m];
+        const label = m === 'governing' ? 'governing (all counted modes)' : MODE_LABEL[m];
+        const note = value === null ? (m === 'sliding' ? SPAN_NOTE.sliding : 'the mode does not apply') : value >= 100 ? 'target holds up to the 100 m search cap' : SPAN_NOTE[m];
+        return [textCell(label), qCell(value, 'length', units), textCell(note)];
+      }),
+    });
+  }
+  return { id: 'checks', title: 'Checks', blocks };
+}

@@ -1,0 +1,19 @@
+/** What every section builder receives: the inputs, the shared check rows and the unit system. */
+import type { Analysis, SpanCurve } from '../../analysis/types';
+import type { Project } from '../../model/types';
+import type { UnitSystem } from '../../model/units';
+import type { CheckRow } from '../check-rows';
+
+export interface SectionContext {
+  project: Project;
+  analysis: Analysis;
+  curve: SpanCurve | null;
+  units: UnitSystem;
+  rows: CheckRow[];
+}
+
+/** "layer 2 “Sandstone”" — how the report names a layer in a sentence. */
+export function layerName(ctx: SectionContext, index: number): string {
+  const name = ctx.analysis.report.layers[index]?.name ?? ctx.project.layers[index]?.name ?? '';
+  return `layer ${index + 1} “${name}”`;
+}

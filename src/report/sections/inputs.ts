@@ -1,0 +1,140 @@
+/** Section 3: the inputs — opening, loads, strata, lab specimens, targets and options. */
+import type { Block, Cell, Section } from '../document-types';
+import { quantityText, titleWithUnit } from '../format';
+import { numberText } from '../number-text';
+import { nCell, qCell, textCell } from './cells';
+import type { SectionContext } from './context';
+
+const OPENING_TEXT = {
+  beam: 'long opening (plane-strain beam)',
+  slab: 'rectangular roof slab (plate)',
+  cantilever: 'overhang (cantilever)',
+} as const;
+
+export function inputsSection(ctx: SectionContext): Section {
+  const { project, units, analysis } = ctx;
+  const o = project.opening;
+  const blocks: Block[] = [];
+
+  blocks.push({ kind: 'heading', level: 3, text: 'Opening and loads' });
+  blocks.push({
+    kind: 'keyValue',
+    items: [
+      { key: 'Opening', value: OPENING_TEXT[o.type] },
+      { key: o.type === 'cantilever' ? 'Overhang length' : o.type === 'slab' ? 'Span (short side)' : 'Span', value: quantityText(o.span_m, 'length', units) },
+      ...(o.type === 'slab' ? [{ key: 'Length (long side)', value: quantityText(o.length_m, 'length', units) }] : []),
+      { key: 'Ends', value: o.type === 'cantilever' ? 'fixed root, free tip' : o.ends === 'clamped' ? 'clamped (built-in)' : 'simply supported' },
+      { key: 'Surcharge on top of the analysed strata', value: quantityText(project.loads.surcharge_kPa, 'pressure', units) },
+      { key: 'Support pressure (upward)', value: quantityText(project.loads.support_kPa, 'pressure', units) },
+      { key: 'Horizontal stress along the span (compression +)', value: quantityText(project.loads.horizontalStress_MPa, 'stress', units) },
+    ],
+  });
+
+  blocks.push({ kind: 'heading', level: 3, text: 'Strata (layer 1 is the immediate roof)' });
+  blocks.push({
+    kind: 'table',
+    caption: 'Strata: geometry and stiffness',
+    columns: [
+      { title: 'Layer' }, { title: 'Name' },
+      { title: titleWithUnit('Thickness', 'length', units), numeric: true },
+      { title: titleWithUnit('Unit weight', 'unitWeight', units), numeric: true },
+      { title: titleWithUnit('Young’s modulus E', 'modulus', units), numeric: true },
+      { title: 'Modulus basis' },
+      { title: 'Poisson ratio ν', numeric: true },
+      { title: titleWithUnit('UCS', 'stress', units), numeric: true },
+      { title: 'Rock class' },
+    ],
+    rows: project.layers.map((l, i): Cell[] => [
+      nCell(i + 1, 3), textCell(l.name), qCell(l.thickness_m, 'length', units), qCell(l.unitWeight_kNm3, 'unitWeight', units),
+      qCell(l.youngModulus_GPa, 'modulus', units), textCell(l.modulusBasis === 'mass' ? 'rock mass (as given)' : 'intact (reduced with GSI)'),
+      nCell(l.poisson, 3), qCell(l.ucs_MPa, 'stress', units), textCell(l.rockClass),
+    ]),
+  });
+  blocks.push({
+    kind: 'table',
+    caption: 'Strata: tensile input, jointing and Hoek–Brown',
+    columns: [
+      { title: 'Layer' },
+      { title: titleWithUnit('Tensile value', 'stress', units), numeric: true },
+      { title: 'Test method' },
+      { title: 'Specimens', numeric: true },
+      { title: titleWithUnit('Cross-joint spacing', 'length', units), numeric: true },
+      { title: 'Fracture frequency (1/m)', numeric: true },
+      { title: 'RQD given (%)', numeric: true },
+      { title: 'JCond89', numeric: true },
+      { title: 'Joint friction φ (°)', numeric: true },
+      { title: 'Hoek–Brown mi', numeric: true },
+      { title: 'Disturbance D', numeric: true },
+    ],
+    rows: project.layers.map((l, i): Cell[] => [
+      nCell(i + 1, 3), qCell(l.tensile.value_MPa, 'stress', units), textCell(l.tensile.method), nCell(l.tensile.specimens.length, 6),
+      l.jointing.crossJointSpacing_m === null ? textCell('none seen') : qCell(l.jointing.crossJointSpacing_m, 'length', units),
+      nCell(l.jointing.fractureFrequency_per_m), nCell(l.jointing.rqd), nCell(l.jointing.jointCondition), nCell(l.jointing.jointFriction_deg),
+      nCell(l.hoekBrown.mi), nCell(l.hoekBrown.disturbance),
+    ]),
+  });
+
+  blocks.push({ kind: 'heading', level: 3, text: 'Laboratory tensile tests' });
+  project.layers.forEach((layer, i) => {
+    const lab = analysis.layers[i]?.lab;
+    if (!lab) return;
+    blocks.push({ kind: 'heading', level: 4, text: `Layer ${i + 1}: ${layer.name}` });
+    if (lab.source === 'value') {
+      blocks.push({
+        kind: 'paragraph',
+        text: `No specimens: the given ${lab.method === 'brazilian' ? 'Brazilian' : 'direct'} tensile strength of ${quantityText(layer.tensile.value_MPa, 'stress', units)} is used as the characteristic lab value.`,
+      });
+    } else {
+      blocks.push({
+        kind: 'table',
+        caption: `Specimens of layer ${i + 1}`,
+        columns: [
+          { title: 'ID' },
+          { title: titleWithUnit('Diameter D', 'smallLength', units), numeric: true },
+          { title: titleWithUnit('Thickness L', 'smallLength', units), numeric: true },
+          { title: 'L/D', numeric: true },
+          { title: titleWithUnit('Peak load P', 'force', units), numeric: true },
+          { title: titleWithUnit('Brazilian 2P/(πDL)', 'stress', units), numeric: true },
+          { title: titleWithUnit('Direct', 'stress', units), numeric: true },
+          { title: 'Used' },
+          { title: 'Why not used / remarks' },
+        ],
+        rows: lab.specimens.map((s): Cell[] => [
+          textCell(s.id), qCell(s.diameter_mm, 'smallLength', units), qCell(s.thickness_mm, 'smallLength', units),
+          nCell(s.diameter_mm > 0 ? s.thickness_mm / s.diameter_mm : null, 3), qCell(s.peakLoad_kN, 'force', units),
+          qCell(s.brazilian_MPa, 'stress', units), qCell(s.direct_MPa, 'stress', units),
+          textCell(s.accepted ? 'yes ✓' : 'no ✗'),
+          textCell([s.reason ?? '', ...s.warnings].filter((x) => x).join('; ') || '—'),
+        ]),
+      });
+    }
+    const rule = lab.rule === 'mean' ? 'mean' : `lower 5 % fractile m(1 − kn·V)${lab.kn !== null ? `, kn = ${numberText(lab.kn, 3)}` : ''}`;
+    blocks.push({
+      kind: 'keyValue',
+      items: [
+        { key: 'Specimens used', value: numberText(lab.n, 6) },
+        { key: 'Mean (direct)', value: quantityText(lab.mean_MPa, 'stress', units) },
+        { key: 'Standard deviation', value: quantityText(lab.sd_MPa, 'stress', units) },
+        { key: 'Coefficient of variation V', value: numberText(lab.cov, 3) },
+        { key: 'Direct/Brazilian factor', value: numberText(lab.directFactor, 3) },
+        { key: 'Characteristic value', value: `${quantityText(lab.characteristic_MPa, 'stress', units)} (${rule})` },
+      ],
+    });
+  });
+
+  const d = project.design;
+  blocks.push({ kind: 'heading', level: 3, text: 'Targets and options' });
+  blocks.push({
+    kind: 'keyValue',
+    items: [
+      { key: 'FS target, tension', value: numberText(d.fsTarget.tension, 4) },
+      { key: 'FS target, crushing', value: numberText(d.fsTarget.crushing, 4) },
+      { key: 'FS target, sliding', value: numberText(d.fsTarget.sliding, 4) },
+      { key: 'Deflection limit δ/t', value: numberText(d.deflectionLimitRatio, 4) },
+      { key: 'Characteristic value', value: d.characteristic === 'mean' ? 'mean of the specimens' : 'lower 5 % fractile (EN 1990 Annex D)' },
+      { key: 'Design basis', value: d.basis === 'intact' ? 'intact: the beam must not crack' : 'jointed: the roof is taken as cracked' },
+      { key: 'Plane-strain modulus E/(1−ν²)', value: d.planeStrainModulus ? 'used in deflection and Euler stress' : 'not used (E as given)' },
+    ],
+  });
+  return { id: 'inputs', title: 'Inputs', blocks };
+}

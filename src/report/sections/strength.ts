@@ -1,0 +1,46 @@
+/** Section 4: the strength chain of each layer, step by step with formulas and sources. */
+import type { Block, Cell, Section } from '../document-types';
+import { quantityText, titleWithUnit } from '../format';
+import { numberText } from '../number-text';
+import { traceBlock } from '../trace-block';
+import { qCell, textCell } from './cells';
+import type { SectionContext } from './context';
+
+export function strengthSection(ctx: SectionContext): Section {
+  const { analysis, units } = ctx;
+  const blocks: Block[] = [];
+  analysis.report.layers.forEach((layer, i) => {
+    const detail = analysis.layers[i];
+    blocks.push({ kind: 'heading', level: 3, text: `Layer ${i + 1}: ${layer.name}` });
+    if (detail) {
+      blocks.push({
+        kind: 'table',
+        caption: `Strength chain of layer ${i + 1}`,
+        columns: [{ title: 'Step' }, { title: titleWithUnit('Tensile strength', 'stress', units), numeric: true }, { title: 'Why' }, { title: 'Source' }],
+        rows: detail.steps.map((s): Cell[] => [textCell(s.label), qCell(s.value_MPa, 'stress', units), textCell(s.reason), textCell(s.source)]),
+      });
+      const b = detail.blockSize;
+      const hb = detail.hoekBrown;
+      blocks.push({
+        kind: 'keyValue',
+        items: [
+          { key: 'RQD', value: `${numberText(layer.strength.rqd, 4)} %` },
+          { key: 'GSI', value: numberText(layer.strength.gsi, 4) },
+          { key: 'Hoek–Brown mb, s, a', value: `${numberText(hb.mb, 4)}, ${numberText(hb.s, 4)}, ${numberText(hb.a, 4)}` },
+          { key: 'Rock-mass UCS σci·s^a', value: quantityText(hb.massUcs_MPa, 'stress', units) },
+          {
+            key: 'Size effect',
+            value: `d_lab ${quantityText(b.dLab_mm, 'smallLength', units)}, d_eff ${quantityText(b.dEff_mm, 'smallLength', units)}` +
+              `${b.clamped ? ` (clamped from ${quantityText(b.dEffRaw_mm, 'smallLength', units)} to the 10–200 mm range of the fit and ≥ d_lab)` : ''}, factor ${numberText(b.factor, 4)}`,
+          },
+          { key: 'Modulus used in the mechanics', value: quantityText(detail.modulusUsed_GPa, 'modulus', units) },
+          { key: 'Cross-jointed at this span', value: layer.strength.crossJointed ? 'yes — no tensile strength across the joints (design = 0)' : 'no' },
+          { key: 'Design tensile strength', value: quantityText(layer.strength.design_MPa, 'stress', units) },
+        ],
+      });
+    }
+    const prefix = `layers[${i}].strength.`;
+    for (const entry of analysis.report.trace) if (entry.path.startsWith(prefix)) blocks.push(traceBlock(entry, units));
+  });
+  return { id: 'strength', title: 'Strength chain', blocks };
+}
