@@ -1,0 +1,70 @@
+/// <reference types="vite/client" />
+/**
+ * Browser entry: choose the first project (share link > autosave > demo), build the store,
+ * register the elements and mount `<lamina-app>`. The results elements are loaded through a
+ * glob so the worksheet still runs (with empty result sections) if they are missing.
+ */
+import { validateProject } from './model/validate';
+import { ProjectStore, type AppState } from './ui/state/project-store';
+import { defaultDeps } from './ui/state/default-deps';
+import { initialProject } from './ui/state/initial-project';
+import { writeAutosave, type KeyValueStorage } from './ui/state/autosave';
+import { SHARE_PREFIX } from './ui/state/share-link';
+import './ui/app/lamina-app';
+import type { LaminaApp } from './ui/app/lamina-app';
+
+import.meta.glob('./ui/results/index.ts', { eager: true });
+
+function browserStorage(): KeyValueStorage | null {
+  try {
+    const s = window.localStorage;
+    const probe = 'lamina:probe';
+    s.setItem(probe, '1');
+    s.removeItem(probe);
+    return s;
+  } catch {
+    return null;
+  }
+}
+
+export interface LaminaTestHook {
+  state(): AppState;
+  store: ProjectStore;
+  app: LaminaApp;
+  /** Edit and analyse at once (no debounce); resolves once the results have rendered. */
+  editNow(path: string, value: unknown): Promise<{ accepted: boolean; rendered_ms: number; frame_ms: number }>;
+}
+
+declare global {
+  interface Window {
+    /** Test and benchmark hook (read-only use). */
+    __lamina?: LaminaTestHook;
+  }
+}
+
+function boot(): void {
+  const storage = browserStorage();
+  const first = initialProject(location.hash, storage, validateProject);
+  const store = new ProjectStore(defaultDeps(storage), first.project);
+  if (first.source === 'link') {
+    // The project now lives in the autosave; drop the hash so a reload keeps later edits.
+    writeAutosave(storage, first.project);
+    if (location.hash.startsWith(SHARE_PREFIX)) history.replaceState(null, '', location.pathname + location.search);
+  }
+  const notices = [...first.notices];
+  if (!storage) notices.push('This browser blocks local storage: changes are not autosaved — use Save.');
+  if (notices.length) store.setNotice(notices.join(' '));
+
+  const app = document.createElement('lamina-app');
+  app.store = store;
+  const mount = document.getElementById('app') ?? document.body;
+  mount.replaceChildren(app);
+  window.__lamina = {
+    state: () => store.getState(),
+    store,
+    app,
+    editNow: (path, value) => app.editNow(path, value),
+  };
+}
+
+boot();

@@ -1,0 +1,413 @@
+/**
+ * `<lamina-app>`: the worksheet shell. Holds the store (the one place the analysis runs),
+ * forwards the components' events to it, and lays out the sheet top to bottom:
+ * caution · verdict · 1 Opening and loads · 2 Strata · 3 Lab tests · 4 Strength chain ·
+ * 5 Checks · 6 Span and thickness · 7 Report. Results elements (sections 4–7, the trace dialog)
+ * are rendered by tag; if one is not registered the page still works (it stays empty).
+ *
+ * Performance marks: `lamina:edit` at each edit (set by the store), `lamina:results` once the
+ * results have rendered (next animation frame after the update), and the measure
+ * `lamina:edit-to-results`.
+ */
+import { LitElement, html, css, nothing } from 'lit';
+import type { UnitSystem } from '../../model/units';
+import type { AppState, ProjectStore } from '../state/project-store';
+import { tokens } from '../styles/tokens';
+import { sheet } from '../styles/sheet';
+import { textField } from '../inputs/field-templates';
+import '../inputs/opening-loads-form';
+import '../inputs/strata-editor';
+import '../inputs/lab-tests-panel';
+import './caution-banner';
+import './verdict-line';
+import './project-bar';
+
+const SECTIONS = [
+  { id: 'opening', title: 'Opening and loads' },
+  { id: 'strata', title: 'Strata' },
+  { id: 'lab', title: 'Lab tests' },
+  { id: 'strength', title: 'Strength chain' },
+  { id: 'checks', title: 'Checks' },
+  { id: 'span', title: 'Span and thickness' },
+  { id: 'report', title: 'Report' },
+] as const;
+
+const nextFrame = (): Promise<void> => new Promise((resolve) => requestAnimationFrame(() => resolve()));
+const nextTask = (): Promise<void> =>
+  new Promise((resolve) => {
+    const ch = new MessageChannel();
+    ch.port1.onmessage = () => resolve();
+    ch.port2.postMessage(null);
+  });
+
+export class LaminaApp extends LitElement {
+  static override properties = {
+    store: { attribute: false },
+    state: { state: true },
+    tracePath: { state: true },
+  };
+
+  store!: ProjectStore;
+  state!: AppState;
+  tracePath: string | null = null;
+  private unsubscribe: (() => void) | null = null;
+  private lastAnalysis: unknown = null;
+  private traceOpener: HTMLElement | null = null;
+
+  static override styles = [
+    tokens,
+    sheet,
+    css`
+      :host {
+        display: block;
+        max-width: 78rem;
+        margin: 0 auto;
+        padding: 0 1rem 3rem;
+        background: var(--lam-paper);
+      }
+      header {
+        display: flex;
+        flex-wrap: wrap;
+        align-items: baseline;
+        gap: 0.3rem 1rem;
+        padding: 0.6rem 0 0.4rem;
+        border-bottom: 2px solid var(--lam-ink);
+      }
+      h1 {
+        font-size: 1.35rem;
+        margin: 0;
+        letter-spacing: 0.02em;
+      }
+      h1 small {
+        font-weight: 400;
+        font-size: 0.7em;
+        color: var(--lam-muted);
+      }
+      .title {
+        flex: 1 1 24rem;
+      }
+      .title input {
+        width: 100%;
+        font-size: 1.05rem;
+        font-weight: 600;
+      }
+      project-bar {
+        padding: 0.4rem 0;
+        border-bottom: 1px solid var(--lam-rule);
+      }
+      .top {
+        position: sticky;
+        top: 0;
+        z-index: 2;
+        background: var(--lam-paper);
+        padding-top: 0.3rem;
+        border-bottom: 1px solid var(--lam-rule);
+      }
+      nav ol {
+        list-style: none;
+        display: flex;
+        flex-wrap: wrap;
+        gap: 0.2rem 0.9rem;
+        padding: 0.25rem 0;
+        margin: 0;
+        font-size: 0.92em;
+      }
+      nav a {
+        color: var(--lam-ink);
+      }
+      .messages {
+        margin: 0.3rem 0;
+      }
+      .notice {
+        color: var(--lam-muted);
+      }
+      .file-errors {
+        border: 2px solid var(--lam-bad);
+        padding: 0.3rem 0.8rem;
+        margin: 0.4rem 0;
+      }
+      .file-errors h2 {
+        font-size: 1em;
+        border: none;
+        margin: 0.2rem 0;
+      }
+      .file-errors li {
+        font-family: var(--lam-mono);
+        font-size: 0.9em;
+      }
+      section {
+        margin-top: 1.2rem;
+      }
+      section > h2 {
+        scroll-margin-top: 9rem;
+      }
+      .num-badge {
+        display: inline-block;
+        min-width: 1.4em;
+        margin-right: 0.3em;
+      }
+      details.input-notes {
+        font-size: 0.9em;
+        color: var(--lam-muted);
+      }
+      details.input-notes li {
+        font-family: var(--lam-mono);
+        font-size: 0.95em;
+      }
+      footer {
+        margin-top: 2rem;
+      }
+      @media print {
+        :host {
+          max-width: none;
+          padding: 0;
+        }
+        .top {
+          position: static;
+          border: none;
+        }
+        header .title input {
+          border: none;
+          padding: 0;
+        }
+        nav,
+        project-bar,
+        .messages,
+        details.input-notes,
+        section.inputs,
+        section.results,
+        footer {
+          display: none !important;
+        }
+        section.print {
+          margin-top: 0.5rem;
+        }
+      }
+    `,
+  ];
+
+  override connectedCallback(): void {
+    super.connectedCallback();
+    this.state = this.store.getState();
+    this.unsubscribe = this.store.subscribe((s) => this.onState(s));
+    this.addEventListener('project-edit', this.onEdit as EventListener);
+    this.addEventListener('project-replace', this.onReplace as EventListener);
+    this.addEventListener('units-change', this.onUnits as EventListener);
+    this.addEventListener('chart-layer-change', this.onChartLayer as EventListener);
+    this.addEventListener('show-trace', this.onShowTrace as EventListener);
+    this.addEventListener('trace-close', this.onTraceClose);
+    this.addEventListener('history-undo', this.onUndo);
+    this.addEventListener('history-redo', this.onRedo);
+    this.addEventListener('project-file-errors', this.onFileErrors as EventListener);
+    this.addEventListener('app-notice', this.onNotice as EventListener);
+    window.addEventListener('keydown', this.onKey);
+  }
+
+  override disconnectedCallback(): void {
+    super.disconnectedCallback();
+    this.unsubscribe?.();
+    window.removeEventListener('keydown', this.onKey);
+  }
+
+  private onState(s: AppState): void {
+    this.state = s;
+    if (s.analysis !== this.lastAnalysis && !s.pending) {
+      this.lastAnalysis = s.analysis;
+      void this.markResults();
+    }
+  }
+
+  /** After the analysis has been rendered: mark and measure edit → results. */
+  private async markResults(): Promise<void> {
+    await this.updateComplete;
+    await nextFrame();
+    try {
+      if (performance.getEntriesByName('lamina:edit', 'mark').length === 0) return;
+      performance.mark('lamina:results');
+      performance.measure('lamina:edit-to-results', 'lamina:edit', 'lamina:results');
+      performance.clearMarks('lamina:edit');
+      performance.clearMarks('lamina:results');
+      if (performance.getEntriesByName('lamina:edit-to-results', 'measure').length > 500) performance.clearMeasures('lamina:edit-to-results');
+    } catch {
+      /* the timeline is optional */
+    }
+  }
+
+  /**
+   * Test and benchmark hook: apply an edit and run the analysis at once (no debounce), then
+   * wait until every element has updated. Returns ms to that point (`rendered`) and to the
+   * next animation frame (`frame`).
+   */
+  async editNow(path: string, value: unknown): Promise<{ accepted: boolean; rendered_ms: number; frame_ms: number }> {
+    const t0 = performance.now();
+    const accepted = this.store.edit(path, value);
+    this.store.flush();
+    await this.updateComplete;
+    await nextTask();
+    const t1 = performance.now();
+    await nextFrame();
+    const t2 = performance.now();
+    return { accepted, rendered_ms: t1 - t0, frame_ms: t2 - t0 };
+  }
+
+  private onEdit = (e: CustomEvent<{ path: string; value: unknown }>): void => {
+    e.stopPropagation();
+    this.store.edit(e.detail.path, e.detail.value);
+  };
+
+  private onReplace = (e: CustomEvent<{ project: unknown; source: string }>): void => {
+    e.stopPropagation();
+    this.store.replace(e.detail.project, e.detail.source);
+  };
+
+  private onUnits = (e: CustomEvent<{ units: UnitSystem }>): void => {
+    e.stopPropagation();
+    this.store.setUnits(e.detail.units);
+  };
+
+  private onChartLayer = (e: CustomEvent<{ layer: number }>): void => {
+    e.stopPropagation();
+    this.store.setChartLayer(Number(e.detail.layer));
+  };
+
+  private onShowTrace = (e: CustomEvent<{ path: string }>): void => {
+    e.stopPropagation();
+    const origin = e.composedPath()[0];
+    this.traceOpener = origin instanceof HTMLElement ? origin : null;
+    this.tracePath = e.detail.path;
+  };
+
+  private onTraceClose = (): void => {
+    this.tracePath = null;
+    const opener = this.traceOpener;
+    this.traceOpener = null;
+    if (opener && opener.isConnected) opener.focus();
+  };
+
+  private onUndo = (): void => void this.store.undo();
+  private onRedo = (): void => void this.store.redo();
+
+  private onFileErrors = (e: CustomEvent<{ source: string; errors: { path: string; message: string }[] }>): void => {
+    this.store.setFieldErrors(e.detail.errors, `${e.detail.source}: not opened — the current project is unchanged.`);
+    void this.updateComplete.then(() => this.renderRoot.querySelector<HTMLElement>('.file-errors')?.focus());
+  };
+
+  private onNotice = (e: CustomEvent<{ notice: string }>): void => this.store.setNotice(e.detail.notice);
+
+  private onKey = (e: KeyboardEvent): void => {
+    if (!(e.ctrlKey || e.metaKey) || e.altKey) return;
+    const key = e.key.toLowerCase();
+    if (key === 'z' && !e.shiftKey) {
+      e.preventDefault();
+      this.store.undo();
+    } else if ((key === 'z' && e.shiftKey) || key === 'y') {
+      e.preventDefault();
+      this.store.redo();
+    }
+  };
+
+  private goTo(e: Event, id: string): void {
+    e.preventDefault();
+    const heading = this.renderRoot.querySelector<HTMLElement>(`#${id}-h`);
+    heading?.scrollIntoView({ block: 'start' });
+    heading?.focus({ preventScroll: true });
+  }
+
+  private heading(n: number) {
+    const s = SECTIONS[n - 1];
+    return html`<h2 id="${s.id}-h" tabindex="-1"><span class="num-badge">${n}</span>${s.title}</h2>`;
+  }
+
+  override render() {
+    const s = this.state;
+    if (!s) return nothing;
+    const p = s.project;
+    const report = s.analysis?.report ?? null;
+    // Errors not shown beside a field on screen (file-level, or for paths without an input).
+    const fileErrors = s.fieldErrors;
+    return html`
+      <header>
+        <h1>Lamina <small>roof beam worksheet</small></h1>
+        <div class="title">${textField(this, { label: 'Project title', path: 'title', value: p.title, compact: true, size: 60 })}</div>
+      </header>
+      <project-bar .project=${p} units=${s.units} ?canUndo=${s.canUndo} ?canRedo=${s.canRedo}></project-bar>
+      <div class="top">
+        <caution-banner></caution-banner>
+        <verdict-line .project=${p} .analysis=${s.analysis} units=${s.units} ?pending=${s.pending} .error=${s.error}></verdict-line>
+        <nav aria-label="Worksheet sections">
+          <ol>
+            ${SECTIONS.map((sec, i) => html`<li><a href="#${sec.id}" @click=${(e: Event) => this.goTo(e, sec.id)}>${i + 1} ${sec.title}</a></li>`)}
+          </ol>
+        </nav>
+      </div>
+      <div class="messages">
+        ${s.notice ? html`<p class="notice" role="status">${s.notice}</p>` : nothing}
+        ${fileErrors.length
+          ? html`<div class="file-errors" role="alert" tabindex="-1">
+              <h2>Not accepted — ${fileErrors.length} field error${fileErrors.length === 1 ? '' : 's'}</h2>
+              <ul>
+                ${fileErrors.map((e) => html`<li data-path=${e.path}>${e.message}</li>`)}
+              </ul>
+            </div>`
+          : nothing}
+      </div>
+      ${s.inputWarnings.length
+        ? html`<details class="input-notes">
+            <summary>Input notes (${s.inputWarnings.length}): values assumed or unusual</summary>
+            <ul>
+              ${s.inputWarnings.map((w) => html`<li>${w.message}</li>`)}
+            </ul>
+          </details>`
+        : nothing}
+
+      <section class="inputs" aria-labelledby="opening-h">
+        ${this.heading(1)}
+        <opening-loads-form .project=${p} units=${s.units} .fieldErrors=${s.fieldErrors}></opening-loads-form>
+      </section>
+      <section class="inputs" aria-labelledby="strata-h">
+        ${this.heading(2)}
+        <strata-editor .project=${p} .analysis=${s.analysis} units=${s.units} .fieldErrors=${s.fieldErrors}></strata-editor>
+      </section>
+      <section class="inputs" aria-labelledby="lab-h">
+        ${this.heading(3)}
+        <lab-tests-panel .project=${p} .analysis=${s.analysis} units=${s.units} .fieldErrors=${s.fieldErrors}></lab-tests-panel>
+      </section>
+      <section class="results" aria-labelledby="strength-h">
+        ${this.heading(4)}
+        <strength-chain-view .project=${p} .analysis=${s.analysis} .units=${s.units}></strength-chain-view>
+      </section>
+      <section class="results" aria-labelledby="checks-h">
+        ${this.heading(5)}
+        <checks-table .project=${p} .analysis=${s.analysis} .units=${s.units}></checks-table>
+      </section>
+      <section class="results" aria-labelledby="span-h">
+        ${this.heading(6)}
+        <span-finder-view
+          .project=${p}
+          .analysis=${s.analysis}
+          .units=${s.units}
+          .curve=${s.curve}
+          .chart=${s.chart}
+          .chartLayer=${s.chartLayer}
+          .minThickness=${s.minThickness_m}
+        ></span-finder-view>
+        <beam-charts-view .project=${p} .analysis=${s.analysis} .units=${s.units} .chart=${s.chart} .chartLayer=${s.chartLayer}></beam-charts-view>
+      </section>
+      <section class="print" aria-labelledby="report-h">
+        ${this.heading(7)}
+        <report-view .project=${p} .analysis=${s.analysis} .curve=${s.curve} .units=${s.units}></report-view>
+      </section>
+      <trace-dialog .report=${report} .path=${this.tracePath ?? ''} .units=${s.units} ?open=${this.tracePath !== null}></trace-dialog>
+      <footer><caution-banner></caution-banner></footer>
+    `;
+  }
+}
+
+
+if (!customElements.get('lamina-app')) customElements.define('lamina-app', LaminaApp);
+
+declare global {
+  interface HTMLElementTagNameMap {
+    'lamina-app': LaminaApp;
+  }
+}

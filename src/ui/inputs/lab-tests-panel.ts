@@ -1,0 +1,350 @@
+/**
+ * `<lab-tests-panel>` — worksheet section 3: for the chosen layer, the Brazilian specimens
+ * (id, diameter, thickness, peak load, valid) with each row's computed strength, L/D, status and
+ * warnings; add and remove rows; paste rows from a spreadsheet (CSV or tab-separated); the test
+ * statistics and the strip plot.
+ *
+ * Paste rule: if ANY pasted row has an error, nothing is applied and every bad row is listed
+ * with its row and column (a half-applied paste is easy to miss and hard to undo by eye).
+ *
+ * @fires project-edit - a specimen field changed
+ * @fires project-replace - rows added, removed or pasted
+ * @fires show-trace - a traced strength was clicked
+ */
+import { LitElement, html, css, nothing, type PropertyValues } from 'lit';
+import { unsafeSVG } from 'lit/directives/unsafe-svg.js';
+import type { Project, Specimen } from '../../model/types';
+import type { UnitSystem } from '../../model/units';
+import type { Analysis, LabDetail } from '../../analysis/types';
+import { formatQuantity } from '../../model/units';
+import { defaultSpecimenId } from '../../model/defaults';
+import { parseSpecimensCsv } from '../../model/specimens-csv';
+import { numberText } from '../../report/number-text';
+import { strengthStripSvg } from '../../report/charts/strength-strip';
+import { tokens } from '../styles/tokens';
+import { sheet } from '../styles/sheet';
+import { checkboxField, textField } from './field-templates';
+import { fireReplace } from './events';
+import { tracedValue } from './traced-value';
+import './quantity-input';
+
+export interface PasteProblem {
+  row: number;
+  column: string | number;
+  message: string;
+}
+
+export class LabTestsPanel extends LitElement {
+  static override properties = {
+    project: { attribute: false },
+    analysis: { attribute: false },
+    units: { type: String },
+    fieldErrors: { attribute: false },
+    layer: { type: Number },
+    pasteText: { state: true },
+    pasteProblems: { state: true },
+    pasteNote: { state: true },
+  };
+
+  project!: Project;
+  analysis: Analysis | null = null;
+  units: UnitSystem = 'SI';
+  fieldErrors: ReadonlyArray<{ path: string; message: string }> = [];
+  /** Index of the layer shown. */
+  layer = 0;
+  pasteText = '';
+  pasteProblems: PasteProblem[] = [];
+  pasteNote = '';
+  private strip = '';
+
+  static override styles = [
+    tokens,
+    sheet,
+    css`
+      :host {
+        display: block;
+      }
+      .top {
+        display: flex;
+        gap: 1rem;
+        align-items: baseline;
+        flex-wrap: wrap;
+      }
+      .table-wrap {
+        overflow-x: auto;
+      }
+      td quantity-input {
+        display: block;
+      }
+      .status-used {
+        white-space: nowrap;
+      }
+      .status-unused {
+        color: #8a2a00;
+      }
+      .warns {
+        max-width: 18rem;
+        font-size: 0.9em;
+      }
+      .cols {
+        display: flex;
+        flex-wrap: wrap;
+        gap: 1rem 2rem;
+        align-items: flex-start;
+      }
+      .stats {
+        flex: 0 1 20rem;
+      }
+      .plot {
+        flex: 1 1 28rem;
+        max-width: 44rem;
+      }
+      textarea {
+        width: 100%;
+        max-width: 44rem;
+        min-height: 6em;
+        font-family: var(--lam-mono);
+        font-size: 0.9em;
+      }
+      .paste-actions {
+        display: flex;
+        gap: 0.5rem;
+        margin: 0.3rem 0;
+        flex-wrap: wrap;
+      }
+      button.traced {
+        border: none;
+        border-bottom: 1px dotted var(--lam-ink);
+        padding: 0;
+        min-height: 0;
+        background: none;
+        font-variant-numeric: tabular-nums;
+      }
+      .problems li {
+        color: #8a2a00;
+      }
+    `,
+  ];
+
+  private get layerIndex(): number {
+    const n = this.project?.layers.length ?? 1;
+    return Math.min(Math.max(0, this.layer | 0), n - 1);
+  }
+
+  private get lab(): LabDetail | null {
+    const a = this.analysis;
+    const i = this.layerIndex;
+    if (!a || a.layers.length !== this.project.layers.length) return null;
+    return a.layers[i]?.lab ?? null;
+  }
+
+  protected override willUpdate(changed: PropertyValues<this>): void {
+    if (changed.has('analysis') || changed.has('units') || changed.has('layer') || changed.has('project')) {
+      const lab = this.lab;
+      try {
+        this.strip = lab && lab.specimens.length > 0 ? strengthStripSvg(lab, { units: this.units }) : '';
+      } catch {
+        this.strip = '';
+      }
+    }
+  }
+
+  private setSpecimens(specimens: Specimen[], source: string): void {
+    const p = structuredClone(this.project);
+    p.layers[this.layerIndex].tensile.specimens = specimens;
+    fireReplace(this, p, source);
+  }
+
+  private addRow(): void {
+    const list = this.project.layers[this.layerIndex].tensile.specimens;
+    const last = list[list.length - 1];
+    const ids = new Set(list.map((s) => s.id));
+    let k = list.length;
+    while (ids.has(defaultSpecimenId(k))) k++;
+    // Starts NOT valid so it counts only once the user has entered the test and ticked it.
+    const row: Specimen = {
+      id: defaultSpecimenId(k),
+      diameter_mm: last?.diameter_mm ?? 54,
+      thickness_mm: last?.thickness_mm ?? 27,
+      peakLoad_kN: last?.peakLoad_kN ?? 10,
+      valid: false,
+    };
+    this.setSpecimens([...structuredClone(list), row], `specimen ${row.id} added`);
+  }
+
+  private removeRow(k: number): void {
+    const list = structuredClone(this.project.layers[this.layerIndex].tensile.specimens);
+    const [gone] = list.splice(k, 1);
+    this.setSpecimens(list, `specimen ${gone.id} removed`);
+  }
+
+  private applyPaste(mode: 'append' | 'replace'): void {
+    const text = this.pasteText;
+    this.pasteNote = '';
+    if (text.trim() === '') {
+      this.pasteProblems = [{ row: 0, column: '', message: 'nothing to paste: the box is empty' }];
+      return;
+    }
+    let result: ReturnType<typeof parseSpecimensCsv>;
+    try {
+      result = parseSpecimensCsv(text);
+    } catch (err) {
+      this.pasteProblems = [{ row: 0, column: '', message: err instanceof Error ? err.message : String(err) }];
+      return;
+    }
+    const problems = result.errors.map((e) => ({ row: e.row, column: e.column, message: e.message }));
+    if (problems.length > 0) {
+      this.pasteProblems = problems;
+      this.pasteNote = 'Nothing was applied: correct the rows listed and paste again.';
+      return;
+    }
+    if (result.specimens.length === 0) {
+      this.pasteProblems = [{ row: 0, column: '', message: 'no specimen rows found' }];
+      return;
+    }
+    const existing = mode === 'append' ? structuredClone(this.project.layers[this.layerIndex].tensile.specimens) : [];
+    this.pasteProblems = [];
+    this.pasteNote = `${result.specimens.length} specimen${result.specimens.length === 1 ? '' : 's'} ${mode === 'append' ? 'added' : 'put in place of the previous rows'}.`;
+    this.pasteText = '';
+    this.setSpecimens([...existing, ...result.specimens], `pasted specimens (${result.specimens.length})`);
+  }
+
+  private stress(v: number | null | undefined): string {
+    return v === null || v === undefined || !Number.isFinite(v) ? '—' : formatQuantity(v, 'stress', this.units, 3);
+  }
+
+  private renderTable(i: number) {
+    const layer = this.project.layers[i];
+    const lab = this.lab;
+    const specs = layer.tensile.specimens;
+    const detail = (k: number) => lab?.specimens.find((s) => s.index === k) ?? null;
+    const base = `layers[${i}].tensile.specimens`;
+    const errs = this.fieldErrors.filter((e) => e.path.startsWith(`layers[${i}].tensile`));
+    return html`<div class="table-wrap">
+        <table aria-label="Tensile test specimens of ${layer.name}">
+          <thead>
+            <tr>
+              <th scope="col">#</th>
+              <th scope="col">Id</th>
+              <th scope="col">Diameter D</th>
+              <th scope="col">Thickness L</th>
+              <th scope="col">Peak load P</th>
+              <th scope="col">Valid break</th>
+              <th scope="col" class="num">${layer.tensile.method === 'direct' ? 'Strength' : 'Brazilian σt = 2P/(πDL)'}</th>
+              <th scope="col" class="num">L/D</th>
+              <th scope="col">Used?</th>
+              <th scope="col">Warnings</th>
+              <th scope="col"><span class="sr-only">Remove</span></th>
+            </tr>
+          </thead>
+          <tbody>
+            ${specs.length === 0
+              ? html`<tr>
+                  <td colspan="11" class="hint">No specimens: the given tensile strength is used. Add rows or paste them below.</td>
+                </tr>`
+              : specs.map((s, k) => {
+                  const d = detail(k);
+                  const path = `${base}[${k}]`;
+                  const ld = s.diameter_mm > 0 ? s.thickness_mm / s.diameter_mm : null;
+                  return html`<tr data-specimen=${k}>
+                    <td>${k + 1}</td>
+                    <td>${textField(this, { label: `Id of specimen ${k + 1}`, path: `${path}.id`, value: s.id, compact: true, size: 7 })}</td>
+                    <td><quantity-input compact label="Diameter of ${s.id}" path="${path}.diameter_mm" .value=${s.diameter_mm} quantity="smallLength" units=${this.units} .error=${errFor(errs, `${path}.diameter_mm`)}></quantity-input></td>
+                    <td><quantity-input compact label="Thickness of ${s.id}" path="${path}.thickness_mm" .value=${s.thickness_mm} quantity="smallLength" units=${this.units} .error=${errFor(errs, `${path}.thickness_mm`)}></quantity-input></td>
+                    <td><quantity-input compact label="Peak load of ${s.id}" path="${path}.peakLoad_kN" .value=${s.peakLoad_kN} quantity="force" units=${this.units} .error=${errFor(errs, `${path}.peakLoad_kN`)}></quantity-input></td>
+                    <td>${checkboxField(this, { label: `Specimen ${s.id} broke along a central diametral fracture`, path: `${path}.valid`, value: s.valid, compact: true })}</td>
+                    <td class="num" data-si-value=${d ? String(d.brazilian_MPa) : nothing}>${d ? this.stress(d.brazilian_MPa) : '—'}</td>
+                    <td class="num">${ld === null ? '—' : numberText(ld, 2)}</td>
+                    <td>${d
+                      ? d.accepted
+                        ? html`<span class="status-used">used ✓</span>`
+                        : html`<span class="status-unused">not used ✗${d.reason ? html` — ${d.reason}` : nothing}</span>`
+                      : '—'}</td>
+                    <td class="warns">${d && d.warnings.length ? d.warnings.map((w) => html`<div class="warning">${w}</div>`) : nothing}</td>
+                    <td><button type="button" aria-label="Remove specimen ${s.id}" @click=${() => this.removeRow(k)}>Remove</button></td>
+                  </tr>`;
+                })}
+          </tbody>
+        </table>
+      </div>
+      ${errs.filter((e) => !/\.(diameter_mm|thickness_mm|peakLoad_kN)$/.test(e.path)).map((e) => html`<p class="error" role="alert">${e.message}</p>`)}
+      <button type="button" @click=${this.addRow}>+ Add a specimen row</button>
+      <span class="hint">A new row copies the previous one and starts unticked (not counted) until you enter its test and tick “Valid break”.</span>`;
+  }
+
+  private renderStats(i: number) {
+    const lab = this.lab;
+    const layer = this.project.layers[i];
+    if (!lab) return html`<p class="hint">Statistics appear when the analysis has run.</p>`;
+    const rule = lab.rule === 'lower5' ? 'lower 5% fractile m(1 − kn·V), EN 1990 Annex D' : 'mean of the accepted tests';
+    const methodText = lab.method === 'brazilian' ? `Brazilian; direct = ${numberText(lab.directFactor, 2)} × Brazilian (${layer.rockClass})` : 'direct pull (no factor)';
+    return html`<table class="stats" aria-label="Test statistics of ${layer.name}">
+      <tbody>
+        <tr><th scope="row">Source</th><td>${lab.source === 'specimens' ? `${lab.n} accepted specimen${lab.n === 1 ? '' : 's'}` : 'value given (no specimens)'}</td></tr>
+        <tr><th scope="row">Method</th><td>${methodText}</td></tr>
+        <tr><th scope="row">n</th><td class="num">${lab.n}</td></tr>
+        <tr><th scope="row">Mean (as tested)</th><td class="num">${tracedValue(`layers[${i}].strength.lab_MPa`, this.stress(lab.mean_MPa ?? this.analysis?.report.layers[i]?.strength.lab_MPa), lab.mean_MPa)}</td></tr>
+        <tr><th scope="row">Standard deviation</th><td class="num">${this.stress(lab.sd_MPa)}</td></tr>
+        <tr><th scope="row">CoV V</th><td class="num">${lab.cov === null ? '—' : numberText(lab.cov, 3)}</td></tr>
+        <tr><th scope="row">kn</th><td class="num">${lab.kn === null ? '—' : numberText(lab.kn, 3)}</td></tr>
+        <tr>
+          <th scope="row">Characteristic (direct)</th>
+          <td class="num characteristic">${tracedValue(`layers[${i}].strength.characteristic_MPa`, this.stress(lab.characteristic_MPa), lab.characteristic_MPa)}</td>
+        </tr>
+        <tr><th scope="row">Rule</th><td>${rule}</td></tr>
+      </tbody>
+    </table>`;
+  }
+
+  override render() {
+    const p = this.project;
+    if (!p) return nothing;
+    const i = this.layerIndex;
+    return html`<div class="top">
+        <label for="lab-layer">Layer</label>
+        <select
+          id="lab-layer"
+          @change=${(e: Event) => {
+            this.layer = Number((e.target as HTMLSelectElement).value);
+            this.pasteProblems = [];
+            this.pasteNote = '';
+          }}
+        >
+          ${p.layers.map((l, k) => html`<option value=${k} ?selected=${k === i}>${k + 1} — ${l.name} (${l.tensile.specimens.length} specimens)</option>`)}
+        </select>
+      </div>
+      <h3>Specimens of ${p.layers[i].name}</h3>
+      ${this.renderTable(i)}
+      <h3>Paste specimens</h3>
+      <label for="paste">Rows copied from a spreadsheet (comma- or tab-separated, with a header row: id, diameter_mm, thickness_mm, peakLoad_kN, valid)</label>
+      <textarea id="paste" .value=${this.pasteText} @input=${(e: Event) => (this.pasteText = (e.target as HTMLTextAreaElement).value)} spellcheck="false"></textarea>
+      <div class="paste-actions">
+        <button type="button" id="paste-append" @click=${() => this.applyPaste('append')}>Add pasted rows</button>
+        <button type="button" id="paste-replace" @click=${() => this.applyPaste('replace')}>Replace all rows with pasted rows</button>
+      </div>
+      <p class="hint">If any pasted row has an error, nothing is applied and the bad rows are listed.</p>
+      ${this.pasteNote ? html`<p role="status">${this.pasteNote}</p>` : nothing}
+      ${this.pasteProblems.length
+        ? html`<ul class="problems" role="alert">
+            ${this.pasteProblems.map((e) => html`<li>${e.row ? `row ${e.row}` : 'paste'}${e.column !== '' && e.column !== undefined ? `, column ${e.column}` : ''}: ${e.message}</li>`)}
+          </ul>`
+        : nothing}
+      <h3>Statistics and strip plot</h3>
+      <div class="cols">
+        ${this.renderStats(i)}
+        <div class="plot chart">${this.strip ? unsafeSVG(this.strip) : html`<p class="hint">No specimens to plot.</p>`}</div>
+      </div>`;
+  }
+}
+
+function errFor(errors: ReadonlyArray<{ path: string; message: string }>, path: string): string {
+  return errors.find((e) => e.path === path)?.message ?? '';
+}
+
+if (!customElements.get('lab-tests-panel')) customElements.define('lab-tests-panel', LabTestsPanel);
+
+declare global {
+  interface HTMLElementTagNameMap {
+    'lab-tests-panel': LabTestsPanel;
+  }
+}

@@ -1,0 +1,170 @@
+/**
+ * `<opening-loads-form>` — worksheet section 1: the opening (type, span, slab length, ends),
+ * the loads, and the design targets and options.
+ *
+ * @fires project-edit - one field changed
+ * @fires project-replace - the opening type changed (the slab length is set or cleared with it)
+ */
+import { LitElement, html, css, nothing } from 'lit';
+import type { Project, OpeningType } from '../../model/types';
+import type { UnitSystem } from '../../model/units';
+import { tokens } from '../styles/tokens';
+import { sheet } from '../styles/sheet';
+import { checkboxField, errorFor, selectField } from './field-templates';
+import { fireReplace } from './events';
+import './quantity-input';
+
+const OPENING_CHOICES = [
+  { value: 'beam', label: 'Long opening — roof beam (plane strain)' },
+  { value: 'slab', label: 'Rectangular roof — slab on four edges' },
+  { value: 'cantilever', label: 'Overhang — cantilever (bench, brow)' },
+] as const;
+
+const END_CHOICES = [
+  { value: 'clamped', label: 'Built in (clamped)' },
+  { value: 'simple', label: 'Simply supported' },
+] as const;
+
+const CHARACTERISTIC_CHOICES = [
+  { value: 'mean', label: 'Mean of the tests' },
+  { value: 'lower5', label: 'Lower 5% fractile (EN 1990 Annex D)' },
+] as const;
+
+const BASIS_CHOICES = [
+  { value: 'intact', label: 'Intact — the beam must not crack (tension counts)' },
+  { value: 'jointed', label: 'Jointed — taken as cracked (voussoir checks govern)' },
+] as const;
+
+export class OpeningLoadsForm extends LitElement {
+  static override properties = {
+    project: { attribute: false },
+    units: { type: String },
+    fieldErrors: { attribute: false },
+  };
+
+  project!: Project;
+  units: UnitSystem = 'SI';
+  fieldErrors: ReadonlyArray<{ path: string; message: string }> = [];
+
+  static override styles = [
+    tokens,
+    sheet,
+    css`
+      :host {
+        display: block;
+      }
+      .grid {
+        display: grid;
+        grid-template-columns: repeat(auto-fit, minmax(22rem, 1fr));
+        gap: 0 1.5rem;
+      }
+      fieldset {
+        border: none;
+        border-top: 1px solid var(--lam-rule);
+        margin: 0.4rem 0;
+        padding: 0.3rem 0;
+      }
+      legend {
+        font-weight: 600;
+        padding: 0 0.3em 0 0;
+      }
+      .line {
+        display: block;
+        margin: 0.25rem 0;
+      }
+      .field-label {
+        display: inline-block;
+        min-width: 11em;
+      }
+    `,
+  ];
+
+  private changeType(type: OpeningType): void {
+    const p = structuredClone(this.project);
+    p.opening.type = type;
+    if (type === 'slab') {
+      // A slab needs its long side; start from a square (length = span) the user then edits.
+      if (!(p.opening.length_m !== null && p.opening.length_m >= p.opening.span_m)) p.opening.length_m = p.opening.span_m;
+    } else {
+      p.opening.length_m = null;
+    }
+    fireReplace(this, p, 'opening type');
+  }
+
+  private q(label: string, path: string, value: number | null, quantity: string, extra: { unitText?: string; nullable?: boolean; hint?: string } = {}) {
+    return html`<quantity-input
+      class="line"
+      label=${label}
+      path=${path}
+      .value=${value}
+      quantity=${quantity}
+      units=${this.units}
+      unit-text=${extra.unitText ?? ''}
+      ?nullable=${extra.nullable ?? false}
+      hint=${extra.hint ?? ''}
+      error=${errorFor(this.fieldErrors, path)}
+    ></quantity-input>`;
+  }
+
+  override render() {
+    const p = this.project;
+    if (!p) return nothing;
+    const o = p.opening;
+    const spanLabel = o.type === 'cantilever' ? 'Overhang length' : o.type === 'slab' ? 'Span (short side)' : 'Span';
+    return html`<div class="grid">
+      <fieldset>
+        <legend>Opening</legend>
+        <span class="line">
+          <label class="field-label" for="opening-type">Opening type</label>
+          <select id="opening-type" data-path="opening.type" @change=${(e: Event) => this.changeType((e.target as HTMLSelectElement).value as OpeningType)}>
+            ${OPENING_CHOICES.map((c) => html`<option value=${c.value} ?selected=${c.value === o.type}>${c.label}</option>`)}
+          </select>
+        </span>
+        ${this.q(spanLabel, 'opening.span_m', o.span_m, 'length')}
+        ${o.type === 'slab' ? this.q('Length (long side)', 'opening.length_m', o.length_m, 'length', { hint: 'at least the span' }) : nothing}
+        <span class="line">
+          ${o.type === 'cantilever'
+            ? html`<span class="hint">Ends: a cantilever is built in at its root.</span>`
+            : selectField(this, {
+                label: o.type === 'slab' ? 'Edges' : 'Ends',
+                path: 'opening.ends',
+                value: o.ends,
+                choices: END_CHOICES,
+                error: errorFor(this.fieldErrors, 'opening.ends'),
+              })}
+        </span>
+      </fieldset>
+      <fieldset>
+        <legend>Loads</legend>
+        ${this.q('Surcharge on top', 'loads.surcharge_kPa', p.loads.surcharge_kPa, 'pressure', { hint: 'extra pressure on the top of the analysed strata' })}
+        ${this.q('Support pressure', 'loads.support_kPa', p.loads.support_kPa, 'pressure', { hint: 'upward, from bolts or props' })}
+        ${this.q('Horizontal stress', 'loads.horizontalStress_MPa', p.loads.horizontalStress_MPa, 'stress', { hint: 'along the span, compression positive' })}
+      </fieldset>
+      <fieldset>
+        <legend>Design targets</legend>
+        ${this.q('FS target, tension', 'design.fsTarget.tension', p.design.fsTarget.tension, '', { unitText: '—' })}
+        ${this.q('FS target, crushing', 'design.fsTarget.crushing', p.design.fsTarget.crushing, '', { unitText: '—' })}
+        ${this.q('FS target, sliding', 'design.fsTarget.sliding', p.design.fsTarget.sliding, '', { unitText: '—' })}
+        ${this.q('Deflection limit δ/t', 'design.deflectionLimitRatio', p.design.deflectionLimitRatio, '', { unitText: '—', hint: 'voussoir midspan deflection / thickness' })}
+      </fieldset>
+      <fieldset>
+        <legend>Design options</legend>
+        <span class="line">${selectField(this, { label: 'Characteristic strength', path: 'design.characteristic', value: p.design.characteristic, choices: CHARACTERISTIC_CHOICES })}</span>
+        <span class="line">${selectField(this, { label: 'Design basis', path: 'design.basis', value: p.design.basis, choices: BASIS_CHOICES })}</span>
+        <span class="line">${checkboxField(this, {
+          label: 'Plane-strain modulus E/(1−ν²) in deflection and Euler stress',
+          path: 'design.planeStrainModulus',
+          value: p.design.planeStrainModulus,
+        })}</span>
+      </fieldset>
+    </div>`;
+  }
+}
+
+if (!customElements.get('opening-loads-form')) customElements.define('opening-loads-form', OpeningLoadsForm);
+
+declare global {
+  interface HTMLElementTagNameMap {
+    'opening-loads-form': OpeningLoadsForm;
+  }
+}

@@ -1,0 +1,2 @@
+export { tokens, OKABE_ITO } from './tokens';
+export { sheet } from './sheet';
