@@ -1,0 +1,101 @@
+import { describe, it, expect } from 'vitest';
+import { analyseProject } from '../../src/analysis';
+import { reference } from './reference';
+import { designExample, presets, randomProject } from './fixtures';
+import type { Project } from '../../src/model/types';
+
+// Lamina's report against the independent plain implementation of METHODS.md in ./reference.ts:
+// strength, elastic and load fields to 0.5 %, voussoir to 1 % with n within 0.02 and identical
+// snap-through flags, largest spans to 1 % (or 5 mm).
+const rel = (a: number, b: number) => Math.abs(a - b) / Math.max(Math.abs(b), 1e-9);
+
+function compare(project: Project, label: string): void {
+  const r = analyseProject(project);
+  const ref = reference(project);
+  r.layers.forEach((l, i) => {
+    const f = ref.layers[i];
+    const at = `${label} layer ${i}`;
+    const close = (a: number | null, b: number | null, tol: number, what: string) => {
+      if (b === null || a === null) return expect(a, `${at} ${what}`).toBe(b);
+      // stresses near zero: compare absolutely against 1 kPa
+      expect(Math.abs(a - b) <= tol * Math.abs(b) || Math.abs(a - b) < 1e-3, `${at} ${what}: ${a} vs reference ${b}`).toBe(true);
+    };
+    close(l.strength.lab_MPa, f.lab * 1e-6, 5e-3, 'lab');
+    close(l.strength.direct_MPa, f.direct * 1e-6, 5e-3, 'direct');
+    close(l.strength.characteristic_MPa, f.characteristic * 1e-6, 5e-3, 'characteristic');
+    close(l.strength.block_MPa, f.block * 1e-6, 5e-3, 'block');
+    close(l.strength.mass_MPa, f.mass * 1e-6, 5e-3, 'mass');
+    close(l.strength.design_MPa, f.design * 1e-6, 5e-3, 'design');
+    close(l.strength.rqd, f.rqd, 5e-3, 'rqd');
+    close(l.strength.gsi, f.gsi, 5e-3, 'gsi');
+    expect(l.strength.crossJointed, `${at} crossJointed`).toBe(f.crossJointed);
+    expect(l.group, `${at} group`).toBe(f.group);
+    close(l.load_kPa, f.load * 1e-3, 5e-3, 'load');
+    close(l.elastic.abutmentTension_MPa, f.abutment * 1e-6, 5e-3, 'abutment');
+    close(l.elastic.midspanTension_MPa, f.midspan === null ? null : f.midspan * 1e-6, 5e-3, 'midspan');
+    close(l.elastic.deflection_mm, f.deflection * 1e3, 5e-3, 'deflection');
+    close(l.elastic.bucklingStress_MPa, f.buckling * 1e-6, 5e-3, 'buckling');
+    if (!l.plate) close(l.elastic.fsTension, f.fsTension, 5e-3, 'fsTension');
+    if (f.voussoir === null) {
+      expect(l.voussoir === null || l.voussoir.n === null, `${at} voussoir`).toBe(true);
+      return;
+    }
+    const v = l.voussoir!;
+    expect(v.snapThrough, `${at} snapThrough`).toBe(f.voussoir.snap);
+    if (f.voussoir.snap) return;
+    expect(Math.abs(v.n! - f.voussoir.n), `${at} n ${v.n} vs ${f.voussoir.n}`).toBeLessThanOrEqual(0.02);
+    close(v.maxCompression_MPa, f.voussoir.fc * 1e-6, 1e-2, 'fc');
+    close(v.leverArm_m, f.voussoir.z, 1e-2, 'z');
+    close(v.fsCrushing, f.voussoir.fsCrushing, 1e-2, 'fsCrushing');
+    close(v.fsSliding, f.voussoir.fsSliding, 1e-2, 'fsSliding');
+    // δ = z0 − z is a small difference of two lever arms; compare it on the scale of z0 too.
+    expect(rel(v.deflection_mm!, f.voussoir.delta * 1e3) < 0.02 || Math.abs(v.deflection_mm! - f.voussoir.delta * 1e3) < 1e-3 * l.thickness_m * 1e3, `${at} δ ${v.deflection_mm} vs ${f.voussoir.delta * 1e3}`).toBe(true);
+  });
+  for (const m of ['tension', 'crushing', 'snapThrough', 'deflection'] as const) {
+    const a = r.maxSpan_m![m];
+    const b = ref.maxSpan[m];
+    if (a === null || b === null) {
+      expect(a, `${label} maxSpan.${m}`).toBe(b);
+      continue;
+    }
+    expect(Math.abs(a - b) <= Math.max(0.01 * b, 5e-3), `${label} maxSpan.${m}: ${a} vs reference ${b}`).toBe(true);
+  }
+}
+
+describe('Lamina against an independent implementation of METHODS.md', () => {
+  it('the DESIGN.md example and the presets agree', () => {
+    compare(designExample(), 'DESIGN example');
+    for (const { file, project } of presets()) compare(project, file);
+  });
+  it('60 generated beam and cantilever projects agree', { timeout: 300_000 }, () => {
+    for (let seed = 5000; seed < 5060; seed++) compare(randomProject(seed, { type: seed % 4 === 0 ? 'cantilever' : 'beam' }), `seed ${seed}`);
+  });
+  it('30 long, thin, soft roofs (snap-through near and past the limit) agree, flags included', { timeout: 300_000 }, () => {
+    let snaps = 0;
+    let stands = 0;
+    for (let seed = 6000; seed < 6030; seed++) {
+      const project = randomProject(seed, { type: 'beam' });
+      project.opening.span_m = 8 + (seed % 7) * 2;
+      project.layers.forEach((l, k) => {
+        l.thickness_m = 0.08 + 0.04 * ((seed + k) % 6);
+        l.youngModulus_GPa = 0.3 + 0.4 * ((seed + 2 * k) % 5);
+        l.modulusBasis = 'mass';
+      });
+      compare(project, `thin seed ${seed}`);
+      for (const l of analyseProject(project).layers) l.voussoir?.snapThrough ? snaps++ : stands++;
+    }
+    expect(snaps).toBeGreaterThan(5);
+    expect(stands).toBeGreaterThan(5);
+  });
+  it('20 generated slab projects agree on every non-plate field', { timeout: 300_000 }, () => {
+    for (let seed = 7000; seed < 7020; seed++) {
+      const project = randomProject(seed, { type: 'slab' });
+      const r = analyseProject(project);
+      const ref = reference(project);
+      r.layers.forEach((l, i) => {
+        expect(rel(l.elastic.abutmentTension_MPa, ref.layers[i].abutment * 1e-6) < 5e-3 || Math.abs(l.elastic.abutmentTension_MPa - ref.layers[i].abutment * 1e-6) < 1e-3).toBe(true);
+        if (l.voussoir && ref.layers[i].voussoir) expect(l.voussoir.snapThrough).toBe(ref.layers[i].voussoir!.snap);
+      });
+    }
+  });
+});
