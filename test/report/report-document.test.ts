@@ -5,6 +5,7 @@ import { buildReportDocument } from '../../src/report/report-document';
 import type { Cell, FormulaBlock, ReportDocument, TableBlock } from '../../src/report/document-types';
 import { numberText } from '../../src/report/number-text';
 import { withUnit } from '../../src/report/unit-text';
+import { orderedTrace, traceGroup } from '../../src/report/sections/trace';
 import { expectClose } from '../helpers/expect-close';
 import { allCases, jointedCase, presetCase, slabCase, valueAt, type Case } from './fixtures';
 
@@ -57,11 +58,14 @@ describe('buildReportDocument — structure', () => {
 });
 
 describe('buildReportDocument — the trace', () => {
-  it('the trace section has one formula block per report.trace entry, in order, showing the traced result', () => {
+  it('the trace section has one formula block per report.trace entry, grouped by layer in analysis order, showing the traced result', () => {
     for (const c of allCases()) {
       const blocks = section(build(c), 'trace').blocks.filter((b): b is FormulaBlock => b.kind === 'formula');
-      const trace = c.analysis.report.trace;
-      expect(blocks.length).toBe(trace.length);
+      const trace = orderedTrace(c.analysis.report.trace);
+      expect(blocks.length).toBe(c.analysis.report.trace.length);
+      expect(new Set(trace)).toEqual(new Set(c.analysis.report.trace));
+      const groups = trace.map(traceGroup);
+      expect([...groups].sort((a, b) => a - b)).toEqual(groups);
       blocks.forEach((b, i) => {
         const entry = trace[i];
         if (!entry) throw new Error('missing entry');
@@ -75,22 +79,24 @@ describe('buildReportDocument — the trace', () => {
       });
     }
   });
-  it('every traced value that names a numeric report field equals that field (trace cannot drift from the report)', () => {
+  it('every traced value that names a numeric report (or detail.*: analysis) field equals that field (trace cannot drift)', () => {
     let compared = 0;
     for (const c of allCases()) {
       for (const entry of c.analysis.report.trace) {
-        const v = valueAt(c.analysis.report, entry.path);
+        const v = entry.path.startsWith('detail.') ? valueAt(c.analysis, entry.path.slice('detail.'.length)) : valueAt(c.analysis.report, entry.path);
         if (typeof v !== 'number') continue;
         expectClose(entry.result, v, 1e-9);
         compared += 1;
       }
     }
-    expect(compared).toBeGreaterThan(50);
+    expect(compared).toBeGreaterThan(300);
   });
   it('the strength section repeats the strength trace entries of each layer', () => {
     const c = presetCase('coal-room-shale');
     const blocks = section(build(c), 'strength').blocks.filter((b): b is FormulaBlock => b.kind === 'formula');
-    const expected = c.analysis.report.trace.filter((e) => /^layers\[\d+\]\.strength\./.test(e.path)).map((e) => e.path);
+    const expected = c.analysis.report.layers.flatMap((_l, i) =>
+      c.analysis.report.trace.filter((e) => e.path.startsWith(`layers[${i}].strength.`) || e.path.startsWith(`detail.layers[${i}].lab.`) || e.path.startsWith(`detail.layers[${i}].hoekBrown.`)).map((e) => e.path));
+    expect(expected.some((p) => p.startsWith('detail.layers[0].lab.specimens'))).toBe(true);
     expect(blocks.map((b) => b.path)).toEqual(expected);
     expect(expected.length).toBeGreaterThan(0);
   });

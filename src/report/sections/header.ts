@@ -21,7 +21,7 @@ export function headerSection(ctx: SectionContext, meta: { date: string; version
   ];
   return {
     id: 'header',
-    title: `Roof check: ${project.title}`,
+    title: 'Project and report details',
     blocks: [
       { kind: 'callout', tone: 'caution', title: CAUTION_TITLE, text: CAUTION },
       { kind: 'keyValue', items },

@@ -39,8 +39,12 @@ export function strengthSection(ctx: SectionContext): Section {
         ],
       });
     }
-    const prefix = `layers[${i}].strength.`;
-    for (const entry of analysis.report.trace) if (entry.path.startsWith(prefix)) blocks.push(traceBlock(entry, units));
+    for (const entry of analysis.report.trace) if (isStrengthEntry(entry.path, i)) blocks.push(traceBlock(entry, units));
   });
   return { id: 'strength', title: 'Strength chain', blocks };
+}
+
+/** Trace entries of the strength chain of layer `i`: lab reduction, chain steps, Hoek–Brown. */
+export function isStrengthEntry(path: string, i: number): boolean {
+  return path.startsWith(`layers[${i}].strength.`) || path.startsWith(`detail.layers[${i}].lab.`) || path.startsWith(`detail.layers[${i}].hoekBrown.`);
 }
