@@ -149,6 +149,7 @@ export class BeamChartsView extends LitElement {
           ${a.report.layers.map((l, k) => html`<option value=${k} ?selected=${k === i}>${k + 1}. ${l.name}${k === this.governingIndex() ? ' (governing)' : ''}</option>`)}
         </select>
       </div>
+      <div class="pair"><div>
       <h3>Elastic beam: tension and deflection</h3>
       ${lr
         ? html`<p class="note">
@@ -159,6 +160,7 @@ export class BeamChartsView extends LitElement {
           </p>`
         : nothing}
       ${this.profileSvg ? html`<div class="chart" data-role="beam-profile">${unsafeSVG(this.profileSvg)}</div>` : html`<p class="empty">No beam profile for this layer.</p>`}
+      </div><div>
       <h3>Voussoir (cracked beam)</h3>
       ${v === null
         ? html`<p class="empty">No voussoir: a jointed overhang (cantilever) cannot form an arch.</p>`
@@ -172,6 +174,7 @@ export class BeamChartsView extends LitElement {
               ${p.opening.type === 'slab' ? 'For a slab the voussoir uses the short span in plane strain (conservative).' : ''}
             </p>`}
       ${this.archSvg ? html`<div class="chart" data-role="voussoir-arch">${unsafeSVG(this.archSvg)}</div>` : nothing}
+      </div></div>
       ${p.opening.type === 'slab'
         ? html`<h3>Roof slab: bending stress</h3>
             ${this.slabSvg ? html`<div class="chart" data-role="slab-contour">${unsafeSVG(this.slabSvg)}</div>` : html`<p class="empty">No slab stress field.</p>`}`

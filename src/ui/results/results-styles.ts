@@ -52,7 +52,24 @@ export const resultsStyles = css`
   }
   th {
     font-weight: 600;
+  }
+  thead th,
+  tbody th[scope='rowgroup'] {
     border-bottom: 1px solid var(--lamina-ink, #000);
+  }
+  tbody {
+    border-bottom: 1px solid var(--lamina-ink, #000);
+  }
+  .pair {
+    display: grid;
+    grid-template-columns: minmax(0, 1fr);
+    gap: 0 2rem;
+    align-items: start;
+  }
+  @media (min-width: 72rem) {
+    .pair {
+      grid-template-columns: minmax(0, 1.15fr) minmax(0, 1fr);
+    }
   }
   td.num,
   th.num {

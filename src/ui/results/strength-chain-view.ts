@@ -62,7 +62,7 @@ export class StrengthChainView extends LitElement {
     return html`<section class="layer" data-layer=${i}>
       <h3>${lr.name}</h3>
       ${d
-        ? html`<table>
+        ? html`<div class="pair"><div><table>
             <caption>Tensile strength chain</caption>
             <thead>
               <tr>
@@ -86,8 +86,8 @@ export class StrengthChainView extends LitElement {
                 </tr>`;
               })}
             </tbody>
-          </table>
-          ${this.charts[i] ? html`<div class="chart">${unsafeSVG(this.charts[i])}</div>` : nothing}
+          </table></div>
+          ${this.charts[i] ? html`<div class="chart">${unsafeSVG(this.charts[i])}</div>` : nothing}</div>
           <p class="note">
             Lab results: ${d.lab.source === 'specimens'
               ? html`${d.lab.n} accepted specimen${d.lab.n === 1 ? '' : 's'} of ${d.lab.specimens.length}

@@ -50,6 +50,7 @@ export class TraceDialog extends LitElement {
       }
       .formula {
         font-size: 1.1em;
+        font-variant-numeric: tabular-nums;
         font-family: 'Cambria Math', 'STIX Two Math', 'Times New Roman', serif;
         margin: 0.3em 0;
         overflow-wrap: anywhere;
@@ -66,13 +67,19 @@ export class TraceDialog extends LitElement {
       dt {
         font-weight: 600;
       }
+      dl.steps dt {
+        align-self: baseline;
+      }
+      tbody th {
+        border-bottom-color: var(--rule);
+      }
       dd {
         margin: 0;
       }
       ol.related {
         max-height: 14em;
         overflow: auto;
-        padding-left: 1.6em;
+        padding-left: 2.6em;
         margin: 0.3em 0;
       }
       ol.related button {
@@ -135,6 +142,7 @@ export class TraceDialog extends LitElement {
   }
 
   private onClose = (): void => {
+    if (!this.open) return; // closed by the owner (open set to false): nothing to report
     this.open = false;
     this.dispatchEvent(new CustomEvent('trace-close', { bubbles: true, composed: true }));
     const target = this.returnFocus;
@@ -154,11 +162,14 @@ export class TraceDialog extends LitElement {
     return html`
       <h2 id="trace-title">${entry.label}</h2>
       <p class="note"><code data-role="trace-path">${entry.path}</code></p>
-      <p class="formula" data-role="formula">${safeText(() => formulaText(entry.formula), entry.formula)}</p>
-      <p class="formula" data-role="substituted">
-        = ${safeText(() => substitutedText(entry.formula, entry.values), entry.formula)}
-      </p>
-      <p class="formula result" data-role="result">= ${valueText(entry.result, entry.unit, u)}</p>
+      <dl class="steps">
+        <dt>Formula</dt>
+        <dd class="formula" data-role="formula">${safeText(() => formulaText(entry.formula), entry.formula)}</dd>
+        <dt>With values</dt>
+        <dd class="formula" data-role="substituted">${safeText(() => substitutedText(entry.formula, entry.values), entry.formula)}</dd>
+        <dt>Result</dt>
+        <dd class="formula result" data-role="result">${valueText(entry.result, entry.unit, u)}</dd>
+      </dl>
       ${symbols.length
         ? html`<table data-role="values">
             <caption>Values used</caption>
@@ -174,8 +185,6 @@ export class TraceDialog extends LitElement {
           </table>`
         : nothing}
       <dl>
-        <dt>Result</dt>
-        <dd>${valueText(entry.result, entry.unit, u)}</dd>
         <dt>Source</dt>
         <dd class="source" data-role="source">${entry.source}</dd>
         ${entry.note ? html`<dt>Note</dt><dd data-role="note">${entry.note}</dd>` : nothing}
