@@ -13,12 +13,13 @@ export class CautionBanner extends LitElement {
       :host {
         display: block;
         font-family: var(--lam-font);
-        font-size: 0.9rem;
+        font-size: 0.84rem;
+        line-height: 1.3;
       }
       aside {
         border: 2px solid var(--lam-ink);
         border-left-width: 8px;
-        padding: 0.35rem 0.7rem;
+        padding: 0.2rem 0.6rem;
         background: var(--lam-paper);
         color: var(--lam-ink);
       }

@@ -315,7 +315,7 @@ export class LaminaApp extends LitElement {
 
   private heading(n: number) {
     const s = SECTIONS[n - 1];
-    return html`<h2 id="${s.id}-h" tabindex="-1"><span class="num-badge">${n}</span>${s.title}</h2>`;
+    return html`<h2 id="${s.id}-h" tabindex="-1"><span class="num-badge">${n}</span> ${s.title}</h2>`;
   }
 
   override render() {

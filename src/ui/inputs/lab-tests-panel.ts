@@ -253,7 +253,7 @@ export class LabTestsPanel extends LitElement {
                     <td><quantity-input compact label="Thickness of ${s.id}" path="${path}.thickness_mm" .value=${s.thickness_mm} quantity="smallLength" units=${this.units} .error=${errFor(errs, `${path}.thickness_mm`)}></quantity-input></td>
                     <td><quantity-input compact label="Peak load of ${s.id}" path="${path}.peakLoad_kN" .value=${s.peakLoad_kN} quantity="force" units=${this.units} .error=${errFor(errs, `${path}.peakLoad_kN`)}></quantity-input></td>
                     <td>${checkboxField(this, { label: `Specimen ${s.id} broke along a central diametral fracture`, path: `${path}.valid`, value: s.valid, compact: true })}</td>
-                    <td class="num" data-si-value=${d ? String(d.brazilian_MPa) : nothing}>${d ? this.stress(d.brazilian_MPa) : '—'}</td>
+                    <td class="num">${d ? tracedValue(`detail.layers[${i}].lab.specimens[${k}].brazilian_MPa`, this.stress(d.brazilian_MPa), d.brazilian_MPa) : '—'}</td>
                     <td class="num">${ld === null ? '—' : numberText(ld, 2)}</td>
                     <td>${d
                       ? d.accepted
@@ -277,18 +277,24 @@ export class LabTestsPanel extends LitElement {
     const layer = this.project.layers[i];
     if (!lab) return html`<p class="hint">Statistics appear when the analysis has run.</p>`;
     const rule = lab.rule === 'lower5' ? 'lower 5% fractile m(1 − kn·V), EN 1990 Annex D' : 'mean of the accepted tests';
+    const rep = this.analysis?.report.layers[i]?.strength;
+    const d = `detail.layers[${i}].lab`;
     const methodText = lab.method === 'brazilian' ? `Brazilian; direct = ${numberText(lab.directFactor, 2)} × Brazilian (${layer.rockClass})` : 'direct pull (no factor)';
     return html`<table class="stats" aria-label="Test statistics of ${layer.name}">
       <tbody>
         <tr><th scope="row">Source</th><td>${lab.source === 'specimens' ? `${lab.n} accepted specimen${lab.n === 1 ? '' : 's'}` : 'value given (no specimens)'}</td></tr>
         <tr><th scope="row">Method</th><td>${methodText}</td></tr>
         <tr><th scope="row">n</th><td class="num">${lab.n}</td></tr>
-        <tr><th scope="row">Mean (as tested)</th><td class="num">${tracedValue(`layers[${i}].strength.lab_MPa`, this.stress(lab.mean_MPa ?? this.analysis?.report.layers[i]?.strength.lab_MPa), lab.mean_MPa)}</td></tr>
-        <tr><th scope="row">Standard deviation</th><td class="num">${this.stress(lab.sd_MPa)}</td></tr>
-        <tr><th scope="row">CoV V</th><td class="num">${lab.cov === null ? '—' : numberText(lab.cov, 3)}</td></tr>
-        <tr><th scope="row">kn</th><td class="num">${lab.kn === null ? '—' : numberText(lab.kn, 3)}</td></tr>
         <tr>
-          <th scope="row">Characteristic (direct)</th>
+          <th scope="row">Lab strength (${lab.method === 'brazilian' ? 'Brazilian mean' : 'direct mean'})</th>
+          <td class="num">${tracedValue(`layers[${i}].strength.lab_MPa`, this.stress(rep?.lab_MPa), rep?.lab_MPa)}</td>
+        </tr>
+        <tr><th scope="row">Mean, direct</th><td class="num">${lab.mean_MPa === null ? '—' : tracedValue(`${d}.mean_MPa`, this.stress(lab.mean_MPa), lab.mean_MPa)}</td></tr>
+        <tr><th scope="row">Standard deviation</th><td class="num">${lab.sd_MPa === null ? '—' : tracedValue(`${d}.sd_MPa`, this.stress(lab.sd_MPa), lab.sd_MPa)}</td></tr>
+        <tr><th scope="row">CoV V</th><td class="num">${lab.cov === null ? '—' : tracedValue(`${d}.cov`, numberText(lab.cov, 3), lab.cov)}</td></tr>
+        <tr><th scope="row">kn</th><td class="num">${lab.kn === null ? html`— <span class="hint">(mean rule)</span>` : numberText(lab.kn, 3)}</td></tr>
+        <tr>
+          <th scope="row">Characteristic, direct</th>
           <td class="num characteristic">${tracedValue(`layers[${i}].strength.characteristic_MPa`, this.stress(lab.characteristic_MPa), lab.characteristic_MPa)}</td>
         </tr>
         <tr><th scope="row">Rule</th><td>${rule}</td></tr>

@@ -73,8 +73,15 @@ export class QuantityInput extends LitElement {
       label {
         min-width: 11em;
       }
-      :host([compact]) label {
+      :host([compact]) .row {
+        flex-wrap: nowrap;
+      }
+      :host([compact]) input {
+        width: 5.5em;
+      }
+      :host([compact]) .unit {
         min-width: 0;
+        white-space: nowrap;
       }
       input {
         width: 7.5em;

@@ -116,12 +116,13 @@ export class StrataEditor extends LitElement {
       }
       .table-wrap {
         overflow-x: auto;
-        flex: 1 1 36rem;
+        flex: 1 1 40rem;
         max-width: 100%;
       }
       strata-column {
-        flex: 0 1 24rem;
-        min-width: 16rem;
+        flex: 1 1 22rem;
+        min-width: 20rem;
+        max-width: 36rem;
       }
       th.band {
         background: var(--lam-shade);
@@ -133,7 +134,7 @@ export class StrataEditor extends LitElement {
       }
       thead th {
         vertical-align: bottom;
-        min-width: 13rem;
+        min-width: 11rem;
       }
       .pos {
         font-weight: 400;

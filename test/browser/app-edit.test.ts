@@ -1,0 +1,130 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Browser } from 'playwright-core';
+import { launchChromium } from './chromium';
+import { startApp, type AppServer } from './app-server';
+import { fieldFor, openApp, projectJson, reportJson, waitForResults } from './app-page';
+
+let server: AppServer;
+let browser: Browser;
+
+beforeAll(async () => {
+  server = await startApp();
+  browser = await launchChromium();
+});
+afterAll(async () => {
+  await browser?.close();
+  await server?.close();
+});
+
+const verdictFs = (page: import('playwright-core').Page) => page.locator('verdict-line p').getAttribute('data-fs');
+
+describe('app: editing', () => {
+  it('typing a new shale thickness updates the governing FS shown, with no calculate button', async () => {
+    const { page, context, errors } = await openApp(browser, server.url);
+    const before = Number(await verdictFs(page));
+    // the demo's immediate roof is a 0.5 m shale governed by tension (fs = design/σ, σ ∝ 1/t for self-weight)
+    await fieldFor(page, 'layers[0].thickness_m').fill('0.8');
+    await waitForResults(page);
+    await expect.poll(async () => Number(await verdictFs(page))).not.toBe(before);
+    const after = Number(await verdictFs(page));
+    expect(after).toBeGreaterThan(before);
+    expect(JSON.parse(await projectJson(page)).layers[0].thickness_m).toBe(0.8);
+    // the shown FS button carries the same number
+    const shown = await page.locator('verdict-line button.traced').getAttribute('data-si-value');
+    expect(Number(shown)).toBe(after);
+    expect(errors).toEqual([]);
+    await context.close();
+  });
+
+  it('a number with a unit is converted to the file unit: "20 ft" gives a span of 6.096 m (1 ft = 0.3048 m, METHODS §13)', async () => {
+    const { page, context } = await openApp(browser, server.url);
+    await fieldFor(page, 'opening.span_m').fill('20 ft');
+    await waitForResults(page);
+    expect(JSON.parse(await projectJson(page)).opening.span_m).toBeCloseTo(6.096, 9);
+    await context.close();
+  });
+
+  it('unparsable text shows an inline error naming the field and keeps the last good value', async () => {
+    const { page, context } = await openApp(browser, server.url);
+    const before = await projectJson(page);
+    await fieldFor(page, 'opening.span_m').fill('six metres');
+    const msg = page.locator('quantity-input[path="opening.span_m"] [role="alert"]');
+    await expect.poll(() => msg.textContent()).toMatch(/^Span: expected a length/);
+    expect(await projectJson(page)).toBe(before);
+    await context.close();
+  });
+
+  it('a value refused by validation (thickness −0.2 m) shows the model message with its path; the project keeps 0.5 m', async () => {
+    const { page, context } = await openApp(browser, server.url);
+    await fieldFor(page, 'layers[0].thickness_m').fill('-0.2');
+    const msg = page.locator('quantity-input[path="layers[0].thickness_m"] [role="alert"]');
+    await expect.poll(() => msg.textContent()).toContain('layers[0].thickness_m: must be > 0');
+    expect(JSON.parse(await projectJson(page)).layers[0].thickness_m).toBe(0.5);
+    await context.close();
+  });
+
+  it('switching to US units changes the displayed values and units but not the analysis', async () => {
+    const { page, context } = await openApp(browser, server.url);
+    const report = await reportJson(page);
+    const analysisId = await page.evaluate(() => {
+      (window as unknown as { __a: unknown }).__a = window.__lamina!.state().analysis;
+      return true;
+    });
+    expect(analysisId).toBe(true);
+    expect(await fieldFor(page, 'opening.span_m').inputValue()).toBe('6');
+    await page.locator('project-bar input[value="US"]').check();
+    await expect.poll(() => fieldFor(page, 'opening.span_m').inputValue()).toBe('19.685'); // 6 m / 0.3048 = 19.685 ft
+    expect(await page.locator('quantity-input[path="opening.span_m"] .unit').textContent()).toBe('ft');
+    expect(await page.locator('quantity-input[path="layers[0].unitWeight_kNm3"] .unit').textContent()).toBe('lbf/ft³');
+    // 25 kN/m³ / 0.157087 = 159.15 lbf/ft³ (METHODS §13)
+    expect(Number(await fieldFor(page, 'layers[0].unitWeight_kNm3').inputValue())).toBeCloseTo(25 / 0.157087, 1);
+    await waitForResults(page);
+    expect(await reportJson(page)).toBe(report);
+    expect(await page.evaluate(() => window.__lamina!.state().analysis === (window as unknown as { __a: unknown }).__a)).toBe(true);
+    // typing a bare number in US units means feet
+    await fieldFor(page, 'opening.span_m').fill('10');
+    await waitForResults(page);
+    expect(JSON.parse(await projectJson(page)).opening.span_m).toBeCloseTo(3.048, 9);
+    await context.close();
+  });
+
+  it('undo restores a change (button and Ctrl+Z), redo re-applies it', async () => {
+    const { page, context } = await openApp(browser, server.url);
+    const original = await projectJson(page);
+    const undo = page.locator('project-bar #undo');
+    expect(await undo.isDisabled()).toBe(true);
+    await fieldFor(page, 'loads.surcharge_kPa').fill('50');
+    await waitForResults(page);
+    expect(JSON.parse(await projectJson(page)).loads.surcharge_kPa).toBe(50);
+    await undo.click();
+    await waitForResults(page);
+    expect(await projectJson(page)).toBe(original);
+    expect(await fieldFor(page, 'loads.surcharge_kPa').inputValue()).toBe('0');
+    await page.locator('project-bar #redo').click();
+    await waitForResults(page);
+    expect(JSON.parse(await projectJson(page)).loads.surcharge_kPa).toBe(50);
+    await page.locator('lamina-app header').click();
+    await page.keyboard.press('Control+z');
+    await waitForResults(page);
+    expect(await projectJson(page)).toBe(original);
+    await context.close();
+  });
+
+  it('adding, moving and removing a layer goes through the store (and is undoable)', async () => {
+    const { page, context, errors } = await openApp(browser, server.url);
+    const n = JSON.parse(await projectJson(page)).layers.length;
+    await page.getByRole('button', { name: '+ Add a layer above' }).click();
+    await waitForResults(page);
+    const added = JSON.parse(await projectJson(page));
+    expect(added.layers.length).toBe(n + 1);
+    expect(added.layers[n].name).toBe(`Layer ${n + 1}`);
+    await page.getByRole('button', { name: `Move Layer ${n + 1} down (toward the opening)` }).click();
+    await waitForResults(page);
+    expect(JSON.parse(await projectJson(page)).layers[n - 1].name).toBe(`Layer ${n + 1}`);
+    await page.getByRole('button', { name: `Remove layer ${n} (Layer ${n + 1})` }).click();
+    await waitForResults(page);
+    expect(JSON.parse(await projectJson(page)).layers.length).toBe(n);
+    expect(errors).toEqual([]);
+    await context.close();
+  });
+});

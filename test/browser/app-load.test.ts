@@ -1,0 +1,63 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Browser } from 'playwright-core';
+import { launchChromium } from './chromium';
+import { startApp, type AppServer } from './app-server';
+import { openApp } from './app-page';
+import { CAUTION } from '../../src/model/caution';
+
+let server: AppServer;
+let browser: Browser;
+
+beforeAll(async () => {
+  server = await startApp();
+  browser = await launchChromium();
+});
+afterAll(async () => {
+  await browser?.close();
+  await server?.close();
+});
+
+describe('app: first load', () => {
+  it('opens the coal-room demo with no console error and no request outside the page origin', async () => {
+    const { page, context, errors, external } = await openApp(browser, server.url);
+    const title = await page.locator('lamina-app header input').inputValue();
+    expect(title).toMatch(/coal room/i);
+    // the verdict line names the governing layer and shows a status word with its symbol
+    const verdict = page.locator('verdict-line p');
+    await expect.poll(() => verdict.textContent()).toMatch(/Governing: .* of Laminated grey shale/);
+    expect(await verdict.textContent()).toMatch(/(meets ✓|below ✗)/);
+    // the caution is on screen, verbatim (whitespace normalised)
+    const caution = await page.locator('caution-banner .text').first().textContent();
+    expect(caution?.replace(/\s+/g, ' ').trim()).toBe(CAUTION);
+    // every section heading is there, in order
+    const ids = ['opening', 'strata', 'lab', 'strength', 'checks', 'span', 'report'];
+    const headings: string[] = [];
+    for (const id of ids) headings.push(((await page.locator(`#${id}-h`).textContent()) ?? '').replace(/\s+/g, ' ').trim());
+    expect(headings).toEqual(['1 Opening and loads', '2 Strata', '3 Lab tests', '4 Strength chain', '5 Checks', '6 Span and thickness', '7 Report']);
+    expect(errors).toEqual([]);
+    expect(external).toEqual([]);
+    await context.close();
+  });
+
+  it('every input has an accessible label (label element or aria-label)', async () => {
+    const { page, context } = await openApp(browser, server.url);
+    const unlabelled = await page.evaluate(() => {
+      const out: string[] = [];
+      const walk = (root: Document | ShadowRoot) => {
+        root.querySelectorAll('input, select, textarea').forEach((el) => {
+          const e = el as HTMLInputElement;
+          if (e.type === 'hidden') return;
+          const labelled = (e.labels && e.labels.length > 0) || e.getAttribute('aria-label') || e.getAttribute('aria-labelledby');
+          if (!labelled) out.push(`${e.tagName} ${e.id} ${e.getAttribute('data-path') ?? ''}`);
+        });
+        root.querySelectorAll('*').forEach((el) => {
+          if (el.shadowRoot) walk(el.shadowRoot);
+        });
+      };
+      walk(document);
+      return out;
+    });
+    expect(unlabelled).toEqual([]);
+    await context.close();
+  });
+});

@@ -1,0 +1,64 @@
+/**
+ * Shared steps for the app browser tests: open the worksheet in a fresh page, collect console
+ * errors, page errors and any request that leaves the app's origin, and wait until the
+ * analysis has run and rendered.
+ */
+import type { Browser, BrowserContext, Page } from 'playwright-core';
+
+export interface AppPage {
+  page: Page;
+  context: BrowserContext;
+  /** Console errors and uncaught page errors. */
+  errors: string[];
+  /** Requests whose URL is not on the app's origin (data: and blob: URLs are local). */
+  external: string[];
+}
+
+export async function openApp(browser: Browser, url: string, options: { context?: BrowserContext; viewport?: { width: number; height: number } } = {}): Promise<AppPage> {
+  const context = options.context ?? (await browser.newContext({ viewport: options.viewport ?? { width: 1280, height: 900 }, acceptDownloads: true }));
+  const page = await context.newPage();
+  const errors: string[] = [];
+  const external: string[] = [];
+  const origin = new URL(url).origin;
+  page.on('console', (m) => {
+    if (m.type() === 'error') errors.push(`console: ${m.text()}`);
+  });
+  page.on('pageerror', (e) => errors.push(`page: ${e.message}`));
+  page.on('request', (r) => {
+    const u = r.url();
+    if (u.startsWith('data:') || u.startsWith('blob:')) return;
+    if (new URL(u).origin !== origin) external.push(u);
+  });
+  await page.goto(url);
+  await waitForResults(page);
+  return { page, context, errors, external };
+}
+
+/** Wait until the store holds a finished analysis and the page has rendered it. */
+export async function waitForResults(page: Page): Promise<void> {
+  await page.waitForFunction(() => {
+    const hook = window.__lamina;
+    if (!hook) return false;
+    const s = hook.state();
+    return s.analysis !== null && !s.pending;
+  }, null, { timeout: 30_000 });
+  await page.evaluate(() => window.__lamina!.app.updateComplete);
+  await page.evaluate(() => new Promise((r) => requestAnimationFrame(() => r(null))));
+}
+
+/** The current project JSON held by the store. */
+export const projectJson = (page: Page): Promise<string> => page.evaluate(() => JSON.stringify(window.__lamina!.state().project));
+
+/** The current report JSON held by the store. */
+export const reportJson = (page: Page): Promise<string> => page.evaluate(() => JSON.stringify(window.__lamina!.state().analysis?.report ?? null));
+
+/** A `<quantity-input>`'s text box by its project path. */
+export const fieldFor = (page: Page, path: string) => page.locator(`quantity-input[path="${path}"] input`);
+
+/** Make the sticky top block static so element screenshots are not covered by it. */
+export async function unstick(page: Page): Promise<void> {
+  await page.evaluate(() => {
+    const top = document.querySelector('lamina-app')?.shadowRoot?.querySelector<HTMLElement>('.top');
+    if (top) top.style.position = 'static';
+  });
+}
