@@ -6,7 +6,7 @@
  */
 import type { Mode, Project } from '../model/types';
 import { layerFs, targetFor } from './checks';
-import { evaluate } from './evaluate';
+import { chainFor, layerLoads, layerState, moduliFor } from './evaluate';
 import { projectToSI, type ProjectSI } from './inputs';
 import type { DesignChart } from './types';
 
@@ -30,14 +30,21 @@ export function designChart(project: Project, layerIndex: number, options: { spa
   for (const s of spans) if (!(s > 0) || !Number.isFinite(s)) throw new RangeError(`spans_m: every span must be > 0 m, got ${s}`);
   for (const t of thicknesses) if (!(t > 0) || !Number.isFinite(t)) throw new RangeError(`thicknesses_m: every thickness must be > 0 m, got ${t}`);
   const fs = Object.fromEntries(MODES.map((m) => [m, [] as (number | null)[][]])) as DesignChart['fs'];
+  // GSI, hence the moduli, depend on neither span nor thickness: compute them once. The groups
+  // and loads depend on the thickness only (one row); the chosen layer's strength chain depends
+  // on both (block size, cross-jointing), the other layers' loads on neither.
+  const base = p.layers.map((layer) => chainFor(layer, p.span, p));
+  const moduli = p.layers.map((layer, i) => moduliFor(layer, base[i], p));
   for (const t of thicknesses) {
     const pt = withThickness(p, layerIndex, t);
+    const layer = pt.layers[layerIndex];
+    const loads = layerLoads(pt, moduli);
     const rows = Object.fromEntries(MODES.map((m) => [m, [] as (number | null)[]])) as Record<Mode, (number | null)[]>;
     for (const s of spans) {
-      const state = evaluate(pt, { span: s, voussoirOnly: layerIndex });
-      const layer = state.layers[layerIndex];
-      const f = layerFs(layer, p.design);
-      const snapped = layer.voussoir?.snapThrough === true;
+      const chain = chainFor(layer, s, pt);
+      const state = layerState(pt, layer, s, chain, moduli[layerIndex], loads.groupOf[layerIndex], loads.loads[layerIndex]);
+      const f = layerFs(state, p.design);
+      const snapped = state.voussoir?.snapThrough === true;
       for (const m of MODES) {
         const v = snapped && m !== 'tension' ? 0 : f[m];
         rows[m].push(v === null ? null : Math.min(v, 1e6));

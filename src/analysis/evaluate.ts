@@ -112,54 +112,72 @@ export function evaluate(p: ProjectSI, options: EvaluateOptions = {}): State {
   const ends = beamEnds(p);
   const chains = options.chains ?? p.layers.map((layer) => chainFor(layer, span, p));
   const moduli = p.layers.map((layer, i) => moduliFor(layer, chains[i], p));
-  const beds = p.layers.map((layer, i) => ({ unitWeight: layer.unitWeight, thickness: layer.thickness, modulus: moduli[i].beam }));
-  const groups = groupLayers(beds);
-  const shared = shareLoads(beds, groups, p.surcharge, p.support);
+  const shared = layerLoads(p, moduli);
   const layers = p.layers.map((layer, i): LayerState => {
-    const chain = chains[i];
-    const load = shared.loads[i];
-    const t = layer.thickness;
-    const beam = elasticBeam({ ends, span, thickness: t, load, modulus: moduli[i].beam, horizontalStress: p.horizontalStress });
-    const coefficients = plateFor(p, layer.poisson);
-    const plate: PlateState | null = coefficients
-      ? {
-          coefficients,
-          maxTension: (coefficients.beta * load * span * span) / (t * t) - p.horizontalStress,
-          deflection: (coefficients.alpha * load * span ** 4) / (moduli[i].mass * t ** 3),
-        }
-      : null;
-    const maxTension = plate ? plate.maxTension : beam.maxTension;
-    let fsTension: number | null;
-    let fsTensionNote: LayerState['fsTensionNote'] = null;
-    if (chain.crossJointed && ends === 'cantilever') {
-      fsTension = 0;
-      fsTensionNote = 'jointedOverhang';
-    } else if (chain.crossJointed) {
-      fsTension = null;
-      fsTensionNote = 'crossJointed';
-    } else if (!(maxTension > 0)) {
-      fsTension = null;
-      fsTensionNote = 'noNetTension';
-    } else {
-      fsTension = chain.design / maxTension;
-    }
-    const effectiveUnitWeight = load / t;
-    const wantVoussoir = ends !== 'cantilever' && (options.voussoirOnly === undefined || options.voussoirOnly === i);
-    const voussoir = wantVoussoir ? voussoirFor(layer, span, t, effectiveUnitWeight, moduli[i].mass) : null;
-    return {
-      chain,
-      modulusMass: moduli[i].mass,
-      modulusBeam: moduli[i].beam,
-      group: groups[i],
-      load,
-      beam,
-      plate,
-      maxTension,
-      fsTension,
-      fsTensionNote,
-      effectiveUnitWeight,
-      voussoir,
-    };
+    const wantVoussoir = options.voussoirOnly === undefined || options.voussoirOnly === i;
+    return layerState(p, layer, span, chains[i], moduli[i], shared.groupOf[i], shared.loads[i], wantVoussoir);
   });
   return { span, ends, shared, layers };
+}
+
+/** Groups and shared loads (they depend on thickness, unit weight and modulus, not on the span). */
+export function layerLoads(p: ProjectSI, moduli: readonly { beam: number }[]): SharedLoads & { groupOf: number[] } {
+  const beds = p.layers.map((layer, i) => ({ unitWeight: layer.unitWeight, thickness: layer.thickness, modulus: moduli[i].beam }));
+  const groupOf = groupLayers(beds);
+  return { ...shareLoads(beds, groupOf, p.surcharge, p.support), groupOf };
+}
+
+/** One layer's elastic, plate, FS-tension and voussoir state at a span, given its chain, moduli and load. */
+export function layerState(
+  p: ProjectSI,
+  layer: LayerSI,
+  span: number,
+  chain: StrengthChain,
+  moduli: { mass: number; beam: number },
+  group: number,
+  load: number,
+  wantVoussoir = true,
+): LayerState {
+  const ends = beamEnds(p);
+  const t = layer.thickness;
+  const beam = elasticBeam({ ends, span, thickness: t, load, modulus: moduli.beam, horizontalStress: p.horizontalStress });
+  const coefficients = plateFor(p, layer.poisson);
+  const plate: PlateState | null = coefficients
+    ? {
+        coefficients,
+        maxTension: (coefficients.beta * load * span * span) / (t * t) - p.horizontalStress,
+        deflection: (coefficients.alpha * load * span ** 4) / (moduli.mass * t ** 3),
+      }
+    : null;
+  const maxTension = plate ? plate.maxTension : beam.maxTension;
+  let fsTension: number | null;
+  let fsTensionNote: LayerState['fsTensionNote'] = null;
+  if (chain.crossJointed && ends === 'cantilever') {
+    fsTension = 0;
+    fsTensionNote = 'jointedOverhang';
+  } else if (chain.crossJointed) {
+    fsTension = null;
+    fsTensionNote = 'crossJointed';
+  } else if (!(maxTension > 0)) {
+    fsTension = null;
+    fsTensionNote = 'noNetTension';
+  } else {
+    fsTension = chain.design / maxTension;
+  }
+  const effectiveUnitWeight = load / t;
+  const voussoir = wantVoussoir && ends !== 'cantilever' ? voussoirFor(layer, span, t, effectiveUnitWeight, moduli.mass) : null;
+  return {
+    chain,
+    modulusMass: moduli.mass,
+    modulusBeam: moduli.beam,
+    group,
+    load,
+    beam,
+    plate,
+    maxTension,
+    fsTension,
+    fsTensionNote,
+    effectiveUnitWeight,
+    voussoir,
+  };
 }

@@ -1,0 +1,33 @@
+/**
+ * `npm run bench`: every benchmark, each figure beside a baseline measured in the same run and
+ * the target it is held to. Figures depend on the machine and its load; the ratios much less.
+ */
+import { benchVoussoir } from './voussoir.bench';
+import { benchPlate } from './plate.bench';
+import { benchAnalysis } from './analysis.bench';
+import type { BenchResult } from './types';
+
+const groups: [string, () => Promise<BenchResult[]>][] = [
+  ['voussoir', benchVoussoir],
+  ['plate', benchPlate],
+  ['analysis', benchAnalysis],
+];
+
+// The browser benchmark (edit → results, bundle size) builds the app and starts chromium.
+const uiModule = './ui.bench';
+const ui = (await import(uiModule).catch(() => null)) as { benchUi?: () => Promise<BenchResult[]> } | null;
+if (ui?.benchUi) groups.push(['web app', ui.benchUi]);
+
+const fmt = (us: number) => (us >= 1000 ? `${(us / 1000).toFixed(2)} ms` : `${us.toFixed(2)} µs`);
+let failed = 0;
+console.log(`Lamina benchmarks — node ${process.version}, ${new Date().toISOString()}`);
+for (const [name, run] of groups) {
+  console.log(`\n## ${name}`);
+  for (const r of await run()) {
+    if (r.pass === false) failed++;
+    const ratio = r.ratio === undefined ? '' : `  ×${r.ratio.toFixed(1)} vs ${r.baseline ?? 'baseline'}`;
+    console.log(`${r.pass === false ? '✗' : r.pass ? '✓' : ' '} ${r.name}: ${fmt(r.median_us)}${ratio}${r.target ? `  (target ${r.target})` : ''}`);
+  }
+}
+console.log(`\n${failed === 0 ? 'All targets met.' : `${failed} target(s) missed.`}`);
+process.exitCode = failed === 0 ? 0 : 1;
