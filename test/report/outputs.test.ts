@@ -95,6 +95,15 @@ describe('renderHtml', () => {
       expect(html).toContain('<svg');
     }
   });
+  it('the embedded charts follow the unit system: their axes say (ft) in US units and (m) in SI', () => {
+    const c = presetCase('coal-room-shale');
+    const svgs = (html: string) => (html.match(/<svg[\s\S]*?<\/svg>/g) ?? []).join('\n');
+    const us = svgs(outputs(c, 'US').html);
+    const si = svgs(outputs(c, 'SI').html);
+    expect(us).toContain('(ft)');
+    expect(si).toContain('(m)');
+    expect(si).not.toContain('(ft)');
+  });
   it('renders Letter paper on request and refuses other sizes', () => {
     const { doc } = outputs(presetCase('drift-limestone'), 'SI');
     expect(renderHtml(doc, { paper: 'Letter' })).toContain('size: Letter portrait');

@@ -97,12 +97,18 @@ export function resultSentence(ctx: SectionContext): string {
 
 export function spanSentence(ctx: SectionContext): string {
   const spans = ctx.analysis.report.maxSpan_m;
+  const what = ctx.project.opening.type === 'cantilever' ? 'overhang' : 'span';
   const current = quantityText(ctx.project.opening.span_m, 'length', ctx.units);
   if (spans === null || spans.governing === null) {
-    return `Largest span: none could be determined for this roof (current span ${current}).`;
+    return `Largest ${what}: none could be determined for this roof (current ${what} ${current}).`;
   }
   const word = spans.governing >= ctx.project.opening.span_m ? 'at least the' : 'shorter than the';
-  return `Largest span meeting every counted target: ${quantityText(spans.governing, 'length', ctx.units)}, ${word} current span of ${current}.`;
+  let text = `Largest ${what} meeting every counted target: ${quantityText(spans.governing, 'length', ctx.units)}, ${word} current ${what} of ${current}.`;
+  // METHODS §11: sliding never limits the span from above; a shortfall stands at the current span.
+  if (ctx.rows.some((r) => r.mode === 'sliding' && r.status.kind === 'below')) {
+    text += ' Sliding is not part of this limit (its FS rises with span), so the sliding shortfall at the current span must be resolved on its own.';
+  }
+  return text;
 }
 
 export function verdictSection(ctx: SectionContext): Section {
