@@ -1,0 +1,59 @@
+import { describe, it, expect } from 'vitest';
+import { readdirSync, readFileSync, statSync } from 'node:fs';
+import { join, relative, dirname, resolve } from 'node:path';
+import { fileURLToPath } from 'node:url';
+
+// The layering rule of DESIGN.md ("dependencies point downward only") and STYLE.md §1 (the
+// kernels cannot touch the DOM), checked on the source text.
+const root = resolve(dirname(fileURLToPath(import.meta.url)), '..');
+const src = join(root, 'src');
+
+function files(dir: string): string[] {
+  return readdirSync(dir).flatMap((name) => {
+    const path = join(dir, name);
+    return statSync(path).isDirectory() ? files(path) : path.endsWith('.ts') ? [path] : [];
+  });
+}
+
+const RANK: Record<string, number> = { model: 0, strength: 1, mechanics: 1, analysis: 2, report: 3, cli: 4, ui: 4 };
+const layerOf = (path: string) => relative(src, path).split(/[\\/]/)[0];
+
+function imports(text: string): string[] {
+  return [...text.matchAll(/(?:import|export)[^'"]*?from\s+['"]([^'"]+)['"]|import\(\s*['"]([^'"]+)['"]\s*\)/g)].map((m) => m[1] ?? m[2]);
+}
+
+describe('architecture', () => {
+  const all = files(src);
+  it('finds the source files', () => {
+    expect(all.length).toBeGreaterThan(30);
+  });
+  it('every import points to the same layer or a lower one (DESIGN.md layers)', () => {
+    for (const file of all) {
+      const from = layerOf(file);
+      if (!(from in RANK)) continue;
+      for (const spec of imports(readFileSync(file, 'utf8'))) {
+        if (!spec.startsWith('.')) continue;
+        const target = resolve(dirname(file), spec);
+        const to = layerOf(target);
+        if (!(to in RANK) || to === from) continue;
+        const ok = RANK[to] < RANK[from] && !(from === 'cli' && to === 'ui') && !(from === 'ui' && to === 'cli');
+        expect(ok, `${relative(root, file)} imports ${spec} (${from} → ${to})`).toBe(true);
+      }
+    }
+  });
+  it('kernels in src/mechanics and src/strength use no DOM, I/O, mathjs, lit or d3 (STYLE.md §1)', () => {
+    for (const file of all.filter((f) => ['mechanics', 'strength'].includes(layerOf(f)))) {
+      const text = readFileSync(file, 'utf8').replace(/\/\*[\s\S]*?\*\/|\/\/.*$/gm, '');
+      for (const spec of imports(text)) expect(spec.startsWith('.'), `${relative(root, file)} imports ${spec}`).toBe(true);
+      expect(/\b(document|window|localStorage|fetch|process)\b/.test(text), `${relative(root, file)} touches the DOM or I/O`).toBe(false);
+    }
+  });
+  it('only src/model/units.ts and the report use mathjs; nothing else uses it for units', () => {
+    for (const file of all) {
+      const text = readFileSync(file, 'utf8');
+      if (!imports(text).includes('mathjs')) continue;
+      const rel = relative(src, file).replace(/\\/g, '/');
+      expect(rel === 'model/units.ts' || rel.startsWith('report/'), `${rel} imports mathjs`).toBe(true);
+    }
+  });
+});
