@@ -1,0 +1,20 @@
+import { describe, expect, it } from 'vitest';
+import { readFileSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import { CAUTION } from '../../src/model/caution';
+
+const html = readFileSync(fileURLToPath(new URL('../../index.html', import.meta.url)), 'utf8');
+
+describe('index.html', () => {
+  it('the <noscript> block carries the caution word for word (DESIGN.md "Caution"; HTML cannot import caution.ts)', () => {
+    const noscript = /<noscript>([\s\S]*?)<\/noscript>/.exec(html)?.[1] ?? '';
+    const text = noscript.replace(/<[^>]+>/g, ' ').replace(/\s+/g, ' ');
+    expect(text).toContain(CAUTION);
+  });
+
+  it('loads only the module entry from its own origin: no external script, stylesheet or font', () => {
+    expect(html).toContain('<script type="module" src="/src/main.ts"></script>');
+    expect(html).not.toMatch(/(src|href)=["']https?:/);
+    expect(html).not.toMatch(/@import|@font-face/);
+  });
+});
