@@ -93,7 +93,10 @@ export class LabTestsPanel extends LitElement {
         align-items: flex-start;
       }
       .stats {
-        flex: 0 1 20rem;
+        flex: 0 1 24rem;
+      }
+      .stats td {
+        min-width: 8rem;
       }
       .plot {
         flex: 1 1 28rem;
@@ -322,7 +325,7 @@ export class LabTestsPanel extends LitElement {
       <h3>Specimens of ${p.layers[i].name}</h3>
       ${this.renderTable(i)}
       <h3>Paste specimens</h3>
-      <label for="paste">Rows copied from a spreadsheet (comma- or tab-separated, with a header row: id, diameter_mm, thickness_mm, peakLoad_kN, valid)</label>
+      <label for="paste">Rows copied from a spreadsheet (comma- or tab-separated, with a header row: id, diameter_mm, thickness_mm, peakLoad_kN, valid — values in mm and kN whatever the display units)</label>
       <textarea id="paste" .value=${this.pasteText} @input=${(e: Event) => (this.pasteText = (e.target as HTMLTextAreaElement).value)} spellcheck="false"></textarea>
       <div class="paste-actions">
         <button type="button" id="paste-append" @click=${() => this.applyPaste('append')}>Add pasted rows</button>

@@ -77,7 +77,7 @@ export class QuantityInput extends LitElement {
         flex-wrap: nowrap;
       }
       :host([compact]) input {
-        width: 5.5em;
+        width: 6.2em;
       }
       :host([compact]) .unit {
         min-width: 0;

@@ -66,7 +66,7 @@ const ROWS: Row[] = [
       { value: 'metamorphic', label: 'metamorphic' },
     ],
   },
-  { kind: 'number', label: 'Tensile strength, given', key: 'tensile.value_MPa', get: (l) => l.tensile.value_MPa, quantity: 'stress', nullable: true, emptyText: 'from tests' },
+  { kind: 'number', label: 'Tensile strength, given', key: 'tensile.value_MPa', get: (l) => l.tensile.value_MPa, quantity: 'stress', nullable: true, emptyText: 'tests' },
   {
     kind: 'select',
     label: 'Tensile test method',
@@ -77,9 +77,9 @@ const ROWS: Row[] = [
       { value: 'direct', label: 'direct pull' },
     ],
   },
-  { kind: 'band', label: 'Jointing', note: 'empty = not observed' },
-  { kind: 'number', label: 'Cross-joint spacing', key: 'jointing.crossJointSpacing_m', get: (l) => l.jointing.crossJointSpacing_m, quantity: 'length', nullable: true, emptyText: 'none seen' },
-  { kind: 'number', label: 'Fracture frequency', key: 'jointing.fractureFrequency_per_m', get: (l) => l.jointing.fractureFrequency_per_m, unitText: 'per m', nullable: true, emptyText: 'not logged' },
+  { kind: 'band', label: 'Jointing', note: 'leave empty when not observed or not logged' },
+  { kind: 'number', label: 'Cross-joint spacing', key: 'jointing.crossJointSpacing_m', get: (l) => l.jointing.crossJointSpacing_m, quantity: 'length', nullable: true, emptyText: 'none' },
+  { kind: 'number', label: 'Fracture frequency', key: 'jointing.fractureFrequency_per_m', get: (l) => l.jointing.fractureFrequency_per_m, unitText: 'per m', nullable: true, emptyText: '—' },
   { kind: 'number', label: 'RQD', key: 'jointing.rqd', get: (l) => l.jointing.rqd, unitText: '%', nullable: true, emptyText: 'from λ' },
   { kind: 'number', label: 'Joint condition JCond89', key: 'jointing.jointCondition', get: (l) => l.jointing.jointCondition, unitText: '0–30' },
   { kind: 'number', label: 'Joint friction angle φ', key: 'jointing.jointFriction_deg', get: (l) => l.jointing.jointFriction_deg, unitText: '°' },
@@ -120,9 +120,15 @@ export class StrataEditor extends LitElement {
         max-width: 100%;
       }
       strata-column {
-        flex: 1 1 22rem;
-        min-width: 20rem;
-        max-width: 36rem;
+        flex: 1 1 18rem;
+        min-width: 16rem;
+        max-width: 32rem;
+      }
+      td select {
+        max-width: 10.5rem;
+      }
+      thead input {
+        width: 100%;
       }
       th.band {
         background: var(--lam-shade);
@@ -134,7 +140,7 @@ export class StrataEditor extends LitElement {
       }
       thead th {
         vertical-align: bottom;
-        min-width: 11rem;
+        min-width: 9.5rem;
       }
       .pos {
         font-weight: 400;
@@ -203,7 +209,7 @@ export class StrataEditor extends LitElement {
     }
     const note =
       row.key === 'tensile.value_MPa' && layer.tensile.specimens.length > 0
-        ? html`<span class="source">${layer.tensile.specimens.length} specimens given: they are used</span>`
+        ? html`<span class="source">${layer.tensile.specimens.length} specimens given: the tests are used</span>`
         : nothing;
     return html`<quantity-input
         compact
