@@ -31,10 +31,16 @@ export function gridMapping(xs: number[], ys: number[], sx: (v: number) => numbe
 
 /**
  * A point for a level label: of the band's ring vertices inside the grid (border points lie on
- * the clip edge) and accepted by `fits` (e.g. "the label fits inside the plot there"), the one
- * nearest the grid centre; null when there is none.
+ * the clip edge; `interiorOnly` false admits them) and accepted by `fits` (e.g. "the label fits
+ * inside the plot there"), the one nearest the grid centre; null when there is none.
  */
-export function labelPoint(band: ContourMultiPolygon, nx: number, ny: number, fits: (gx: number, gy: number) => boolean = () => true): [number, number] | null {
+export function labelPoint(
+  band: ContourMultiPolygon,
+  nx: number,
+  ny: number,
+  fits: (gx: number, gy: number) => boolean = () => true,
+  interiorOnly = true,
+): [number, number] | null {
   let best: [number, number] | null = null;
   let bestD = Infinity;
   const cx = nx / 2;
@@ -42,7 +48,7 @@ export function labelPoint(band: ContourMultiPolygon, nx: number, ny: number, fi
   for (const poly of band.coordinates) {
     for (const ring of poly) {
       for (const [px, py] of ring) {
-        if (!(px > 0.6 && px < nx - 0.6 && py > 0.6 && py < ny - 0.6) || !fits(px, py)) continue;
+        if ((interiorOnly && !(px > 0.6 && px < nx - 0.6 && py > 0.6 && py < ny - 0.6)) || !fits(px, py)) continue;
         const d = ((px - cx) / nx) ** 2 + ((py - cy) / ny) ** 2;
         if (d < bestD) {
           bestD = d;

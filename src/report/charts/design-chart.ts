@@ -83,6 +83,13 @@ export function designChartSvg(chart: DesignChart, mode: Mode, options: DesignCh
       `<path class="contour${isTarget ? ' target' : ''}" data-level="${num(band.value)}" d="${d}" fill="${fill}" stroke="${isTarget ? INK.axis : '#666666'}" stroke-width="${isTarget ? 2.8 : 0.8}"${isTarget ? '' : ' stroke-dasharray="4 2"'}/>`,
     );
   });
+  // Where the mode does not apply (null, e.g. after snap-through): grey, drawn over the bands.
+  const missing = values.map((v) => (Number.isFinite(v) ? 0 : 1));
+  if (missing.some((m) => m === 1)) {
+    const [hole] = contours().size([nx, ny]).thresholds([0.5])(missing);
+    const d = hole ? map.path(hole) : '';
+    if (d) parts.push(`<path class="not-applicable" d="${d}" fill="url(#${ID}na)" stroke="#888888" stroke-width="0.8"/>`);
+  }
   parts.push('</g>');
   const placed: Array<[number, number, number]> = []; // x, y, half-width of labels drawn
   const clear = (sx: number, sy: number, half: number) => placed.every(([px, py, ph]) => Math.abs(px - sx) > ph + half || Math.abs(py - sy) > 13);
@@ -102,7 +109,7 @@ export function designChartSvg(chart: DesignChart, mode: Mode, options: DesignCh
       const [sx, sy] = map.toScreen(gx, gy);
       return sx - half > left && sx + half < right && sy - 10 > top && sy + 4 < bottom && clear(sx, sy, half);
     };
-    const p = labelPoint(band, nx, ny, fits) ?? labelPoint(band, nx, ny);
+    const p = labelPoint(band, nx, ny, fits) ?? labelPoint(band, nx, ny) ?? (isTarget ? labelPoint(band, nx, ny, () => true, false) : null);
     if (!p) return;
     const [gx, gy] = map.toScreen(p[0], p[1]);
     const sx = Math.min(Math.max(gx, left + half), right - half);
@@ -145,10 +152,16 @@ export function designChartSvg(chart: DesignChart, mode: Mode, options: DesignCh
   parts.push(text(kx + 28, top + 63, 'other levels', { size: 10 }));
   parts.push(marker('diamond', kx + 11, top + 78, MODE_STYLE[mode].color, 5, true));
   parts.push(text(kx + 28, top + 81, 'current design', { size: 10 }));
+  if (missing.some((m) => m === 1)) {
+    parts.push(`<rect x="${num(kx)}" y="${num(top + 90)}" width="22" height="12" fill="url(#${ID}na)" stroke="#888888" stroke-width="0.5"/>`);
+    parts.push(text(kx + 28, top + 100, 'does not apply', { size: 10 }));
+  }
 
   const defs =
     `<pattern id="${ID}below" patternUnits="userSpaceOnUse" width="8" height="8" patternTransform="rotate(45)">` +
-    `<rect width="8" height="8" fill="#fbe3d6"/><path d="M0,0V8" stroke="#d55e00" stroke-width="1"/></pattern>`;
+    `<rect width="8" height="8" fill="#fbe3d6"/><path d="M0,0V8" stroke="#d55e00" stroke-width="1"/></pattern>` +
+    `<pattern id="${ID}na" patternUnits="userSpaceOnUse" width="8" height="8">` +
+    `<rect width="8" height="8" fill="#eeeeee"/><path d="M0,4H8M4,0V8" stroke="#bbbbbb" stroke-width="0.8"/></pattern>`;
   const desc =
     `${MODE_NAME[mode]} of layer ${chart.layer + 1} over spans ${formatValue(X[0])} to ${formatValue(X[nx - 1])} ${len.unit} ` +
     `and thicknesses ${formatValue(Y[0])} to ${formatValue(Y[ny - 1])} ${len.unit}; FS/target from ${formatValue(vMin)} to ${formatValue(vMax)}.`;

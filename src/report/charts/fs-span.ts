@@ -78,7 +78,7 @@ export function fsSpanSvg(curve: SpanCurve, maxSpan: MaxSpanReport | null, optio
   const hi = Math.min(1e4, Math.max(2, max(all) ?? 2));
   const yLo = 10 ** Math.floor(Math.log10(lo));
   const yHi = 10 ** Math.ceil(Math.log10(hi));
-  const y = scaleLog().domain([yLo, yHi]).range([bottom, top]).clamp(true);
+  const y = scaleLog().domain([yLo, yHi]).range([bottom, top]); // values beyond are clipped
   const X = spans.map((s) => len.convert(s));
   const xMax = max(X) ?? 1;
   const x = scaleLinear().domain([min(X) ?? 0, xMax]).range([left, right]);

@@ -104,6 +104,12 @@ export function strataColumnSvg(project: Project, analysis: Analysis | null, opt
     );
   });
 
+  if (thick[0] * k >= 12) {
+    parts.push(
+      `<text x="${num(right - 6)}" y="${num(roofY - 4)}" font-size="9" text-anchor="end" stroke="#ffffff" stroke-width="3" paint-order="stroke">immediate roof</text>`,
+    );
+  }
+
   // Loads: surcharge arrows on top, horizontal stress note.
   if (project.loads.surcharge_kPa > 0) {
     const yT = top - 2;
@@ -116,7 +122,7 @@ export function strataColumnSvg(project: Project, analysis: Analysis | null, opt
   const notes: string[] = [];
   if (project.loads.horizontalStress_MPa > 0) notes.push(`horizontal stress ${formatValue(stress.convert(project.loads.horizontalStress_MPa))} ${stress.unit}`);
   if (project.loads.support_kPa > 0) notes.push(`support ${formatValue(press.convert(project.loads.support_kPa))} ${press.unit}`);
-  if (notes.length) parts.push(text(width - 12, 20, notes.join('; '), { anchor: 'end', size: 10 }));
+  if (notes.length) parts.push(text(12, 36, `Loads: ${notes.join('; ')}`, { size: 10 }));
 
   // Bending groups.
   const bracketX = right + 10;
@@ -171,8 +177,10 @@ export function strataColumnSvg(project: Project, analysis: Analysis | null, opt
   layers.forEach((layer, i) => {
     const yl = placed[i];
     parts.push(`<path d="M${num(right)},${num(wanted[i])}L${num(labelX - 4)},${num(yl)}" fill="none" stroke="${INK.muted}" stroke-width="0.6"/>`);
-    const name = layer.name || `layer ${i + 1}`;
-    parts.push(text(labelX, yl - 1, i === 0 ? `${name} (immediate roof)` : name, { size: 11, weight: 'bold' }));
+    const full = layer.name || `layer ${i + 1}`;
+    // Long names are shortened on the drawing; the full name is in the layer's tooltip and the description.
+    const name = full.length > 28 ? full.slice(0, 27) + '…' : full;
+    parts.push(text(labelX, yl - 1, name, { size: 11, weight: 'bold' }));
     parts.push(text(labelX, yl + 11, `t = ${formatValue(len.convert(layer.thickness_m))} ${len.unit} · ${layer.rockClass}`, { size: 10, fill: INK.muted }));
   });
 

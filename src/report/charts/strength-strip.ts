@@ -92,7 +92,7 @@ export function strengthStripSvg(lab: LabDetail, options: StrengthStripOptions):
   const charX = finite(lab.characteristic_MPa) ? X(lab.characteristic_MPa) : null;
   const charLeft = meanX !== null && charX !== null && charX <= meanX;
   if (finite(lab.mean_MPa)) {
-    const nText = lab.n > 0 ? ` (n = ${lab.n})` : '';
+    const nText = lab.n > 0 ? ` (direct, n = ${lab.n})` : ' (direct)';
     refLine(lab.mean_MPa, `mean ${formatValue(st.convert(lab.mean_MPa))} ${st.unit}${nText}`, '6 3', PALETTE.black, 60, charLeft ? 'start' : 'end');
   }
   if (finite(lab.characteristic_MPa)) {

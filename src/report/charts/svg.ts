@@ -17,10 +17,13 @@ export function escapeXml(text: unknown): string {
     .replace(/'/g, '&apos;');
 }
 
-/** A coordinate rounded to ≤ 2 decimals for the markup (never NaN, never "-0"). */
+/**
+ * A coordinate rounded to ≤ 2 decimals for the markup (never NaN, never "-0"); clamped to
+ * ±1e6 so that no exponent notation can appear.
+ */
 export function num(value: number): string {
   if (!Number.isFinite(value)) return '0';
-  const rounded = Math.round(value * 100) / 100;
+  const rounded = Math.round(Math.max(-1e6, Math.min(1e6, value)) * 100) / 100;
   return Object.is(rounded, -0) || rounded === 0 ? '0' : String(rounded);
 }
 
@@ -206,7 +209,7 @@ export function wrapText(content: string, width: number, maxLines = 4): string[]
   if (current) lines.push(current);
   if (lines.length > maxLines) {
     const kept = lines.slice(0, maxLines);
-    kept[maxLines - 1] = kept[maxLines - 1].replace(/\s*\S*$/, '') + ' …';
+    kept[maxLines - 1] = kept[maxLines - 1] + ' …';
     return kept;
   }
   return lines;

@@ -1,0 +1,47 @@
+import { describe, expect, it } from 'vitest';
+import { designChartSvg } from '../../../src/report/charts/design-chart';
+import type { Mode } from '../../../src/model/types';
+import { expectEscaped, expectLabels, expectNoBadNumbers, expectWellFormed } from './contract';
+import { EVIL, design } from './fixtures';
+
+describe('designChartSvg', () => {
+  it('designChartSvg(chart, tension, SI) has Span (m) × Thickness (m), a bold labelled target contour and the current point', () => {
+    const svg = designChartSvg(design(), 'tension', { units: 'SI', currentSpan_m: 6, currentThickness_m: 0.45 });
+    expectWellFormed(svg);
+    expectNoBadNumbers(svg);
+    expectLabels(svg, ['Span (m)', 'Thickness (m)', 'FS = target (4)', 'current design (6 m, 0.45 m)', 'below target', 'Contours of FS / target, target FS 4']);
+    expect(svg.match(/class="contour target"/g)).toHaveLength(1);
+    expect(svg).toMatch(/class="contour target"[^>]*stroke-width="2.8"/);
+    expect(svg).toContain('class="current-point"');
+  });
+
+  it('designChartSvg(chart, crushing, US) labels Span (ft) and Thickness (ft)', () => {
+    const svg = designChartSvg(design(), 'crushing', { units: 'US', currentSpan_m: 6, currentThickness_m: 0.45 });
+    expectWellFormed(svg);
+    expectNoBadNumbers(svg);
+    // 6 / 0.3048 = 19.69 ft; 0.45 / 0.3048 = 1.48 ft (hand)
+    expectLabels(svg, ['Span (ft)', 'Thickness (ft)', 'current design (19.69 ft, 1.48 ft)', 'FS = target (2)']);
+  });
+
+  it('designChartSvg renders every mode; a mode that does not apply says so', () => {
+    for (const mode of ['tension', 'crushing', 'deflection', 'snapThrough'] as Mode[]) {
+      const svg = designChartSvg(design(), mode, { units: 'SI' });
+      expectWellFormed(svg);
+      expectNoBadNumbers(svg);
+      expect(svg).toContain('class="contour target"');
+    }
+    const none = designChartSvg(design(), 'sliding', { units: 'SI' });
+    expectWellFormed(none);
+    expectLabels(none, ['sliding: does not apply']);
+  });
+
+  it('designChartSvg notes a current design outside the chart instead of drawing it', () => {
+    const svg = designChartSvg(design(), 'tension', { units: 'SI', currentSpan_m: 40, currentThickness_m: 0.45 });
+    expectLabels(svg, ['The current design lies outside this chart.']);
+    expect(svg).not.toContain('class="current-point"');
+  });
+
+  it('designChartSvg escapes a hostile title', () => {
+    expectEscaped(designChartSvg(design(), 'tension', { units: 'SI', title: EVIL }));
+  });
+});
