@@ -41,19 +41,19 @@ export class SpanFinderView extends LitElement {
   @property({ attribute: false }) minThickness: number | null = null;
   @property({ type: Number }) chartLayer = 0;
 
-  private chart = '';
+  private spanChartSvg = '';
 
   protected override willUpdate(changed: PropertyValues<this>): void {
     if (changed.has('curve') || changed.has('analysis') || changed.has('units') || changed.has('project')) {
-      this.chart = '';
+      this.spanChartSvg = '';
       if (this.curve) {
         try {
-          this.chart = fsSpanSvg(this.curve, this.analysis?.report.maxSpan_m ?? null, {
+          this.spanChartSvg = fsSpanSvg(this.curve, this.analysis?.report.maxSpan_m ?? null, {
             units: this.units,
             basis: this.project?.design.basis ?? 'intact',
           });
         } catch {
-          this.chart = '';
+          this.spanChartSvg = '';
         }
       }
     }
@@ -135,8 +135,8 @@ export class SpanFinderView extends LitElement {
           Use this span${adopt !== null ? ` (${displayText(adopt, 'length', u, 4)})` : ''}
         </button>
       </div>
-      ${this.chart
-        ? html`<div class="chart" data-role="fs-span-chart">${unsafeSVG(this.chart)}</div>`
+      ${this.spanChartSvg
+        ? html`<div class="chart" data-role="fs-span-chart">${unsafeSVG(this.spanChartSvg)}</div>`
         : html`<p class="empty">No FS-versus-span curve.</p>`}
       <h3>Minimum thickness</h3>
       <div class="controls">
