@@ -177,6 +177,17 @@ export class BeamChartsView extends LitElement {
       </div></div>
       ${p.opening.type === 'slab'
         ? html`<h3>Roof slab: bending stress</h3>
+            ${lr?.plate
+              ? html`<p class="note">
+                  Plate (slab) largest tension
+                  ${tracedNumber(`layers[${i}].plate.maxTension_MPa`, displayValue(lr.plate.maxTension_MPa, 'stress', u).text, displayValue(lr.plate.maxTension_MPa, 'stress', u).unit, lr.plate.maxTension_MPa)}
+                  at the ${lr.plate.at}; deflection
+                  ${tracedNumber(`layers[${i}].plate.deflection_mm`, displayValue(lr.plate.deflection_mm, 'deflection', u).text, displayValue(lr.plate.deflection_mm, 'deflection', u).unit, lr.plate.deflection_mm)}
+                  (β = ${tracedNumber(`layers[${i}].plate.beta`, displayValue(lr.plate.beta, null, u, 4).text, '', lr.plate.beta)},
+                  α = ${tracedNumber(`layers[${i}].plate.alpha`, displayValue(lr.plate.alpha, null, u, 4).text, '', lr.plate.alpha)}).
+                  The beam panel above shows the plane-strain strip across the short span for comparison.
+                </p>`
+              : nothing}
             ${this.slabSvg ? html`<div class="chart" data-role="slab-contour">${unsafeSVG(this.slabSvg)}</div>` : html`<p class="empty">No slab stress field.</p>`}`
         : nothing}
       <h3>Design chart: span × thickness</h3>

@@ -1,0 +1,124 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { readFileSync, writeFileSync } from 'node:fs';
+import { resolve } from 'node:path';
+import { CAUTION } from '../../src/model/caution';
+import { ARTIFACTS, startHarness, type Harness } from './results-harness';
+
+let h: Harness;
+beforeAll(async () => {
+  h = await startHarness();
+});
+afterAll(async () => {
+  await h?.close();
+});
+
+type Page = import('playwright-core').Page;
+const state = (page: Page) => page.evaluate(() => (window as any).__lamina.state());
+
+async function reportReady(page: Page): Promise<void> {
+  await page.locator('report-view [data-role="report"] article.lamina-report').waitFor({ timeout: 20_000 });
+}
+
+/** Count PDF page objects: "/Type /Page" not followed by "s" (that would be the /Pages tree). */
+function pdfPageCount(pdf: Buffer): number {
+  return (pdf.toString('latin1').match(/\/Type\s*\/Page(?!s)/g) ?? []).length;
+}
+
+describe('<report-view> in the app (coal-room demo)', () => {
+  it('shows the report with the caution and every layer', async () => {
+    const page = await h.open();
+    await reportReady(page);
+    const text = await page.locator('report-view [data-role="report"]').innerText();
+    expect(text.replace(/\s+/g, ' ')).toContain(CAUTION);
+    const s = await state(page);
+    for (const layer of s.project.layers) expect(text).toContain(layer.name);
+    await page.locator('report-view').screenshot({ path: resolve(ARTIFACTS, 'results-report.png'), clip: undefined });
+    expect(h.problems).toEqual([]);
+  });
+
+  it('print media shows only the report, with the caution and no buttons or inputs', async () => {
+    const page = await h.open();
+    await reportReady(page);
+    await page.emulateMedia({ media: 'print' });
+    const seen = await page.evaluate(() => {
+      const visible = (el: Element) => {
+        const r = (el as HTMLElement).getBoundingClientRect();
+        return r.width > 0 && r.height > 0 && getComputedStyle(el).visibility !== 'hidden';
+      };
+      const deep = (root: Document | ShadowRoot, sel: string, out: Element[] = []) => {
+        root.querySelectorAll(sel).forEach((e) => out.push(e));
+        root.querySelectorAll('*').forEach((e) => e.shadowRoot && deep(e.shadowRoot, sel, out));
+        return out;
+      };
+      const container = document.getElementById('lamina-print-report');
+      return {
+        containerVisible: !!container && visible(container),
+        containerText: container?.innerText ?? '',
+        visibleButtons: deep(document, 'button').filter(visible).length,
+        visibleInputs: deep(document, 'input, select, textarea').filter(visible).length,
+        appVisible: visible(document.querySelector('lamina-app')!),
+      };
+    });
+    expect(seen.containerVisible).toBe(true);
+    expect(seen.appVisible).toBe(false);
+    expect(seen.visibleButtons).toBe(0);
+    expect(seen.visibleInputs).toBe(0);
+    expect(seen.containerText.replace(/\s+/g, ' ')).toContain(CAUTION);
+    const s = await state(page);
+    for (const layer of s.project.layers) expect(seen.containerText).toContain(layer.name);
+    await page.screenshot({ path: resolve(ARTIFACTS, 'results-print.png'), fullPage: false });
+    await page.emulateMedia({ media: 'screen' });
+    expect(h.problems).toEqual([]);
+  });
+
+  it('page.pdf() of the app prints the report over several pages', async () => {
+    const page = await h.open();
+    await reportReady(page);
+    const pdf = await page.pdf({ format: 'A4', printBackground: true });
+    writeFileSync(resolve(ARTIFACTS, 'results-app-print.pdf'), pdf);
+    expect(pdf.subarray(0, 5).toString('latin1')).toBe('%PDF-');
+    expect(pdfPageCount(pdf)).toBeGreaterThanOrEqual(2);
+    expect(h.problems).toEqual([]);
+  });
+
+  it('"Download HTML report" saves <title>-report.html: a whole HTML file with the caution and each layer', async () => {
+    const page = await h.open();
+    await reportReady(page);
+    const s = await state(page);
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      page.locator('report-view [data-role="download"]').click(),
+    ]);
+    expect(download.suggestedFilename()).toBe(`${s.project.title.replace(/[\\/:*?"<>|]+/g, '-')}-report.html`);
+    const path = resolve(ARTIFACTS, 'results-download-report.html');
+    await download.saveAs(path);
+    const html = readFileSync(path, 'utf8');
+    expect(html.startsWith('<!doctype html>')).toBe(true);
+    expect(html).toContain(CAUTION);
+    for (const layer of s.project.layers) expect(html).toContain(layer.name);
+    expect(html).not.toMatch(/NaN|Infinity/);
+    expect(h.problems).toEqual([]);
+  });
+
+  it('"Print / Save as PDF" calls window.print()', async () => {
+    const page = await h.open();
+    await reportReady(page);
+    await page.evaluate(() => {
+      (window as any).__printed = 0;
+      window.print = () => {
+        (window as any).__printed++;
+      };
+    });
+    await page.locator('report-view [data-role="print"]').click();
+    expect(await page.evaluate(() => (window as any).__printed)).toBe(1);
+    expect(h.problems).toEqual([]);
+  });
+
+  it('US units: the report follows the display units', async () => {
+    const page = await h.open();
+    await reportReady(page);
+    await page.locator('project-bar input[type="radio"][value="US"]').check();
+    await expect.poll(async () => (await page.locator('report-view [data-role="report"]').innerText()).includes(' ft'), { timeout: 10_000 }).toBe(true);
+    expect(h.problems).toEqual([]);
+  });
+});
