@@ -1,7 +1,11 @@
 /**
  * Minimum thickness of one layer for the current span and targets (METHODS §11, extended):
- * the smallest t with every applicable check meeting its target, all else fixed (the strength
- * chain, layering and loads recomputed for each trial thickness), scanned upward then bisected.
+ * the smallest t at which every applicable check OF THAT LAYER meets its target, all else fixed
+ * (the strength chain, layering and loads recomputed for each trial thickness, so a thicker,
+ * stiffer bed that picks up load from the beds above is accounted for), scanned upward from
+ * 1 cm then bisected to 1 mm. null when no thickness up to the search limit works, e.g. when
+ * the tension check needs a thick bed but the voussoir sliding check (FS = s·tanφ/(4z), which
+ * falls as the bed thickens) needs a thin one.
  */
 import type { Project } from '../model/types';
 import { smallestPassingValue } from '../mechanics/span-search';
@@ -19,7 +23,7 @@ export function minimumThickness(project: Project, layerIndex: number): number |
   const hi = Math.max(20, 3 * p.layers[layerIndex].thickness);
   const ratio = (t: number): number => {
     const state = evaluate(withThickness(p, layerIndex, t));
-    const g = governingCheck(layerChecks(state, p.design));
+    const g = governingCheck(layerChecks(state, p.design).filter((c) => c.layer === layerIndex));
     return g === null ? 1e12 : g.ratio;
   };
   return smallestPassingValue(ratio, THICKNESS_MIN_M, hi, { tolerance: THICKNESS_TOLERANCE_M });

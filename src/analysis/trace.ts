@@ -41,5 +41,5 @@ export const SOURCES = {
   voussoir: 'Diederichs & Kaiser (1999), IJRMMS 36:97–117; Brady & Brown, Rock Mechanics for Underground Mining, §8.4',
   plate: 'Kirchhoff thin-plate theory (Timoshenko & Woinowsky-Krieger 1959); Lamina Ritz solution',
   euler: 'Euler buckling of a strut, as used by Obert & Duvall (1967)',
-  lamina: 'Lamina (METHODS §10–§11)',
+  lamina: 'Lamina design rules (README, Methods and sources)',
 } as const;
