@@ -67,7 +67,8 @@ export function beamProfileSvg(profile: BeamProfile, options: BeamProfileOptions
   parts.push(axis({ scale: x, orient: 'bottom', at: p1.bottom, label: axisLabel('Distance along the span', len.unit), ticks: 8, gridTo: p1.top }));
   parts.push(axis({ scale: y1, orient: 'left', at: left, label: axisLabel('Net tension', st.unit), ticks: 6, gridTo: right }));
   parts.push(line(left, y1(0), right, y1(0), INK.axis, 1.2));
-  parts.push(text(right + 4, y1(0) + 3.5, 'zero', { size: 9, fill: INK.muted }));
+  // Right-hand labels of the stress panel, spread apart so that none overlap.
+  const side: Array<{ y: number; label: string; fill: string; bold: boolean }> = [{ y: y1(0), label: 'zero', fill: INK.muted, bold: false }];
   parts.push(`<g clip-path="url(#${ID}p1)">`);
   parts.push(`<path class="top-fibre" d="${path(T, y1)}" fill="none" stroke="${TOP.color}" stroke-width="2"/>`);
   parts.push(`<path class="bottom-fibre" d="${path(B, y1)}" fill="none" stroke="${BOTTOM.color}" stroke-width="2" stroke-dasharray="${BOTTOM.dash}"/>`);
@@ -79,12 +80,15 @@ export function beamProfileSvg(profile: BeamProfile, options: BeamProfileOptions
   }
   if (design !== null) {
     parts.push(line(left, y1(design), right, y1(design), PALETTE.purple, 1.5, '2 3'));
-    parts.push(text(right + 4, y1(design) + 3.5, `design ${formatValue(design)} ${st.unit}`, { size: 9, fill: PALETTE.purple, weight: 'bold' }));
+    side.push({ y: y1(design), label: `design ${formatValue(design)} ${st.unit}`, fill: PALETTE.purple, bold: true });
   }
   const iTop = T.indexOf(max(T) ?? 0);
   const iBot = B.indexOf(max(B) ?? 0);
-  parts.push(text(right + 8, p1.top + 14, `top max ${formatValue(T[iTop])} ${st.unit}`, { size: 9, fill: TOP.color }));
-  parts.push(text(right + 8, p1.top + 26, `bottom max ${formatValue(B[iBot])} ${st.unit}`, { size: 9, fill: BOTTOM.color }));
+  side.push({ y: y1(T[iTop]), label: `top max ${formatValue(T[iTop])} ${st.unit}`, fill: TOP.color, bold: false });
+  side.push({ y: y1(B[iBot]), label: `bottom max ${formatValue(B[iBot])} ${st.unit}`, fill: BOTTOM.color, bold: false });
+  side.sort((a, b) => a.y - b.y);
+  for (let i = 1; i < side.length; i++) if (side[i].y - side[i - 1].y < 11) side[i].y = side[i - 1].y + 11;
+  for (const l of side) parts.push(text(right + 6, l.y + 3.5, l.label, { size: 9, fill: l.fill, weight: l.bold ? 'bold' : 'normal' }));
   parts.push(
     legend(
       [
@@ -104,7 +108,7 @@ export function beamProfileSvg(profile: BeamProfile, options: BeamProfileOptions
   parts.push(`<path class="deflection" d="${path(D, y2)}" fill="none" stroke="${DEFLECTION.color}" stroke-width="2"/>`);
   const iMax = D.indexOf(dHi);
   parts.push(marker(DEFLECTION.marker, x(X[iMax]), y2(D[iMax]), DEFLECTION.color, 4));
-  parts.push(text(right + 4, y2(dHi) + 3.5, `max ${formatValue(dHi)} ${def.unit}`, { size: 9, fill: DEFLECTION.color, weight: 'bold' }));
+  parts.push(text(right + 8, y2(dHi) + 3.5, `max ${formatValue(dHi)} ${def.unit}`, { size: 9, fill: DEFLECTION.color, weight: 'bold' }));
 
   const desc =
     `Layer ${profile.layer + 1}: largest top-fibre net tension ${formatValue(T[iTop])} ${st.unit}, ` +

@@ -6,7 +6,7 @@
 import { extent, scaleLinear } from 'd3';
 import type { LabDetail } from '../../analysis/types';
 import type { UnitSystem } from '../../model/units';
-import { INK, PALETTE, axis, axisLabel, displayUnit, escapeXml, formatValue, legend, line, marker, num, svgDocument, text } from './svg';
+import { INK, PALETTE, axis, axisLabel, displayUnit, escapeXml, formatValue, legend, line, marker, svgDocument, text } from './svg';
 
 export interface StrengthStripOptions {
   units: UnitSystem;
