@@ -127,4 +127,24 @@ describe('app: editing', () => {
     expect(errors).toEqual([]);
     await context.close();
   });
+
+  it('switching the opening to a slab shows the long side (starting square) and the report gains the plate check', async () => {
+    const { page, context, errors } = await openApp(browser, server.url);
+    expect(await page.locator('quantity-input[path="opening.length_m"]').count()).toBe(0);
+    await page.locator('opening-loads-form #opening-type').selectOption('slab');
+    await waitForResults(page);
+    const p = JSON.parse(await projectJson(page));
+    expect(p.opening.type).toBe('slab');
+    expect(p.opening.length_m).toBe(p.opening.span_m);
+    expect(await fieldFor(page, 'opening.length_m').inputValue()).toBe(String(p.opening.span_m));
+    expect(await page.evaluate(() => window.__lamina!.state().analysis!.report.layers[0].plate !== null)).toBe(true);
+    await fieldFor(page, 'opening.length_m').fill('9');
+    await waitForResults(page);
+    expect(JSON.parse(await projectJson(page)).opening.length_m).toBe(9);
+    await page.locator('opening-loads-form #opening-type').selectOption('beam');
+    await waitForResults(page);
+    expect(JSON.parse(await projectJson(page)).opening.length_m).toBeNull();
+    expect(errors).toEqual([]);
+    await context.close();
+  });
 });

@@ -138,6 +138,14 @@ export class LaminaApp extends LitElement {
       section {
         margin-top: 1.2rem;
       }
+      /* Off-screen sections skip layout and paint until scrolled near (results re-render on
+         every edit; only what is on screen needs to be laid out at once). */
+      section.inputs,
+      section.results,
+      section.print {
+        content-visibility: auto;
+        contain-intrinsic-size: auto 900px;
+      }
       section > h2 {
         scroll-margin-top: 9rem;
       }
@@ -181,6 +189,7 @@ export class LaminaApp extends LitElement {
         }
         section.print {
           margin-top: 0.5rem;
+          content-visibility: visible;
         }
       }
     `,

@@ -36,6 +36,8 @@ export interface AppState {
   inputWarnings: FieldError[];
   /** A one-line message for the user (file opened, link copied, autosave ignored …). */
   notice: string | null;
+  /** Milliseconds spent in each step of the last analysis (for the benchmark). */
+  timings: { analyse: number; curve: number; chart: number; minThickness: number };
 }
 
 export type ValidationOutcome =
@@ -98,6 +100,7 @@ export class ProjectStore {
       pending: true,
       inputWarnings: checked.warnings.map(plain),
       notice: null,
+      timings: { analyse: 0, curve: 0, chart: 0, minThickness: 0 },
     };
     this.runAnalysis();
   }
@@ -220,30 +223,36 @@ export class ProjectStore {
   private computeChart(project: Project, layer: number): Pick<AppState, 'chart' | 'minThickness_m'> {
     let chart: DesignChart | null = null;
     let minThickness_m: number | null = null;
+    const t0 = now();
     try {
       chart = this.deps.designChart(project, layer);
     } catch {
       chart = null;
     }
+    const t1 = now();
     try {
       const t = this.deps.minimumThickness(project, layer);
       minThickness_m = typeof t === 'number' && Number.isFinite(t) ? t : null;
     } catch {
       minThickness_m = null;
     }
+    this.chartTimings = { chart: t1 - t0, minThickness: now() - t1 };
     return { chart, minThickness_m };
   }
+  private chartTimings = { chart: 0, minThickness: 0 };
 
   private runAnalysis(): void {
     const project = this.state.project;
     let analysis: Analysis | null = null;
     let curve: SpanCurve | null = null;
     let error: string | null = null;
+    const t0 = now();
     try {
       analysis = this.deps.analyse(project);
     } catch (err) {
       error = `The analysis failed: ${errorText(err)}`;
     }
+    const t1 = now();
     if (analysis) {
       try {
         curve = this.deps.spanCurve(project);
@@ -251,11 +260,14 @@ export class ProjectStore {
         curve = null;
       }
     }
+    const t2 = now();
     const n = project.layers.length;
     let chartLayer = Math.min(this.state.chartLayer, n - 1);
     if (!this.chartLayerChosen && analysis) chartLayer = governingLayerIndex(analysis);
+    this.chartTimings = { chart: 0, minThickness: 0 };
     const extra = analysis ? this.computeChart(project, chartLayer) : { chart: null, minThickness_m: null };
-    this.set({ analysis, curve, error, chartLayer, pending: false, ...extra });
+    const timings = { analyse: t1 - t0, curve: t2 - t1, ...this.chartTimings };
+    this.set({ analysis, curve, error, chartLayer, pending: false, timings, ...extra });
   }
 
   private set(patch: Partial<AppState>): void {
@@ -268,6 +280,8 @@ export class ProjectStore {
     for (const l of this.listeners) l(this.state);
   }
 }
+
+const now = (): number => (typeof performance !== 'undefined' ? performance.now() : Date.now());
 
 /** Index of the governing layer (the report names it), 0 when there is none. */
 export function governingLayerIndex(analysis: Analysis): number {
