@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { resolve } from 'node:path';
-import { ARTIFACTS, editNow, focusedPath, startHarness, type Harness } from './results-harness';
+import { ARTIFACTS, editNow, focusedPath, startHarness, type Harness, text } from './results-harness';
 
 const MODES = ['tension', 'crushing', 'sliding', 'deflection', 'snapThrough'];
 const STATUS_TEXT = /^(meets ✓|below ✗|n\/a –|info ○)$/;
@@ -23,11 +23,11 @@ describe('<checks-table> in the app (coal-room demo)', () => {
       for (const mode of MODES) {
         const row = page.locator(`checks-table tr[data-layer="${i}"][data-mode="${mode}"]`);
         expect(await row.count(), `layer ${i} ${mode}`).toBe(1);
-        const status = (await row.locator('.status').innerText()).trim();
+        const status = (await text(row.locator('.status')));
         expect(status, `status of layer ${i} ${mode}`).toMatch(STATUS_TEXT);
       }
     }
-    const verdict = (await page.locator('checks-table [data-role="verdict"]').innerText()).trim();
+    const verdict = (await text(page.locator('checks-table [data-role="verdict"]')));
     expect(verdict).toMatch(/^Governing: tension in Laminated grey shale, FS [\d.]+ against a target of 4 \(below ✗\)/);
     expect(verdict).toContain('the intact beam would crack');
     await page.locator('checks-table').screenshot({ path: resolve(ARTIFACTS, 'results-checks.png') });
@@ -40,20 +40,20 @@ describe('<checks-table> in the app (coal-room demo)', () => {
     await button.click();
     const dialog = page.locator('trace-dialog dialog[open]');
     await dialog.waitFor();
-    expect(await page.locator('trace-dialog [data-role="trace-path"]').innerText()).toBe('layers[0].elastic.fsTension');
-    const formula = await page.locator('trace-dialog [data-role="formula"]').innerText();
+    expect(await text(page.locator('trace-dialog [data-role="trace-path"]'))).toBe('layers[0].elastic.fsTension');
+    const formula = await text(page.locator('trace-dialog [data-role="formula"]'));
     expect(formula.length).toBeGreaterThan(0);
     expect(formula).not.toContain('*'); // rendered, not the raw mathjs text
-    const substituted = await page.locator('trace-dialog [data-role="substituted"]').innerText();
+    const substituted = await text(page.locator('trace-dialog [data-role="substituted"]'));
     expect(substituted).toMatch(/MPa/);
     expect(await page.locator('trace-dialog [data-role="values"] tbody tr').count()).toBeGreaterThan(0);
-    expect((await page.locator('trace-dialog [data-role="source"]').innerText()).trim().length).toBeGreaterThan(0);
+    expect((await text(page.locator('trace-dialog [data-role="source"]'))).length).toBeGreaterThan(0);
     await page.locator('trace-dialog dialog').screenshot({ path: resolve(ARTIFACTS, 'results-trace-dialog.png') });
     await page.screenshot({ path: resolve(ARTIFACTS, 'results-trace-dialog-page.png') });
 
     // Step to the previous related entry of the same layer, then close with Esc.
     await page.locator('trace-dialog [data-role="prev"]').click();
-    const stepped = await page.locator('trace-dialog [data-role="trace-path"]').innerText();
+    const stepped = await text(page.locator('trace-dialog [data-role="trace-path"]'));
     expect(stepped).not.toBe('layers[0].elastic.fsTension');
     expect(stepped).toMatch(/^(detail\.)?layers\[0\]/);
     await page.keyboard.press('Escape');
@@ -69,7 +69,7 @@ describe('<checks-table> in the app (coal-room demo)', () => {
       table.dispatchEvent(new CustomEvent('show-trace', { detail: { path: 'layers[0].nothing' }, bubbles: true, composed: true }));
     });
     await page.locator('trace-dialog [data-role="missing"]').waitFor();
-    expect(await page.locator('trace-dialog [data-role="missing"]').innerText()).toContain('layers[0].nothing');
+    expect(await text(page.locator('trace-dialog [data-role="missing"]'))).toContain('layers[0].nothing');
     await page.locator('trace-dialog [data-role="close"]').click();
     await page.locator('trace-dialog dialog[open]').waitFor({ state: 'detached' });
     expect(h.problems).toEqual([]);
@@ -90,8 +90,8 @@ describe('<checks-table> in the app (coal-room demo)', () => {
       return count + document.querySelectorAll('#lamina-print-report img').length;
     });
     expect(injected).toBe(0);
-    expect(await page.locator('checks-table tbody th').first().innerText()).toBe(evil);
-    expect(await page.locator('strength-chain-view h3').first().innerText()).toBe(evil);
+    expect(await text(page.locator('checks-table tbody th').first())).toBe(evil);
+    expect(await text(page.locator('strength-chain-view h3').first())).toBe(evil);
     expect(h.problems).toEqual([]);
   });
 
@@ -99,11 +99,11 @@ describe('<checks-table> in the app (coal-room demo)', () => {
     const page = await h.open();
     const before = await page.evaluate(() => JSON.stringify((window as any).__lamina.state().analysis.report));
     const demand = page.locator('checks-table tr[data-layer="0"][data-mode="tension"] td.num').first();
-    expect(await demand.innerText()).toContain('MPa');
+    expect(await text(demand)).toContain('MPa');
     await page.locator('project-bar input[type="radio"][value="US"]').check();
     await page.waitForFunction(() => (window as any).__lamina.state().units === 'US');
     await page.locator('checks-table').evaluate((el: any) => el.updateComplete);
-    expect(await demand.innerText()).toContain('psi');
+    expect(await text(demand)).toContain('psi');
     const after = await page.evaluate(() => JSON.stringify((window as any).__lamina.state().analysis.report));
     expect(after).toBe(before);
     // The SI value behind the shown number is unchanged.

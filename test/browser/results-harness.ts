@@ -98,3 +98,11 @@ export async function focusedPath(page: Page): Promise<string | null> {
     return el instanceof HTMLElement ? (el.dataset.path ?? null) : null;
   });
 }
+
+/**
+ * The text of a located element, whitespace collapsed. Uses textContent, not innerText: the app
+ * skips rendering off-screen sections (content-visibility: auto), where innerText is empty.
+ */
+export async function text(locator: import('playwright-core').Locator): Promise<string> {
+  return ((await locator.textContent()) ?? '').replace(/\s+/g, ' ').trim();
+}

@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { readFileSync, writeFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { CAUTION } from '../../src/model/caution';
-import { ARTIFACTS, startHarness, type Harness } from './results-harness';
+import { ARTIFACTS, startHarness, type Harness, text } from './results-harness';
 
 let h: Harness;
 beforeAll(async () => {
@@ -28,11 +28,11 @@ describe('<report-view> in the app (coal-room demo)', () => {
   it('shows the report with the caution and every layer', async () => {
     const page = await h.open();
     await reportReady(page);
-    const text = await page.locator('report-view [data-role="report"]').innerText();
-    expect(text.replace(/\s+/g, ' ')).toContain(CAUTION);
+    const shown = await text(page.locator('report-view [data-role="report"]'));
+    expect(shown).toContain(CAUTION);
     const s = await state(page);
-    for (const layer of s.project.layers) expect(text).toContain(layer.name);
-    await page.locator('report-view').screenshot({ path: resolve(ARTIFACTS, 'results-report.png'), clip: undefined });
+    for (const layer of s.project.layers) expect(shown).toContain(layer.name);
+    await page.locator('report-view [data-role="report"] section.lr-section-verdict').screenshot({ path: resolve(ARTIFACTS, 'results-report-verdict.png') });
     expect(h.problems).toEqual([]);
   });
 
@@ -118,7 +118,7 @@ describe('<report-view> in the app (coal-room demo)', () => {
     const page = await h.open();
     await reportReady(page);
     await page.locator('project-bar input[type="radio"][value="US"]').check();
-    await expect.poll(async () => (await page.locator('report-view [data-role="report"]').innerText()).includes(' ft'), { timeout: 10_000 }).toBe(true);
+    await expect.poll(async () => (await text(page.locator('report-view [data-role="report"]'))).includes(' ft'), { timeout: 10_000 }).toBe(true);
     expect(h.problems).toEqual([]);
   });
 });

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { resolve } from 'node:path';
-import { ARTIFACTS, startHarness, type Harness } from './results-harness';
+import { ARTIFACTS, startHarness, type Harness, text } from './results-harness';
 
 let h: Harness;
 beforeAll(async () => {
@@ -19,11 +19,11 @@ describe('<span-finder-view> in the app (coal-room demo)', () => {
     const spans = s.analysis.report.maxSpan_m;
     for (const mode of ['tension', 'crushing', 'sliding', 'snapThrough', 'deflection']) {
       const cell = page.locator(`span-finder-view tr[data-mode="${mode}"] td.num`);
-      const text = (await cell.innerText()).trim();
+      const shown = await text(cell);
       if (spans[mode] === null) {
-        expect(text, mode).toBe('—');
+        expect(shown, mode).toBe('—');
       } else {
-        expect(text, mode).toMatch(/\sm$/);
+        expect(shown, mode).toMatch(/\sm$/);
         const si = await cell.locator('button.traced').getAttribute('data-si-value');
         expect(Number(si)).toBe(spans[mode]);
       }
@@ -68,9 +68,9 @@ describe('<span-finder-view> in the app (coal-room demo)', () => {
     await page.locator('project-bar input[type="radio"][value="US"]').check();
     await page.waitForFunction(() => (window as any).__lamina.state().units === 'US');
     await page.locator('span-finder-view').evaluate((el: any) => el.updateComplete);
-    expect((await page.locator('span-finder-view tr[data-mode="tension"] td.num').innerText()).trim()).toMatch(/\sft$/);
-    expect(await page.locator('span-finder-view [data-role="fs-span-chart"]').innerText()).toContain('Span (ft)');
-    expect(await page.locator('span-finder-view [data-role="use-span"]').innerText()).toMatch(/ft\)$/);
+    expect((await text(page.locator('span-finder-view tr[data-mode="tension"] td.num')))).toMatch(/\sft$/);
+    expect(await text(page.locator('span-finder-view [data-role="fs-span-chart"]'))).toContain('Span (ft)');
+    expect(await text(page.locator('span-finder-view [data-role="use-span"]'))).toMatch(/ft\)$/);
     expect(JSON.stringify((await state(page)).analysis.report)).toBe(before);
     expect(h.problems).toEqual([]);
   });
@@ -80,7 +80,7 @@ describe('<span-finder-view> in the app (coal-room demo)', () => {
     await page.locator('span-finder-view select[data-role="chart-layer"]').selectOption('1');
     await page.waitForFunction(() => (window as any).__lamina.state().chartLayer === 1);
     const s = await state(page);
-    await expect.poll(() => page.locator('span-finder-view [data-role="min-thickness"]').innerText()).toContain(s.project.layers[1].name);
+    await expect.poll(() => text(page.locator('span-finder-view [data-role="min-thickness"]'))).toContain(s.project.layers[1].name);
     await expect.poll(() => page.locator('beam-charts-view select[data-role="chart-layer"]').inputValue()).toBe('1');
     await page.locator('beam-charts-view').screenshot({ path: resolve(ARTIFACTS, 'results-beam-charts.png') });
     expect(h.problems).toEqual([]);

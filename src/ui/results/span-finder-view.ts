@@ -14,6 +14,7 @@ import type { Mode, Project } from '../../model/types';
 import type { UnitSystem } from '../../model/units';
 import type { Analysis, SpanCurve } from '../../analysis/types';
 import { fsSpanSvg } from '../../report/charts';
+import { numberText } from '../../report/number-text';
 import { MODE_NAME } from './check-rows';
 import { adoptableSpan } from './adoptable-span';
 import { displayText, displayValue } from './display-value';
@@ -84,6 +85,13 @@ export class SpanFinderView extends LitElement {
       : undefined;
     const spanWord = p.opening.type === 'cantilever' ? 'overhang' : p.opening.type === 'slab' ? 'short span' : 'span';
     const layerIndex = Math.min(Math.max(0, this.chartLayer), p.layers.length - 1);
+    // Sliding never limits the span from above (its FS rises with span): a shortfall at the
+    // current span is stated here, as a shorter span would make it worse, not better.
+    const slidingFs = a.report.layers
+      .map((l) => l.voussoir?.fsSliding ?? null)
+      .filter((x): x is number => x !== null);
+    const leastSliding = slidingFs.length ? Math.min(...slidingFs) : null;
+    const slidingShort = leastSliding !== null && leastSliding < p.design.fsTarget.sliding;
     return html`
       <table>
         <caption>Largest ${spanWord} that meets each target (all else held fixed)</caption>
@@ -100,6 +108,10 @@ export class SpanFinderView extends LitElement {
               <td class="note">
                 ${v === null ? WHY_NULL[k] : v >= current ? 'meets the target at the current span' : 'below the current span: this mode fails now'}
                 ${jointed && k === 'tension' ? html` — not counted (design basis "jointed")` : nothing}
+                ${k === 'sliding' && slidingShort
+                  ? html`<br /><strong>Sliding falls short at the current ${spanWord}</strong> (least FS ${numberText(leastSliding, 3)} against
+                      ${numberText(p.design.fsTarget.sliding, 3)}); a shorter ${spanWord} makes it worse, so it must be resolved on its own.`
+                  : nothing}
               </td>
             </tr>`;
           })}
