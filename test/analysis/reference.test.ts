@@ -52,6 +52,7 @@ function compare(project: Project, label: string): void {
     expect(rel(v.deflection_mm!, f.voussoir.delta * 1e3) < 0.02 || Math.abs(v.deflection_mm! - f.voussoir.delta * 1e3) < 1e-3 * l.thickness_m * 1e3, `${at} δ ${v.deflection_mm} vs ${f.voussoir.delta * 1e3}`).toBe(true);
   });
   for (const m of ['tension', 'crushing', 'snapThrough', 'deflection'] as const) {
+    if (m === 'tension' && project.opening.type === 'slab') continue; // plate stress: not in the reference
     const a = r.maxSpan_m![m];
     const b = ref.maxSpan[m];
     if (a === null || b === null) {

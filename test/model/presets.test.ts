@@ -14,8 +14,8 @@ const brazilian = (s: Project['layers'][number]['tensile']['specimens'][number])
   (2000 * s.peakLoad_kN) / (Math.PI * s.diameter_mm * s.thickness_mm);
 
 describe('presets/*.lamina.json', () => {
-  it('the three demo presets are present', () => {
-    expect(files).toEqual(['coal-room-shale.lamina.json', 'drift-limestone.lamina.json', 'quarry-bench-overhang.lamina.json']);
+  it('the four demo presets are present', () => {
+    expect(files).toEqual(['coal-room-shale.lamina.json', 'drift-limestone.lamina.json', 'intersection-slab.lamina.json', 'quarry-bench-overhang.lamina.json']);
   });
 
   it.each(files)('%s passes validateProject with no errors and no warnings', (file) => {
