@@ -60,6 +60,9 @@ describe('app: editing', () => {
     const msg = page.locator('quantity-input[path="layers[0].thickness_m"] [role="alert"]');
     await expect.poll(() => msg.textContent()).toContain('layers[0].thickness_m: must be > 0');
     expect(JSON.parse(await projectJson(page)).layers[0].thickness_m).toBe(0.5);
+    // also on the fixed status line at the top, without the file-error box that would shift the sheet
+    expect(await page.locator('lamina-app .status-line').textContent()).toContain('Not applied — layers[0].thickness_m: must be > 0');
+    expect(await page.locator('lamina-app .file-errors').count()).toBe(0);
     await context.close();
   });
 

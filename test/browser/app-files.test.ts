@@ -31,7 +31,7 @@ describe('app: files, autosave and links', () => {
     const texts = await list.allTextContents();
     expect(texts.some((t) => t.startsWith('layers[1].thickness_m:'))).toBe(true);
     expect(texts.some((t) => t.startsWith('opening.span_m:'))).toBe(true);
-    expect(await page.locator('lamina-app .notice').textContent()).toContain('bad.lamina.json: not opened');
+    expect(await page.locator('lamina-app .status-line').textContent()).toContain('bad.lamina.json: not opened');
     expect(await projectJson(page)).toBe(before);
     // text that is not JSON at all is refused with its position, too
     await page.locator('#open-file').setInputFiles({ name: 'broken.lamina.json', mimeType: 'application/json', buffer: Buffer.from('{"schema": "lamina/1",') });
@@ -83,7 +83,7 @@ describe('app: files, autosave and links', () => {
       }
     });
     const { page, errors } = await openApp(browser, server.url, { context });
-    expect(await page.locator('lamina-app .notice').textContent()).toMatch(/autosaved project could not be read/);
+    expect(await page.locator('lamina-app .status-line').textContent()).toMatch(/autosaved project could not be read/);
     expect(JSON.parse(await projectJson(page)).title).toMatch(/coal room/i);
     expect(errors).toEqual([]);
     await context.close();

@@ -118,8 +118,14 @@ export class LaminaApp extends LitElement {
       .messages {
         margin: 0.3rem 0;
       }
-      .notice {
+      .status-line {
+        min-height: 1.35em;
+        margin: 0.1rem 0;
         color: var(--lam-muted);
+        font-size: 0.92em;
+        white-space: nowrap;
+        overflow: hidden;
+        text-overflow: ellipsis;
       }
       .file-errors {
         border: 2px solid var(--lam-bad);
@@ -179,6 +185,7 @@ export class LaminaApp extends LitElement {
           padding: 0;
         }
         nav,
+        .status-line,
         project-bar,
         .messages,
         details.input-notes,
@@ -332,8 +339,10 @@ export class LaminaApp extends LitElement {
     if (!s) return nothing;
     const p = s.project;
     const report = s.analysis?.report ?? null;
-    // Errors not shown beside a field on screen (file-level, or for paths without an input).
-    const fileErrors = s.fieldErrors;
+    // A refused file, preset or paste gets the full list; a refused field edit is shown beside
+    // its field and on the fixed-height status line (so the sheet does not jump while typing).
+    const fileErrors = s.fieldErrorsFrom === 'project' ? s.fieldErrors : [];
+    const editErrors = s.fieldErrorsFrom === 'edit' ? s.fieldErrors : [];
     return html`
       <header>
         <h1>Lamina <small>roof beam worksheet</small></h1>
@@ -343,6 +352,11 @@ export class LaminaApp extends LitElement {
       <div class="top">
         <caution-banner></caution-banner>
         <verdict-line .project=${p} .analysis=${s.analysis} units=${s.units} ?pending=${s.pending} .error=${s.error}></verdict-line>
+        <p class="status-line" role="status" aria-live="polite">
+          ${editErrors.length
+            ? html`<span class="error">Not applied — ${editErrors[0].message}${editErrors.length > 1 ? ` (and ${editErrors.length - 1} more)` : ''}</span>`
+            : s.notice ?? ''}
+        </p>
         <nav aria-label="Worksheet sections">
           <ol>
             ${SECTIONS.map((sec, i) => html`<li><a href="#${sec.id}" @click=${(e: Event) => this.goTo(e, sec.id)}>${i + 1} ${sec.title}</a></li>`)}
@@ -350,7 +364,6 @@ export class LaminaApp extends LitElement {
         </nav>
       </div>
       <div class="messages">
-        ${s.notice ? html`<p class="notice" role="status">${s.notice}</p>` : nothing}
         ${fileErrors.length
           ? html`<div class="file-errors" role="alert" tabindex="-1">
               <h2>Not accepted — ${fileErrors.length} field error${fileErrors.length === 1 ? '' : 's'}</h2>

@@ -146,6 +146,9 @@ export class OpeningLoadsForm extends LitElement {
         ${this.q('FS target, crushing', 'design.fsTarget.crushing', p.design.fsTarget.crushing, '', { unitText: '—' })}
         ${this.q('FS target, sliding', 'design.fsTarget.sliding', p.design.fsTarget.sliding, '', { unitText: '—' })}
         ${this.q('Deflection limit δ/t', 'design.deflectionLimitRatio', p.design.deflectionLimitRatio, '', { unitText: '—', hint: 'voussoir midspan deflection / thickness' })}
+        ${o.type === 'cantilever'
+          ? html`<p class="hint">An overhang has no voussoir arch: only the tension target applies to it.</p>`
+          : nothing}
       </fieldset>
       <fieldset>
         <legend>Design options</legend>

@@ -242,7 +242,7 @@ export class StrataEditor extends LitElement {
               <th scope="col">Field</th>
               ${p.layers.map(
                 (l, i) => html`<th scope="col" data-layer=${i}>
-                  <span class="pos">Layer ${i + 1}${i === 0 ? ' — immediate roof' : ''}${group(i)}</span>
+                  <span class="pos">Layer ${i + 1}${i === 0 ? (p.opening.type === 'cantilever' ? ' — underside of the overhang' : ' — immediate roof') : ''}${group(i)}</span>
                   ${textField(this, { label: `Name of layer ${i + 1}`, path: `layers[${i}].name`, value: l.name, compact: true, size: 20, error: errorFor(this.fieldErrors, `layers[${i}].name`) })}
                   <span class="tools">
                     <button type="button" title="Move one bed down, toward the opening" aria-label="Move ${l.name} down (toward the opening)" ?disabled=${i === 0} @click=${() => this.moveLayer(i, -1)}>▼ down</button>

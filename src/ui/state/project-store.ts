@@ -28,6 +28,8 @@ export interface AppState {
   minThickness_m: number | null;
   error: string | null;
   fieldErrors: FieldError[];
+  /** Where the field errors came from: one field edit, or a whole project (file, preset, paste). */
+  fieldErrorsFrom: 'edit' | 'project' | null;
   canUndo: boolean;
   canRedo: boolean;
   /** True between an accepted edit and the analysis that follows it. */
@@ -95,6 +97,7 @@ export class ProjectStore {
       minThickness_m: null,
       error: null,
       fieldErrors: [],
+      fieldErrorsFrom: null,
       canUndo: false,
       canRedo: false,
       pending: true,
@@ -121,7 +124,7 @@ export class ProjectStore {
     try {
       candidate = setAtPath(this.state.project, path, value);
     } catch (err) {
-      this.set({ fieldErrors: [{ path, message: errorText(err) }] });
+      this.set({ fieldErrors: [{ path, message: errorText(err) }], fieldErrorsFrom: 'edit' });
       return false;
     }
     return this.accept(candidate, path);
@@ -144,6 +147,7 @@ export class ProjectStore {
       const errors = checked.errors.length > 0 ? checked.errors.map(plain) : [{ path: '', message: 'refused' }];
       this.set({
         fieldErrors: errors,
+        fieldErrorsFrom: key !== null ? 'edit' : 'project',
         notice: source ? `${source}: not loaded — ${errors.length} field error${errors.length === 1 ? '' : 's'}; the current project is unchanged.` : this.state.notice,
       });
       return false;
@@ -154,6 +158,7 @@ export class ProjectStore {
       project: checked.project,
       inputWarnings: checked.warnings.map(plain),
       fieldErrors: [],
+      fieldErrorsFrom: null,
       pending: true,
       notice: source ? `${source}: loaded.` : this.state.notice,
     });
@@ -174,7 +179,7 @@ export class ProjectStore {
 
   private restore(project: Project): boolean {
     this.deps.mark?.('lamina:edit');
-    this.set({ project, fieldErrors: [], pending: true });
+    this.set({ project, fieldErrors: [], fieldErrorsFrom: null, pending: true });
     writeAutosave(this.deps.storage ?? null, project);
     this.schedule();
     return true;
@@ -200,7 +205,7 @@ export class ProjectStore {
 
   /** Show errors that did not come from an edit (a file that failed to parse). */
   setFieldErrors(errors: FieldError[], notice: string | null = null): void {
-    this.set({ fieldErrors: errors.map(plain), notice });
+    this.set({ fieldErrors: errors.map(plain), fieldErrorsFrom: errors.length ? 'project' : null, notice });
   }
 
   /** Run a pending analysis now (tests, benchmark). */

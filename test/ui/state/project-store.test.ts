@@ -28,6 +28,7 @@ function analyse(p: Project): Analysis {
       trace: [],
     },
     layers: [],
+    groups: [],
     separations: [],
   };
 }
@@ -97,6 +98,7 @@ describe('ProjectStore', () => {
     expect(s.edit('layers[1].thickness_m', -0.2)).toBe(false);
     expect(s.getState().project.layers[1].thickness_m).toBe(1.2);
     expect(s.getState().fieldErrors).toEqual([{ path: 'layers[1].thickness_m', message: 'must be > 0 m, got -0.2' }]);
+    expect(s.getState().fieldErrorsFrom).toBe('edit');
     s.flush();
     expect(d.calls.analyse).toBe(before);
     expect(s.edit('layers[1].thickness_m', 1.0)).toBe(true);
@@ -128,6 +130,7 @@ describe('ProjectStore', () => {
     expect(s.getState().project.layers[0].thickness_m).toBe(0.5);
     expect(s.getState().fieldErrors[0].path).toBe('layers[0].thickness_m');
     expect(s.getState().notice).toMatch(/bad\.lamina\.json: not loaded/);
+    expect(s.getState().fieldErrorsFrom).toBe('project');
   });
 
   it('units change display state only: no analysis runs', () => {
