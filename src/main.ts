@@ -9,7 +9,7 @@ import { ProjectStore, type AppState } from './ui/state/project-store';
 import { defaultDeps } from './ui/state/default-deps';
 import { initialProject } from './ui/state/initial-project';
 import { writeAutosave, type KeyValueStorage } from './ui/state/autosave';
-import { SHARE_PREFIX } from './ui/state/share-link';
+import { SHARE_PREFIX, decodeShareHash } from './ui/state/share-link';
 import './ui/app/lamina-app';
 import type { LaminaApp } from './ui/app/lamina-app';
 
@@ -59,6 +59,20 @@ function boot(): void {
   app.store = store;
   const mount = document.getElementById('app') ?? document.body;
   mount.replaceChildren(app);
+  // A project link pasted into the address bar of an open worksheet replaces the project
+  // (undoable), through the same validation.
+  window.addEventListener('hashchange', () => {
+    if (!location.hash.startsWith(SHARE_PREFIX)) return;
+    try {
+      const data = decodeShareHash(location.hash);
+      if (data !== null && store.replace(data, 'Project link')) {
+        history.replaceState(null, '', location.pathname + location.search);
+      }
+    } catch (err) {
+      store.setNotice(`The project link could not be opened: ${err instanceof Error ? err.message : String(err)}.`);
+    }
+  });
+
   window.__lamina = {
     state: () => store.getState(),
     store,
