@@ -11,6 +11,8 @@ import type { UnitSystem } from '../../model/units';
 import { formatQuantity } from '../../model/units';
 import type { Analysis } from '../../analysis/types';
 import { checkStatus } from '../../report/status';
+import { checkRows } from '../../report/check-rows';
+import { targetFor } from '../../analysis/checks';
 import { numberText } from '../../report/number-text';
 import { tokens } from '../styles/tokens';
 import { sheet } from '../styles/sheet';
@@ -33,13 +35,7 @@ const MODE_PATH: Record<Mode, string> = {
 };
 
 /** Target on the FS scale of each mode (deflection and snap-through: 1; METHODS §10). */
-export function modeTarget(mode: Mode, project: Project): number {
-  const t = project.design.fsTarget;
-  if (mode === 'tension') return t.tension;
-  if (mode === 'crushing') return t.crushing;
-  if (mode === 'sliding') return t.sliding;
-  return 1;
-}
+export const modeTarget = (mode: Mode, project: Project): number => targetFor(mode, project.design);
 
 export class VerdictLine extends LitElement {
   static override properties = {
@@ -109,6 +105,22 @@ export class VerdictLine extends LitElement {
     const i = Math.max(0, a.report.layers.findIndex((l) => l.name === g.layer));
     const target = modeTarget(g.mode, this.project);
     const status = checkStatus(g.fs, target);
+    let below = 0;
+    let counted = 0;
+    try {
+      for (const row of checkRows(this.project, a.report)) {
+        if (row.status.kind === 'meets' || row.status.kind === 'below') counted++;
+        if (row.status.kind === 'below') below++;
+      }
+    } catch {
+      counted = 0;
+    }
+    const tally =
+      counted === 0
+        ? nothing
+        : below === 0
+          ? html` All ${counted} counted checks meet their targets.`
+          : html` <span class="tally">${below} of ${counted} counted checks below target ✗</span> (see 5 Checks).`;
     const basis = this.project.design.basis === 'jointed' ? 'basis: jointed (taken as cracked)' : 'basis: intact (the beam must not crack)';
     const fsPart =
       g.mode === 'snapThrough'
@@ -116,7 +128,7 @@ export class VerdictLine extends LitElement {
         : html`FS ${tracedValue(`layers[${i}].${MODE_PATH[g.mode]}`, numberText(g.fs, 3), g.fs)} against a target of ${numberText(target, 3)}`;
     return html`<p data-mode=${g.mode} data-fs=${String(g.fs)} data-layer=${i}>
       <span class="status ${status.kind}" title=${status.description}>${status.text}</span>
-      Governing: ${MODE_TEXT[g.mode]} of <strong>${g.layer}</strong>, ${fsPart}; ${basis}. ${spanText}${pending}
+      Governing: ${MODE_TEXT[g.mode]} of <strong>${g.layer}</strong>, ${fsPart}; ${basis}.${tally} ${spanText}${pending}
     </p>`;
   }
 }
