@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { resolve } from 'node:path';
-import { ARTIFACTS, editNow, focusedPath, startHarness, type Harness, text } from './results-harness';
+import { ARTIFACTS, editNow, focusedPath, startHarness, type Harness, text, renderAllSections } from './results-harness';
 
 const MODES = ['tension', 'crushing', 'sliding', 'deflection', 'snapThrough'];
 const STATUS_TEXT = /^(meets ✓|below ✗|n\/a –|info ○)$/;
@@ -30,6 +30,7 @@ describe('<checks-table> in the app (coal-room demo)', () => {
     const verdict = (await text(page.locator('checks-table [data-role="verdict"]')));
     expect(verdict).toMatch(/^Governing: tension in Laminated grey shale, FS [\d.]+ against a target of 4 \(below ✗\)/);
     expect(verdict).toContain('the intact beam would crack');
+    await renderAllSections(page);
     await page.locator('checks-table').screenshot({ path: resolve(ARTIFACTS, 'results-checks.png') });
     expect(h.problems).toEqual([]);
   });
@@ -48,6 +49,7 @@ describe('<checks-table> in the app (coal-room demo)', () => {
     expect(substituted).toMatch(/MPa/);
     expect(await page.locator('trace-dialog [data-role="values"] tbody tr').count()).toBeGreaterThan(0);
     expect((await text(page.locator('trace-dialog [data-role="source"]'))).length).toBeGreaterThan(0);
+    await renderAllSections(page);
     await page.locator('trace-dialog dialog').screenshot({ path: resolve(ARTIFACTS, 'results-trace-dialog.png') });
     await page.screenshot({ path: resolve(ARTIFACTS, 'results-trace-dialog-page.png') });
 

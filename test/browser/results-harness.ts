@@ -106,3 +106,15 @@ export async function focusedPath(page: Page): Promise<string | null> {
 export async function text(locator: import('playwright-core').Locator): Promise<string> {
   return ((await locator.textContent()) ?? '').replace(/\s+/g, ' ').trim();
 }
+
+/** Render every worksheet section (the app skips off-screen ones) so element screenshots are stable. */
+export async function renderAllSections(page: Page): Promise<void> {
+  await page.evaluate(() => {
+    const root = document.querySelector('lamina-app')?.shadowRoot;
+    if (!root || root.getElementById('results-test-visible')) return;
+    const style = document.createElement('style');
+    style.id = 'results-test-visible';
+    style.textContent = '* { content-visibility: visible !important; } .top { position: static !important; }';
+    root.appendChild(style);
+  });
+}

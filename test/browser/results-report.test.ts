@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { readFileSync, writeFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { CAUTION } from '../../src/model/caution';
-import { ARTIFACTS, startHarness, type Harness, text } from './results-harness';
+import { ARTIFACTS, startHarness, type Harness, text, renderAllSections } from './results-harness';
 
 let h: Harness;
 beforeAll(async () => {
@@ -32,6 +32,7 @@ describe('<report-view> in the app (coal-room demo)', () => {
     expect(shown).toContain(CAUTION);
     const s = await state(page);
     for (const layer of s.project.layers) expect(shown).toContain(layer.name);
+    await renderAllSections(page);
     await page.locator('report-view [data-role="report"] section.lr-section-verdict').screenshot({ path: resolve(ARTIFACTS, 'results-report-verdict.png') });
     expect(h.problems).toEqual([]);
   });

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { resolve } from 'node:path';
-import { ARTIFACTS, startHarness, type Harness, text } from './results-harness';
+import { ARTIFACTS, startHarness, type Harness, text, renderAllSections } from './results-harness';
 
 let h: Harness;
 beforeAll(async () => {
@@ -31,6 +31,7 @@ describe('<span-finder-view> in the app (coal-room demo)', () => {
     const governing = page.locator('span-finder-view tr[data-mode="governing"] button.traced');
     expect(Number(await governing.getAttribute('data-path') === 'maxSpan_m.governing' ? await governing.getAttribute('data-si-value') : NaN)).toBe(spans.governing);
     expect(await page.locator('span-finder-view [data-role="fs-span-chart"] svg').count()).toBe(1);
+    await renderAllSections(page);
     await page.locator('span-finder-view').screenshot({ path: resolve(ARTIFACTS, 'results-span.png') });
     expect(h.problems).toEqual([]);
   });
@@ -82,6 +83,7 @@ describe('<span-finder-view> in the app (coal-room demo)', () => {
     const s = await state(page);
     await expect.poll(() => text(page.locator('span-finder-view [data-role="min-thickness"]'))).toContain(s.project.layers[1].name);
     await expect.poll(() => page.locator('beam-charts-view select[data-role="chart-layer"]').inputValue()).toBe('1');
+    await renderAllSections(page);
     await page.locator('beam-charts-view').screenshot({ path: resolve(ARTIFACTS, 'results-beam-charts.png') });
     expect(h.problems).toEqual([]);
   });
@@ -107,6 +109,7 @@ describe('<beam-charts-view> in the app', () => {
     await page.locator('beam-charts-view [data-role="slab-contour"] svg').waitFor();
     await page.locator('beam-charts-view select[data-role="chart-mode"]').selectOption('crushing');
     await page.locator('beam-charts-view [data-role="design-chart"] svg').waitFor();
+    await renderAllSections(page);
     await page.locator('beam-charts-view').screenshot({ path: resolve(ARTIFACTS, 'results-beam-charts-slab.png') });
     expect(h.problems).toEqual([]);
   });

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { resolve } from 'node:path';
-import { ARTIFACTS, focusedPath, startHarness, type Harness } from './results-harness';
+import { ARTIFACTS, focusedPath, startHarness, type Harness, renderAllSections } from './results-harness';
 
 let h: Harness;
 beforeAll(async () => {
@@ -34,6 +34,7 @@ describe('<strength-chain-view> in the app (coal-room demo)', () => {
       expect(cross).toContain(s.analysis.report.layers[i].strength.crossJointed ? 'yes' : 'no');
       expect(cross).toContain('cross-joint spacing is less than the span');
     }
+    await renderAllSections(page);
     await page.locator('strength-chain-view').screenshot({ path: resolve(ARTIFACTS, 'results-strength-chain.png') });
     expect(h.problems).toEqual([]);
   });

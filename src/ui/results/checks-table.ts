@@ -67,7 +67,7 @@ export class ChecksTable extends LitElement {
       <td class="num">${this.value(view.demand)}</td>
       <td class="num">${this.value(view.capacity)}</td>
       <td class="num">${this.fs(view)}</td>
-      <td class="num">${view.mode === 'snapThrough' ? 'stands' : numberText(r.target, 3)}</td>
+      <td class="num">${view.mode === 'snapThrough' ? (r.status.kind === 'na' ? '—' : 'stands') : numberText(r.target, 3)}</td>
       <td><span class="status ${r.status.kind}" title=${r.status.description}>${r.status.text}</span></td>
       <td class="note">${view.note}</td>
     </tr>`;
@@ -87,9 +87,11 @@ export class ChecksTable extends LitElement {
       </p>
       <p class="note">
         Design basis: <strong>${basis}</strong> —
-        ${basis === 'intact'
-          ? 'the intact beam must not crack, so tension counts; the voussoir rows are the reserve once cracked.'
-          : 'the roof is taken as cracked: tension is shown for information, the voussoir rows decide.'}
+        ${p.opening.type === 'cantilever'
+          ? 'an overhang has no cracked-beam (voussoir) reserve, so the tension check counts whichever basis is chosen.'
+          : basis === 'intact'
+            ? 'the intact beam must not crack, so tension counts; the voussoir rows are the reserve once cracked.'
+            : 'the roof is taken as cracked: tension is shown for information, the voussoir rows decide.'}
         Click any dotted number to see its calculation.
       </p>
       <table>

@@ -14,6 +14,7 @@ import type { Mode, Project } from '../../model/types';
 import type { UnitSystem } from '../../model/units';
 import type { Analysis, SpanCurve } from '../../analysis/types';
 import { fsSpanSvg } from '../../report/charts';
+import { THICKNESS_MIN_M } from '../../analysis/thickness';
 import { numberText } from '../../report/number-text';
 import { MODE_NAME } from './check-rows';
 import { adoptableSpan } from './adoptable-span';
@@ -162,7 +163,9 @@ export class SpanFinderView extends LitElement {
           ? html`No thickness of <strong>${p.layers[layerIndex]?.name ?? ''}</strong> meets every target at the current ${spanWord}
               (or the thickness does not control it).`
           : html`Thinnest <strong>${p.layers[layerIndex]?.name ?? ''}</strong> that meets every target at the current ${spanWord}:
-              <strong data-si-value=${this.minThickness}>${displayText(this.minThickness, 'length', u, 3)}</strong>
+              <strong data-si-value=${this.minThickness}>${this.minThickness <= THICKNESS_MIN_M
+                ? `${displayText(THICKNESS_MIN_M, 'length', u, 3)} or less (the thinnest searched)`
+                : displayText(this.minThickness, 'length', u, 3)}</strong>
               (now ${displayText(p.layers[layerIndex]?.thickness_m ?? null, 'length', u, 3)}).`}
       </p>
     `;
