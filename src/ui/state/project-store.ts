@@ -160,7 +160,7 @@ export class ProjectStore {
       fieldErrors: [],
       fieldErrorsFrom: null,
       pending: true,
-      notice: source ? `${source}: loaded.` : this.state.notice,
+      notice: source ? `${/^(File|Demo|Project link)\b/.test(source) ? 'Loaded' : 'Applied'}: ${source}.` : this.state.notice,
     });
     writeAutosave(this.deps.storage ?? null, checked.project);
     this.schedule();

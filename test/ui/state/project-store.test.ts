@@ -131,6 +131,12 @@ describe('ProjectStore', () => {
     expect(s.getState().fieldErrors[0].path).toBe('layers[0].thickness_m');
     expect(s.getState().notice).toMatch(/bad\.lamina\.json: not loaded/);
     expect(s.getState().fieldErrorsFrom).toBe('project');
+    const good = twoLayers();
+    good.opening.span_m = 5;
+    expect(s.replace(good, 'File good.lamina.json')).toBe(true);
+    expect(s.getState().notice).toBe('Loaded: File good.lamina.json.');
+    expect(s.getState().fieldErrors).toEqual([]);
+    expect(s.getState().fieldErrorsFrom).toBeNull();
   });
 
   it('units change display state only: no analysis runs', () => {
