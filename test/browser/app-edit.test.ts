@@ -63,6 +63,10 @@ describe('app: editing', () => {
     // also on the fixed status line at the top, without the file-error box that would shift the sheet
     expect(await page.locator('lamina-app .status-line').textContent()).toContain('Not applied — layers[0].thickness_m: must be > 0');
     expect(await page.locator('lamina-app .file-errors').count()).toBe(0);
+    // typing the old value back clears the error
+    await fieldFor(page, 'layers[0].thickness_m').fill('0.5');
+    await expect.poll(() => page.locator('quantity-input[path="layers[0].thickness_m"] .error').count()).toBe(0);
+    expect(await page.locator('lamina-app .status-line').textContent()).not.toContain('Not applied');
     await context.close();
   });
 

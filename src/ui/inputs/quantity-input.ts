@@ -162,7 +162,8 @@ export class QuantityInput extends LitElement {
       return;
     }
     this.localError = '';
-    if (!sameValue(v, this.value)) fireEdit(this, this.path, v);
+    // Re-send an unchanged value when the model refused the last one, so its error clears.
+    if (!sameValue(v, this.value) || this.error) fireEdit(this, this.path, v);
   }
 
   private onBlur(): void {

@@ -152,6 +152,11 @@ export class ProjectStore {
       });
       return false;
     }
+    if (key !== null && JSON.stringify(checked.project) === JSON.stringify(this.state.project)) {
+      // The same value again (e.g. retyped after a refused edit): nothing to undo or re-analyse.
+      if (this.state.fieldErrors.length) this.set({ fieldErrors: [], fieldErrorsFrom: null });
+      return true;
+    }
     this.history.record(this.state.project, key);
     if (source) this.chartLayerChosen = false;
     this.set({

@@ -101,6 +101,11 @@ describe('ProjectStore', () => {
     expect(s.getState().fieldErrorsFrom).toBe('edit');
     s.flush();
     expect(d.calls.analyse).toBe(before);
+    // retyping the unchanged value clears the error without an undo step or an analysis
+    expect(s.edit('layers[1].thickness_m', 1.2)).toBe(true);
+    expect(s.getState().fieldErrors).toEqual([]);
+    expect(s.getState().canUndo).toBe(false);
+    expect(s.getState().pending).toBe(false);
     expect(s.edit('layers[1].thickness_m', 1.0)).toBe(true);
     expect(s.getState().fieldErrors).toEqual([]);
   });
