@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { resolve } from 'node:path';
-import { ARTIFACTS, editNow, focusedPath, startHarness, type Harness, text, renderAllSections } from './results-harness';
+import { ARTIFACTS, editNow, focusedPath, startHarness, type Harness, text, renderAllSections, shadowText } from './results-harness';
 
 const MODES = ['tension', 'crushing', 'sliding', 'deflection', 'snapThrough'];
 const STATUS_TEXT = /^(meets ✓|below ✗|n\/a –|info ○)$/;
@@ -114,4 +114,36 @@ describe('<checks-table> in the app (coal-room demo)', () => {
     expect(Number(si)).toBe(report.layers[0].elastic.maxTension_MPa);
     expect(h.problems).toEqual([]);
   });
+
+  it.each(['coal-room-shale', 'drift-limestone', 'quarry-bench-overhang'])(
+    'preset %s: every results view renders, with no NaN or Infinity anywhere',
+    async (preset) => {
+      const page = await h.open();
+      await page.evaluate(async (name) => {
+        const w = (window as any).__lamina;
+        const project = await (await fetch(`/presets/${name}.lamina.json`)).json();
+        if (!w.store.replace(project, 'test')) throw new Error('preset refused');
+        w.store.flush();
+      }, preset);
+      await page.waitForFunction((name) => {
+        const s = (window as any).__lamina.state();
+        return s.analysis && !s.pending && s.project.title.length > 0 && name.length > 0;
+      }, preset);
+      await page.locator('report-view [data-role="report"] article').waitFor({ timeout: 20_000 });
+      for (const tag of ['strength-chain-view', 'checks-table', 'span-finder-view', 'beam-charts-view', 'report-view']) {
+        const shown = await shadowText(page.locator(tag));
+        expect(shown.length, tag).toBeGreaterThan(100);
+        expect(shown, tag).not.toMatch(/NaN|Infinity|undefined|\[object Object\]/);
+      }
+      for (const u of ['US']) {
+        await page.locator(`project-bar input[type="radio"][value="${u}"]`).check();
+        await page.waitForFunction((x) => (window as any).__lamina.state().units === x, u);
+        for (const tag of ['strength-chain-view', 'checks-table', 'span-finder-view', 'beam-charts-view']) {
+          await page.locator(tag).evaluate((el: any) => el.updateComplete);
+          expect(await shadowText(page.locator(tag)), `${tag} in ${u}`).not.toMatch(/NaN|Infinity|undefined/);
+        }
+      }
+      expect(h.problems).toEqual([]);
+    },
+  );
 });

@@ -118,3 +118,9 @@ export async function renderAllSections(page: Page): Promise<void> {
     root.appendChild(style);
   });
 }
+
+/** The text of a custom element's shadow root (whitespace collapsed). */
+export async function shadowText(locator: import('playwright-core').Locator): Promise<string> {
+  const t = await locator.evaluate((el) => (el.shadowRoot ?? el).textContent ?? '');
+  return t.replace(/\s+/g, ' ').trim();
+}

@@ -147,6 +147,7 @@ export class SpanFinderView extends LitElement {
         >
           Use this span${adopt !== null ? ` (${displayText(adopt, 'length', u, 4)})` : ''}
         </button>
+        ${adopt !== null ? html`<span class="note">the governing largest ${spanWord}, rounded down to 1 mm</span>` : nothing}
       </div>
       ${this.spanChartSvg
         ? html`<div class="chart" data-role="fs-span-chart">${unsafeSVG(this.spanChartSvg)}</div>`
