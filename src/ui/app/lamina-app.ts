@@ -103,6 +103,13 @@ export class LaminaApp extends LitElement {
         padding-top: 0.3rem;
         border-bottom: 1px solid var(--lam-rule);
       }
+      @media (max-width: 900px), (max-height: 640px) {
+        /* On small screens the fixed block would hide too much of the sheet: it scrolls away
+           (the caution is repeated at the foot of the sheet). */
+        .top {
+          position: static;
+        }
+      }
       nav ol {
         list-style: none;
         display: flex;

@@ -55,10 +55,11 @@ export class OpeningLoadsForm extends LitElement {
       }
       .grid {
         display: grid;
-        grid-template-columns: repeat(auto-fit, minmax(22rem, 1fr));
+        grid-template-columns: repeat(auto-fit, minmax(min(22rem, 100%), 1fr));
         gap: 0 1.5rem;
       }
       fieldset {
+        min-width: 0;
         border: none;
         border-top: 1px solid var(--lam-rule);
         margin: 0.4rem 0;
@@ -75,6 +76,9 @@ export class OpeningLoadsForm extends LitElement {
       .field-label {
         display: inline-block;
         min-width: 11em;
+      }
+      select {
+        max-width: 100%;
       }
     `,
   ];
