@@ -46,8 +46,11 @@ export function slabContourSvg(field: SlabField, options: SlabContourOptions): s
   const grid = gridMapping(X, Y, x, y);
 
   const finite = values.filter((v) => Number.isFinite(v));
-  const vMin = min(finite) ?? 0;
-  const vMax = max(finite) ?? 1;
+  // Round-off residues (≈1e-17 of the peak at clamped corners) read as 0, not as "1.38e−17".
+  const peak = Math.max(Math.abs(min(finite) ?? 0), Math.abs(max(finite) ?? 1));
+  const snap = (v: number) => (Math.abs(v) < 1e-9 * peak ? 0 : v);
+  const vMin = snap(min(finite) ?? 0);
+  const vMax = snap(max(finite) ?? 1);
   let levels = ticks(vMin, vMax, 8).filter((l) => l > vMin && l < vMax);
   if (levels.length === 0) levels = [(vMin + vMax) / 2];
   const colour = interpolateRgb('#f7fbff', '#2b6a9e');
