@@ -13,9 +13,11 @@
  *     parseQuantity('2500 psi', 'MPa') // 17.2369
  *     parseQuantity('0.45', 'm')    // 0.45 (a bare number is already in the given unit)
  */
-import { all, create, type Unit } from 'mathjs';
+import { create, createUnitDependencies, unitDependencies, type Unit } from 'mathjs';
 
-const math = create(all, {});
+// Only the unit machinery (not `all`): keeps the app bundle small and leaves no expression
+// evaluator in this module at all.
+const math = create({ unitDependencies, createUnitDependencies }, {});
 
 const CUSTOM_UNITS: ReadonlyArray<[string, string]> = [
   ['psf', '1 lbf/ft^2'],

@@ -11,12 +11,13 @@
  * Multiplication is "·", integer powers are superscripts, sqrt is "√", Greek symbol names are
  * letters (`sigma_h` → "σh"). Throws a SyntaxError for an expression mathjs cannot parse.
  */
-import { create, all, type MathNode } from 'mathjs';
+import { create, parseDependencies, type MathNode } from 'mathjs';
 import { numberText, superscript } from './number-text';
 import { symbolText } from './symbol-text';
 import { withUnit } from './unit-text';
 
-const math = create(all, {});
+// The parser alone (formulas are only parsed and walked here, never evaluated).
+const math = create({ parseDependencies }, {});
 
 export type TraceValues = Record<string, { value: number; unit: string }>;
 

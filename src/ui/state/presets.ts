@@ -5,6 +5,7 @@
 import coalRoom from '../../../presets/coal-room-shale.lamina.json';
 import driftLimestone from '../../../presets/drift-limestone.lamina.json';
 import quarryBench from '../../../presets/quarry-bench-overhang.lamina.json';
+import intersectionSlab from '../../../presets/intersection-slab.lamina.json';
 
 export interface Preset {
   id: string;
@@ -16,6 +17,7 @@ export const PRESETS: readonly Preset[] = [
   { id: 'coal-room-shale', label: 'Coal room, laminated shale roof (beam, 3 layers)', data: coalRoom },
   { id: 'drift-limestone', label: 'Drift in thin-bedded limestone', data: driftLimestone },
   { id: 'quarry-bench-overhang', label: 'Sandstone quarry bench overhang (cantilever)', data: quarryBench },
+  { id: 'intersection-slab', label: 'Intersection roof slab in limestone (slab, 8 × 10 m)', data: intersectionSlab },
 ];
 
 /** The preset loaded on a first visit. */
