@@ -1,26 +1,13 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser } from 'playwright-core';
-import { launchChromium } from './chromium';
-import { startApp, type AppServer } from './app-server';
-import { fieldFor, openApp, projectJson, reportJson, waitForResults } from './app-page';
+import { describe, expect, it } from 'vitest';
+import { fieldFor, openApp, projectJson, reportJson, waitForResults, appSession } from './app-page';
 
-let server: AppServer;
-let browser: Browser;
-
-beforeAll(async () => {
-  server = await startApp();
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const session = appSession();
 
 const verdictFs = (page: import('playwright-core').Page) => page.locator('verdict-line p').getAttribute('data-fs');
 
 describe('app: editing', () => {
   it('typing a new shale thickness updates the governing FS shown, with no calculate button', async () => {
-    const { page, context, errors } = await openApp(browser, server.url);
+    const { page, context, errors } = await openApp(session.browser, session.url);
     const before = Number(await verdictFs(page));
     // the demo's immediate roof is a 0.5 m shale governed by tension (fs = design/σ, σ ∝ 1/t for self-weight)
     await fieldFor(page, 'layers[0].thickness_m').fill('0.8');
@@ -37,7 +24,7 @@ describe('app: editing', () => {
   });
 
   it('a number with a unit is converted to the file unit: "20 ft" gives a span of 6.096 m (1 ft = 0.3048 m, METHODS §13)', async () => {
-    const { page, context } = await openApp(browser, server.url);
+    const { page, context } = await openApp(session.browser, session.url);
     await fieldFor(page, 'opening.span_m').fill('20 ft');
     await waitForResults(page);
     expect(JSON.parse(await projectJson(page)).opening.span_m).toBeCloseTo(6.096, 9);
@@ -45,7 +32,7 @@ describe('app: editing', () => {
   });
 
   it('unparsable text shows an inline error naming the field and keeps the last good value', async () => {
-    const { page, context } = await openApp(browser, server.url);
+    const { page, context } = await openApp(session.browser, session.url);
     const before = await projectJson(page);
     await fieldFor(page, 'opening.span_m').fill('six metres');
     const msg = page.locator('quantity-input[path="opening.span_m"] [role="alert"]');
@@ -55,7 +42,7 @@ describe('app: editing', () => {
   });
 
   it('a value refused by validation (thickness −0.2 m) shows the model message with its path; the project keeps 0.5 m', async () => {
-    const { page, context } = await openApp(browser, server.url);
+    const { page, context } = await openApp(session.browser, session.url);
     await fieldFor(page, 'layers[0].thickness_m').fill('-0.2');
     const msg = page.locator('quantity-input[path="layers[0].thickness_m"] [role="alert"]');
     await expect.poll(() => msg.textContent()).toContain('layers[0].thickness_m: must be > 0');
@@ -71,7 +58,7 @@ describe('app: editing', () => {
   });
 
   it('switching to US units changes the displayed values and units but not the analysis', async () => {
-    const { page, context } = await openApp(browser, server.url);
+    const { page, context } = await openApp(session.browser, session.url);
     const report = await reportJson(page);
     const analysisId = await page.evaluate(() => {
       (window as unknown as { __a: unknown }).__a = window.__lamina!.state().analysis;
@@ -96,7 +83,7 @@ describe('app: editing', () => {
   });
 
   it('undo restores a change (button and Ctrl+Z), redo re-applies it', async () => {
-    const { page, context } = await openApp(browser, server.url);
+    const { page, context } = await openApp(session.browser, session.url);
     const original = await projectJson(page);
     const undo = page.locator('project-bar #undo');
     expect(await undo.isDisabled()).toBe(true);
@@ -118,7 +105,7 @@ describe('app: editing', () => {
   });
 
   it('adding, moving and removing a layer goes through the store (and is undoable)', async () => {
-    const { page, context, errors } = await openApp(browser, server.url);
+    const { page, context, errors } = await openApp(session.browser, session.url);
     const n = JSON.parse(await projectJson(page)).layers.length;
     await page.getByRole('button', { name: '+ Add a layer above' }).click();
     await waitForResults(page);
@@ -136,7 +123,7 @@ describe('app: editing', () => {
   });
 
   it('switching the opening to a slab shows the long side (starting square) and the report gains the plate check', async () => {
-    const { page, context, errors } = await openApp(browser, server.url);
+    const { page, context, errors } = await openApp(session.browser, session.url);
     expect(await page.locator('quantity-input[path="opening.length_m"]').count()).toBe(0);
     await page.locator('opening-loads-form #opening-type').selectOption('slab');
     await waitForResults(page);

@@ -1,26 +1,13 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { readFile } from 'node:fs/promises';
-import type { Browser } from 'playwright-core';
-import { launchChromium } from './chromium';
-import { startApp, type AppServer } from './app-server';
-import { fieldFor, openApp, projectJson, waitForResults } from './app-page';
+import { fieldFor, openApp, projectJson, waitForResults, appSession } from './app-page';
 import { readProjectText } from '../../src/model/project-file';
 
-let server: AppServer;
-let browser: Browser;
-
-beforeAll(async () => {
-  server = await startApp();
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const session = appSession();
 
 describe('app: files, autosave and links', () => {
   it('a bad project file lists its field errors and keeps the current project', async () => {
-    const { page, context, errors } = await openApp(browser, server.url);
+    const { page, context, errors } = await openApp(session.browser, session.url);
     const before = await projectJson(page);
     const bad = JSON.parse(before);
     bad.layers[1].thickness_m = -0.2;
@@ -42,7 +29,7 @@ describe('app: files, autosave and links', () => {
   });
 
   it('save then open gives the same project back (round trip through a downloaded *.lamina.json)', async () => {
-    const { page, context } = await openApp(browser, server.url);
+    const { page, context } = await openApp(session.browser, session.url);
     await fieldFor(page, 'opening.span_m').fill('7.25');
     await waitForResults(page);
     const saved = await projectJson(page);
@@ -63,7 +50,7 @@ describe('app: files, autosave and links', () => {
   });
 
   it('a reload keeps the edited project (autosave)', async () => {
-    const { page, context } = await openApp(browser, server.url);
+    const { page, context } = await openApp(session.browser, session.url);
     await fieldFor(page, 'layers[0].thickness_m').fill('0.65');
     await waitForResults(page);
     const edited = await projectJson(page);
@@ -75,14 +62,14 @@ describe('app: files, autosave and links', () => {
   });
 
   it('a damaged autosave is ignored with a notice, and the demo opens', async () => {
-    const context = await browser.newContext();
+    const context = await session.browser.newContext();
     await context.addInitScript(() => {
       if (!sessionStorage.getItem('seeded')) {
         localStorage.setItem('lamina:autosave', '{"schema": "lamina/1", "layers": [');
         sessionStorage.setItem('seeded', '1');
       }
     });
-    const { page, errors } = await openApp(browser, server.url, { context });
+    const { page, errors } = await openApp(session.browser, session.url, { context });
     expect(await page.locator('lamina-app .status-line').textContent()).toMatch(/autosaved project could not be read/);
     expect(JSON.parse(await projectJson(page)).title).toMatch(/coal room/i);
     expect(errors).toEqual([]);
@@ -90,7 +77,7 @@ describe('app: files, autosave and links', () => {
   });
 
   it('the share link reproduces the project in a new page (new browser context, empty storage)', async () => {
-    const { page, context } = await openApp(browser, server.url);
+    const { page, context } = await openApp(session.browser, session.url);
     await fieldFor(page, 'opening.span_m').fill('5.5');
     await page.locator('lamina-app header input').fill('Shared — ü < check');
     await page.locator('lamina-app header input').press('Tab');
@@ -98,9 +85,9 @@ describe('app: files, autosave and links', () => {
     const shared = await projectJson(page);
     await page.locator('project-bar #share').click();
     const link = await page.locator('project-bar #share-link').inputValue();
-    expect(link.startsWith(server.url)).toBe(true);
+    expect(link.startsWith(session.url)).toBe(true);
     expect(link).toMatch(/#p=[A-Za-z0-9_-]+$/);
-    const other = await openApp(browser, link);
+    const other = await openApp(session.browser, link);
     expect(await projectJson(other.page)).toBe(shared);
     // the hash is dropped once loaded, so a reload keeps later edits
     expect(new URL(other.page.url()).hash).toBe('');

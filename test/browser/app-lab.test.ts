@@ -1,26 +1,14 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
-import { launchChromium } from './chromium';
-import { startApp, type AppServer } from './app-server';
-import { openApp, projectJson, waitForResults } from './app-page';
+import { openApp, projectJson, waitForResults, appSession } from './app-page';
 
-let server: AppServer;
-let browser: Browser;
-
-beforeAll(async () => {
-  server = await startApp();
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const session = appSession();
 
 const characteristicShown = (page: Page) => page.locator('lab-tests-panel .characteristic button.traced').getAttribute('data-si-value');
 
 describe('app: lab tests', () => {
   it('pasting tab-separated rows from a spreadsheet adds specimens and moves the strength chain', async () => {
-    const { page, context, errors } = await openApp(browser, server.url);
+    const { page, context, errors } = await openApp(session.browser, session.url);
     const n0 = JSON.parse(await projectJson(page)).layers[0].tensile.specimens.length;
     const before = Number(await characteristicShown(page));
     const chainBefore = await page.evaluate(() => window.__lamina!.state().analysis!.report.layers[0].strength.characteristic_MPa);
@@ -48,7 +36,7 @@ describe('app: lab tests', () => {
   });
 
   it('a paste with a bad row applies nothing and lists the row and column', async () => {
-    const { page, context } = await openApp(browser, server.url);
+    const { page, context } = await openApp(session.browser, session.url);
     const before = await projectJson(page);
     const csv = 'id,diameter_mm,thickness_mm,peakLoad_kN\nQ-1,54,27,10\nQ-2,54,abc,10\n';
     await page.locator('lab-tests-panel textarea').fill(csv);
@@ -61,7 +49,7 @@ describe('app: lab tests', () => {
   });
 
   it('unticking "valid break" drops the specimen from the statistics (n falls by one)', async () => {
-    const { page, context } = await openApp(browser, server.url);
+    const { page, context } = await openApp(session.browser, session.url);
     const n = await page.evaluate(() => window.__lamina!.state().analysis!.layers[0].lab.n);
     const box = page.locator('lab-tests-panel tr[data-specimen="0"] input[type="checkbox"]');
     expect(await box.isChecked()).toBe(true);

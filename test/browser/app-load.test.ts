@@ -1,25 +1,12 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser } from 'playwright-core';
-import { launchChromium } from './chromium';
-import { startApp, type AppServer } from './app-server';
-import { openApp } from './app-page';
+import { describe, expect, it } from 'vitest';
+import { openApp, appSession } from './app-page';
 import { CAUTION } from '../../src/model/caution';
 
-let server: AppServer;
-let browser: Browser;
-
-beforeAll(async () => {
-  server = await startApp();
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const session = appSession();
 
 describe('app: first load', () => {
   it('opens the coal-room demo with no console error and no request outside the page origin', async () => {
-    const { page, context, errors, external } = await openApp(browser, server.url);
+    const { page, context, errors, external } = await openApp(session.browser, session.url);
     const title = await page.locator('lamina-app header input').inputValue();
     expect(title).toMatch(/coal room/i);
     // the verdict line names the governing layer and shows a status word with its symbol
@@ -43,7 +30,7 @@ describe('app: first load', () => {
   });
 
   it('every input has an accessible label (label element or aria-label)', async () => {
-    const { page, context } = await openApp(browser, server.url);
+    const { page, context } = await openApp(session.browser, session.url);
     const unlabelled = await page.evaluate(() => {
       const out: string[] = [];
       const walk = (root: Document | ShadowRoot) => {

@@ -3,7 +3,10 @@
  * errors, page errors and any request that leaves the app's origin, and wait until the
  * analysis has run and rendered.
  */
+import { afterAll, beforeAll } from 'vitest';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
+import { launchChromium } from './chromium';
+import { startApp, type AppServer } from './app-server';
 
 export interface AppPage {
   page: Page;
@@ -61,4 +64,28 @@ export async function unstick(page: Page): Promise<void> {
     const top = document.querySelector('lamina-app')?.shadowRoot?.querySelector<HTMLElement>('.top');
     if (top) top.style.position = 'static';
   });
+}
+
+export interface AppSession {
+  browser: Browser;
+  url: string;
+}
+
+/**
+ * One dev server and one chromium for a test file: started in beforeAll, closed in afterAll.
+ * Read `session.browser` and `session.url` inside the tests (they are set once beforeAll ran).
+ */
+export function appSession(): AppSession {
+  let server: AppServer | undefined;
+  const session = {} as AppSession;
+  beforeAll(async () => {
+    server = await startApp();
+    session.url = server.url;
+    session.browser = await launchChromium();
+  });
+  afterAll(async () => {
+    await session.browser?.close();
+    await server?.close();
+  });
+  return session;
 }

@@ -1,31 +1,18 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { mkdir, stat } from 'node:fs/promises';
-import type { Browser } from 'playwright-core';
-import { launchChromium } from './chromium';
-import { startApp, type AppServer } from './app-server';
-import { openApp, unstick, waitForResults } from './app-page';
+import { openApp, unstick, waitForResults, appSession } from './app-page';
 import { PRESETS } from '../../src/ui/state/presets';
 import { CAUTION } from '../../src/model/caution';
 
-let server: AppServer;
-let browser: Browser;
 const OUT = 'test-artifacts';
-
-beforeAll(async () => {
-  await mkdir(OUT, { recursive: true });
-  server = await startApp();
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const session = appSession();
+beforeAll(() => mkdir(OUT, { recursive: true }));
 
 const SECTIONS = ['opening', 'strata', 'lab', 'strength', 'checks', 'span', 'report'];
 
 describe('app: screenshots of each section (written to test-artifacts/)', () => {
   it('top of the sheet and every section of the demo, SI and US', async () => {
-    const { page, context, errors } = await openApp(browser, server.url, { viewport: { width: 1280, height: 900 } });
+    const { page, context, errors } = await openApp(session.browser, session.url, { viewport: { width: 1280, height: 900 } });
     await page.screenshot({ path: `${OUT}/app-top.png` });
     await unstick(page);
     for (const units of ['SI', 'US'] as const) {
@@ -44,7 +31,7 @@ describe('app: screenshots of each section (written to test-artifacts/)', () => 
   });
 
   it('each preset loads from the menu without errors (screenshot of its strata)', async () => {
-    const { page, context, errors } = await openApp(browser, server.url, { viewport: { width: 1280, height: 900 } });
+    const { page, context, errors } = await openApp(session.browser, session.url, { viewport: { width: 1280, height: 900 } });
     await unstick(page);
     for (const preset of PRESETS) {
       await page.locator('project-bar #preset').selectOption(preset.id);
@@ -59,7 +46,7 @@ describe('app: screenshots of each section (written to test-artifacts/)', () => 
   });
 
   it('print media shows the caution and the report, without the inputs, buttons or navigation', async () => {
-    const { page, context } = await openApp(browser, server.url);
+    const { page, context } = await openApp(session.browser, session.url);
     await page.emulateMedia({ media: 'print' });
     await page.screenshot({ path: `${OUT}/app-print.png`, fullPage: false });
     const visible = await page.evaluate(() => {

@@ -1,25 +1,12 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser } from 'playwright-core';
-import { launchChromium } from './chromium';
-import { startApp, type AppServer } from './app-server';
-import { openApp, projectJson, waitForResults } from './app-page';
+import { describe, expect, it } from 'vitest';
+import { openApp, projectJson, waitForResults, appSession } from './app-page';
 import { encodeShareHash } from '../../src/ui/state/share-link';
 
-let server: AppServer;
-let browser: Browser;
-
-beforeAll(async () => {
-  server = await startApp();
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const session = appSession();
 
 describe('app: traces, keyboard and links in an open page', () => {
   it('a traced number in the lab panel opens the trace dialog for its path; Escape closes it and focus returns', async () => {
-    const { page, context, errors } = await openApp(browser, server.url);
+    const { page, context, errors } = await openApp(session.browser, session.url);
     const hasDialog = await page.evaluate(() => customElements.get('trace-dialog') !== undefined);
     const button = page.locator('lab-tests-panel .characteristic button.traced');
     expect(await button.getAttribute('data-path')).toBe('layers[0].strength.characteristic_MPa');
@@ -43,7 +30,7 @@ describe('app: traces, keyboard and links in an open page', () => {
   });
 
   it('the section navigation moves focus to the chosen section heading', async () => {
-    const { page, context } = await openApp(browser, server.url);
+    const { page, context } = await openApp(session.browser, session.url);
     await page.locator('lamina-app nav a', { hasText: '3 Lab tests' }).click();
     const focused = await page.evaluate(() => document.querySelector('lamina-app')!.shadowRoot!.activeElement?.id ?? null);
     expect(focused).toBe('lab-h');
@@ -51,7 +38,7 @@ describe('app: traces, keyboard and links in an open page', () => {
   });
 
   it('a project link pasted into an open page replaces the project (and can be undone)', async () => {
-    const { page, context, errors } = await openApp(browser, server.url);
+    const { page, context, errors } = await openApp(session.browser, session.url);
     const before = await projectJson(page);
     const p = JSON.parse(before);
     p.title = 'Pasted link project';
