@@ -8,6 +8,7 @@ import { dirname, join } from 'node:path';
 import { parseProject } from '../../src/model/validate';
 import { readProjectText } from '../../src/model/project-file';
 import type { Project } from '../../src/model/types';
+import { seeded as rng } from '../helpers/seeded';
 
 const root = join(dirname(fileURLToPath(import.meta.url)), '../..');
 
@@ -45,17 +46,6 @@ export function presets(): { file: string; project: Project }[] {
   return presetFiles().map((file) => ({ file, project: readProjectText(readFileSync(file, 'utf8')).project }));
 }
 
-/** Small deterministic PRNG (mulberry32) so generated cases are reproducible. */
-export function rng(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 /** A random valid project: 1–5 layers, any opening type and options (invented values). */
 export function randomProject(seed: number, overrides: { type?: 'beam' | 'slab' | 'cantilever' } = {}): Project {

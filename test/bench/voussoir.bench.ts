@@ -9,21 +9,12 @@ import { pathToFileURL } from 'node:url';
 import { solveVoussoir, type VoussoirInput, type VoussoirResult } from '../../src/mechanics/voussoir';
 import { solveVoussoirSweep } from '../../src/mechanics/voussoir-sweep';
 import type { BenchResult } from './types';
+import { seeded } from '../helpers/seeded';
 
 const BEAMS = 200;
 const BATCHES = 51;
 const OPT_REPEATS = 10; // solves of each beam per batch (the sweep: 1)
 
-/** mulberry32: the same beams every run. */
-function seeded(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let r = Math.imul(a ^ (a >>> 15), 1 | a);
-    r = (r + Math.imul(r ^ (r >>> 7), 61 | r)) ^ r;
-    return ((r ^ (r >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 function randomBeams(count: number, seed: number): VoussoirInput[] {
   const rnd = seeded(seed);

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { expectClose } from '../helpers/expect-close';
+import { seeded } from '../helpers/seeded';
 import {
   leverArmAt,
   solveVoussoir,
@@ -21,16 +22,6 @@ const designExample: VoussoirInput = {
 /** Rounds to `digits` decimals, as the report prints. */
 const printed = (x: number | null, digits: number): number => Number((x as number).toFixed(digits));
 
-/** Small seeded generator (mulberry32) so the comparison runs on the same beams every time. */
-function seeded(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let r = Math.imul(a ^ (a >>> 15), 1 | a);
-    r = (r + Math.imul(r ^ (r >>> 7), 61 | r)) ^ r;
-    return ((r ^ (r >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 const beam = fc.record({
   span: fc.double({ min: 1, max: 40, noNaN: true }),
