@@ -1,28 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { expectClose } from '../helpers/expect-close';
+import { beamArbitrary, designExample, printed } from './voussoir-fixtures';
 import { leverArmAt, type VoussoirInput } from '../../src/mechanics/voussoir';
 import { leverArmByIteration, solveVoussoirSweep } from '../../src/mechanics/voussoir-sweep';
 
-const designExample: VoussoirInput = {
-  span: 6,
-  thickness: 0.45,
-  unitWeight: 25e3,
-  modulus: 8e9,
-  ucs: 40e6,
-  frictionDeg: 35,
-};
-
-const printed = (x: number | null, digits: number): number => Number((x as number).toFixed(digits));
-
-const beam = fc.record({
-  span: fc.double({ min: 1, max: 40, noNaN: true }),
-  thickness: fc.double({ min: 0.1, max: 3, noNaN: true }),
-  unitWeight: fc.double({ min: 15e3, max: 35e3, noNaN: true }),
-  modulus: fc.double({ min: 0.2e9, max: 80e9, noNaN: true }),
-  ucs: fc.constant(40e6),
-  frictionDeg: fc.constant(30),
-});
+const beam = beamArbitrary();
 
 describe('solveVoussoirSweep (Diederichs & Kaiser 1999 scheme, n step 0.01)', () => {
   it('solveVoussoirSweep(DESIGN.md example) gives n 0.74, z 0.2256 m, fc 1.348 MPa, δ 2.36 mm, δ/t 0.0052, FS crushing 29.7, FS sliding 4.65 — DESIGN.md report example', () => {

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { expectClose } from '../helpers/expect-close';
+import { beamArbitrary, designExample, printed } from './voussoir-fixtures';
 import { seeded } from '../helpers/seeded';
 import {
   leverArmAt,
@@ -10,27 +11,7 @@ import {
 } from '../../src/mechanics/voussoir';
 import { leverArmByIteration, solveVoussoirSweep } from '../../src/mechanics/voussoir-sweep';
 
-const designExample: VoussoirInput = {
-  span: 6,
-  thickness: 0.45,
-  unitWeight: 25e3,
-  modulus: 8e9,
-  ucs: 40e6,
-  frictionDeg: 35,
-};
-
-/** Rounds to `digits` decimals, as the report prints. */
-const printed = (x: number | null, digits: number): number => Number((x as number).toFixed(digits));
-
-
-const beam = fc.record({
-  span: fc.double({ min: 1, max: 40, noNaN: true }),
-  thickness: fc.double({ min: 0.1, max: 3, noNaN: true }),
-  unitWeight: fc.double({ min: 15e3, max: 35e3, noNaN: true }),
-  modulus: fc.double({ min: 0.2e9, max: 80e9, noNaN: true }),
-  ucs: fc.constant(40e6),
-  frictionDeg: fc.double({ min: 5, max: 45, noNaN: true }),
-});
+const beam = beamArbitrary(fc.double({ min: 5, max: 45, noNaN: true }));
 
 describe('solveVoussoir — check values', () => {
   it('solveVoussoir(DESIGN.md example: s 6 m, t 0.45 m, γ′ 25 kN/m³, E 8 GPa, σc 40 MPa, φ 35°) gives n 0.74, z 0.2256 m, fc 1.348 MPa, δ 2.36 mm, δ/t 0.0052, FS crushing 29.7 — DESIGN.md report example', () => {
