@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { getAtPath, parsePath, setAtPath } from '../../../src/ui/state/project-path';
+import { getAtPath, parsePath, setAtPath } from '../../src/model/project-path';
 
 describe('project-path', () => {
   it("parsePath('layers[1].tensile.specimens[0].valid') is ['layers', 1, 'tensile', 'specimens', 0, 'valid'] — DESIGN.md path form", () => {
