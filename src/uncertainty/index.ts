@@ -6,7 +6,7 @@ export { makeDistribution, distribution, DISTRIBUTION_NAMES } from './distributi
 export type { Distribution, DistributionName, DistributionParams, DistributionResult } from './distributions';
 export { createSampler, SAMPLING_METHODS } from './sampler';
 export type { Sampler, SamplerOptions, SamplingMethod } from './sampler';
-export { rankCorrelation, averageRanks } from './rank-correlation';
+export { rankCorrelation, rankSetCorrelation, averageRanks } from './rank-correlation';
 export { failureProbability, Z_95 } from './failure-probability';
 export type { FailureProbability } from './failure-probability';
 export { fsHistogram } from './histogram';

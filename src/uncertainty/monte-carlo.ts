@@ -21,7 +21,7 @@
 import type { Distribution } from './distributions';
 import { failureProbability, type FailureProbability } from './failure-probability';
 import { fsHistogram, type FsHistogram } from './histogram';
-import { rankCorrelation } from './rank-correlation';
+import { averageRanks, rankSetCorrelation } from './rank-correlation';
 import { createSampler, type SamplingMethod } from './sampler';
 
 /** What one sample's analysis reports. */
@@ -168,8 +168,9 @@ export function createMonteCarloRun(options: MonteCarloOptions): MonteCarloRun {
       if (n === 0) throw new RangeError('no sample was evaluated');
       const governing = fs.subarray(0, n);
       const sensitivity: (number | null)[] = [];
+      const governingRanks = averageRanks(governing);
       for (let j = 0; j < d; j++) {
-        sensitivity.push(distributions[j].constant ? null : rankCorrelation(xs.subarray(j * samples, j * samples + n), governing));
+        sensitivity.push(distributions[j].constant ? null : rankSetCorrelation(averageRanks(xs.subarray(j * samples, j * samples + n)), governingRanks));
       }
       let min = Infinity;
       let max = -Infinity;

@@ -15,36 +15,57 @@ export function rankCorrelation(x: ArrayLike<number>, y: ArrayLike<number>): num
 }
 
 /**
- * Ranks 1…n of the values, ties given the mean of the ranks they span: the values are sorted
- * once (a native numeric sort) and each one's rank read by binary search, the tie run
- * [first, last] giving the rank (first + last)/2 + 1.
+ * Pearson's correlation of two rank sets from `averageRanks` (so that one set, e.g. the
+ * governing FS, is ranked once for all the variables); null when either has no spread.
+ */
+export function rankSetCorrelation(a: Float64Array, b: Float64Array): number | null {
+  if (a.length !== b.length) throw new RangeError(`rank correlation needs two sets of the same length, got ${a.length} and ${b.length}`);
+  return a.length < 2 ? null : pearson(a, b);
+}
+
+/**
+ * Ranks 1…n of the values, ties given the mean of the ranks they span. The values are sorted
+ * together with their positions by a bottom-up merge sort (stable, sequential memory access:
+ * 1e5 values rank in a few milliseconds, where a comparator sort of indices or a binary search
+ * per value jumps around memory), then each run of equal values [first, last] gets the rank
+ * (first + last)/2 + 1.
  */
 export function averageRanks(values: ArrayLike<number>): Float64Array {
   const n = values.length;
-  const sorted = new Float64Array(n);
+  let keys = Float64Array.from(values);
+  let index = new Uint32Array(n);
   for (let i = 0; i < n; i++) {
-    if (Number.isNaN(values[i])) throw new RangeError(`values[${i}] is NaN`);
-    sorted[i] = values[i];
+    if (Number.isNaN(keys[i])) throw new RangeError(`values[${i}] is NaN`);
+    index[i] = i;
   }
-  sorted.sort();
+  let keysOut = new Float64Array(n);
+  let indexOut = new Uint32Array(n);
+  for (let width = 1; width < n; width *= 2) {
+    for (let lo = 0; lo < n; lo += 2 * width) {
+      const mid = Math.min(lo + width, n);
+      const hi = Math.min(lo + 2 * width, n);
+      let a = lo;
+      let b = mid;
+      for (let k = lo; k < hi; k++) {
+        if (a < mid && (b >= hi || keys[a] <= keys[b])) {
+          keysOut[k] = keys[a];
+          indexOut[k] = index[a++];
+        } else {
+          keysOut[k] = keys[b];
+          indexOut[k] = index[b++];
+        }
+      }
+    }
+    [keys, keysOut] = [keysOut, keys];
+    [index, indexOut] = [indexOut, index];
+  }
   const ranks = new Float64Array(n);
-  for (let i = 0; i < n; i++) {
-    const v = values[i];
-    let lo = 0;
-    let hi = n;
-    while (lo < hi) {
-      const mid = (lo + hi) >>> 1;
-      if (sorted[mid] < v) lo = mid + 1;
-      else hi = mid;
-    }
-    const first = lo;
-    hi = n;
-    while (lo < hi) {
-      const mid = (lo + hi) >>> 1;
-      if (sorted[mid] <= v) lo = mid + 1;
-      else hi = mid;
-    }
-    ranks[i] = (first + lo - 1) / 2 + 1;
+  for (let start = 0; start < n; ) {
+    let end = start + 1;
+    while (end < n && keys[end] === keys[start]) end++;
+    const rank = (start + end + 1) / 2;
+    for (let k = start; k < end; k++) ranks[index[k]] = rank;
+    start = end;
   }
   return ranks;
 }
