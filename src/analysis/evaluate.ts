@@ -5,7 +5,7 @@
  */
 import { elasticBeam, type BeamEnds, type BeamResult } from '../mechanics/beam';
 import { groupLayers, shareLoads, type SharedLoads } from '../mechanics/layering';
-import { plateCoefficients, type PlateCoefficients } from '../mechanics/plate';
+import { MAX_ASPECT, plateCoefficients, type PlateCoefficients } from '../mechanics/plate';
 import { solveVoussoir, type VoussoirResult } from '../mechanics/voussoir';
 import { rockMassModulus } from '../strength/rock-mass-modulus';
 import { strengthChain, type StrengthChain } from '../strength/chain';
@@ -80,10 +80,21 @@ export function moduliFor(layer: LayerSI, chain: StrengthChain, p: ProjectSI): {
   return { mass, beam };
 }
 
-/** β, α for a slab; the aspect ratio is the project's, held fixed when the span varies (METHODS §11). */
+/**
+ * b/a solved for a slab: the project's ratio, held fixed when the span varies (METHODS §11),
+ * but at most 100. A plate longer than that has reached its plane-strain strip limit (METHODS
+ * §4, b/a → ∞): β and α at b/a = 20, 40, 70 and 100 agree within 0.05 %, the strip values
+ * being β = 3/4 simple, 1/2 clamped (the clamped plate keeps a 0.4 % overshoot of the edge
+ * moment near its short edges, which the b/a = 100 solution includes).
+ */
+export function plateAspect(p: ProjectSI): number {
+  return p.length === null ? 1 : Math.min(p.length / p.span, MAX_ASPECT);
+}
+
+/** β, α for a slab at `plateAspect` (the aspect ratio is held fixed when the span varies). */
 export function plateFor(p: ProjectSI, poisson: number): PlateCoefficients | null {
   if (p.type !== 'slab' || p.length === null) return null;
-  return plateCoefficients({ aspect: p.length / p.span, edges: p.ends, poisson });
+  return plateCoefficients({ aspect: plateAspect(p), edges: p.ends, poisson });
 }
 
 export interface EvaluateOptions {

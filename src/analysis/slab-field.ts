@@ -1,6 +1,6 @@
 /** The bending-stress field over a slab, scaled from the plate solution's coefficient field. */
 import type { Project } from '../model/types';
-import { plateCoefficients } from '../mechanics/plate';
+import { plateFor } from './evaluate';
 import { projectToSI } from './inputs';
 import type { Analysis, SlabField } from './types';
 
@@ -10,7 +10,8 @@ export function slabField(project: Project, analysis: Analysis, layerIndex: numb
   const layer = p.layers[layerIndex];
   const lr = analysis.report.layers[layerIndex];
   if (!layer || !lr) throw new RangeError(`layer index ${layerIndex} is out of range (0..${p.layers.length - 1})`);
-  const c = plateCoefficients({ aspect: p.length / p.span, edges: p.ends, poisson: layer.poisson });
+  const c = plateFor(p, layer.poisson);
+  if (!c) return null;
   const scale = (lr.load_kPa * 1e3 * p.span * p.span) / (layer.thickness * layer.thickness);
   const f = c.field;
   return {

@@ -1,10 +1,15 @@
 /**
- * Largest span per mode (METHODS §11): the largest s in (0, 100 m] with FS(s) ≥ target in every
- * layer, all else fixed, found by bracketing and bisection to 1 mm. Tension: only layers not
- * cross-jointed at the current span take part, with their strengths held at the current-span
- * values. Snap-through: the largest s with a voussoir solution in every layer. Deflection:
- * δ/t ≤ limit. Sliding never limits the span from above (null). For a slab the aspect ratio
- * is held fixed. governing = the smallest non-null value (tension excluded when the basis is
+ * Largest span per mode (METHODS §11 v2): the largest s in [1 mm, 100 m] with FS(s) ≥ target in
+ * every layer, all else fixed, found by bracketing and bisection to 1 mm; the bracket continues
+ * down to 1 mm, so a mode that holds only at very short spans reports that span, and 0 only
+ * when it fails even at 1 mm. Every value is therefore in [0, 100] or null (mode not
+ * applicable). Tension: only layers not cross-jointed at the current span take part (every
+ * layer of a cantilever), with their strengths held at the current-span values; a layer with
+ * cross-joints limits its tension span to its joint spacing (beyond it the layer is cracked),
+ * and a cross-jointed overhang has its uncracked strength min(block, mass) up to its spacing.
+ * Snap-through: the largest s with a voussoir solution in every layer. Deflection: δ/t ≤
+ * limit. Sliding never limits the span from above (null). For a slab the aspect ratio is held
+ * fixed. governing = the smallest non-null value (tension excluded when the basis is
  * "jointed", except for a cantilever).
  */
 import type { MaxSpanReport, Mode } from '../model/types';
@@ -18,6 +23,8 @@ import type { ProjectSI } from './inputs';
 export const SPAN_CAP_M = 100;
 /** Required accuracy is 1 mm; the search bisects ten times finer so the reported value is well inside it. */
 export const SPAN_TOLERANCE_M = 1e-3;
+/** Smallest span tried (METHODS §11 v2: the bracket continues down to 1 mm). */
+export const SPAN_FLOOR_M = 1e-3;
 const PASS = 1e12;
 
 export type SpanFs = Record<Mode, number | null>;
@@ -35,8 +42,9 @@ export function spanFsFunction(p: ProjectSI, current: State): (span: number) => 
     const input = p.layers[i];
     return {
       eligible: !layer.chain.crossJointed || cantilever,
-      zeroCapacity: layer.fsTensionNote === 'jointedOverhang',
-      design: layer.chain.design,
+      // beyond its joint spacing a layer is cracked: no tension capacity (METHODS §11)
+      spacing: input.crossJointSpacing ?? Infinity,
+      design: layer.chain.crossJointed ? Math.min(layer.chain.block, layer.chain.mass) : layer.chain.design,
       load: layer.load,
       thickness: input.thickness,
       modulusBeam: layer.modulusBeam,
@@ -56,7 +64,7 @@ export function spanFsFunction(p: ProjectSI, current: State): (span: number) => 
     };
     for (const b of beds) {
       if (b.eligible) {
-        if (b.zeroCapacity) least('tension', 0);
+        if (span > b.spacing) least('tension', 0);
         else {
           const tension =
             b.beta !== null
@@ -94,7 +102,7 @@ export function maxSpans(p: ProjectSI, current: State, fsAt: (span: number) => S
         const fs = fsAt(s)[mode];
         return fs === null ? PASS : fs / target;
       },
-      { cap: SPAN_CAP_M, tolerance: SPAN_TOLERANCE_M / 10 },
+      { cap: SPAN_CAP_M, tolerance: SPAN_TOLERANCE_M / 10, floor: SPAN_FLOOR_M },
     );
   };
   const tension = find('tension');

@@ -37,7 +37,7 @@
  *     plateCoefficients({ aspect: 2, edges: 'simple', poisson: 0.3 }).alpha // ≈ 0.1106
  */
 import type { EndFixity } from './plate-basis';
-import { type PlateSupports, type RitzPlate, plateAtPoint, plateFieldAt, solvePlateRitz } from './plate-ritz';
+import { type PlateFieldValues, type PlateSupports, type RitzPlate, plateAtPoint, plateFieldAt, solvePlateRitz } from './plate-ritz';
 
 export type EdgeSupport = 'clamped' | 'simple' | 'free';
 
@@ -93,7 +93,8 @@ export interface PlateCoefficients {
 }
 
 const FIXITY: Record<EdgeSupport, EndFixity> = { free: 0, simple: 1, clamped: 2 };
-const MAX_ASPECT = 100;
+/** Largest b/a solved; a longer plate has reached its plane-strain strip limit (see `stripAspect`). */
+export const MAX_ASPECT = 100;
 const MAX_LEVEL = 22;
 const FIRST_LEVEL = 3;
 const MAX_UNKNOWNS = 800;
@@ -172,7 +173,7 @@ function maximise(sol: RitzPlate, measure: Measure, kind: 'stress' | 'deflection
   const nx = 2 * Math.ceil(12 * Math.sqrt(b)) + 1;
   const xs = grid(nx, b);
   const ys = grid(ny, 1);
-  const f = plateFieldAt(sol, xs, ys);
+  const f = fieldOf(sol, xs, ys, `search ${nx}×${ny}`);
   const vals = new Float64Array(nx * ny);
   for (let k = 0; k < vals.length; k++) vals[k] = kind === 'stress' ? principal(f.mx[k], f.my[k], f.mxy[k])[0] : Math.abs(f.w[k]);
   const peaks: number[] = [];
@@ -246,12 +247,90 @@ interface LevelResult {
   level: number;
 }
 
+/**
+ * Solved Ritz systems that do not depend on ν, by aspect, edges and level. With every edge
+ * clamped or simply supported the basis vanishes on the edges, so ∫X″X = −∫X′X′ exactly and
+ * the ν terms of the stiffness, ν(B⊗Bᵀ + Bᵀ⊗B) − 2ν A1⊗A1, cancel: the deflection is the same
+ * for every ν (the known result for plates with w = 0 on straight edges; Timoshenko &
+ * Woinowsky-Krieger 1959, §10) and only the moments change with ν. Layers of one slab that
+ * differ only in ν then share one solve per level. Bounded (oldest dropped first).
+ */
+const solutions = new Map<string, RitzPlate>();
+const SOLUTION_CACHE_SIZE = 64;
+/** A ν-specific view of a shared solution → the shared (ν = 0) solution. */
+const baseOf = new WeakMap<RitzPlate, RitzPlate>();
+/** Fields of a shared solution at ν = 0 on a named grid, and its deflection maximum per tie. */
+const baseFields = new WeakMap<RitzPlate, Map<string, PlateFieldValues>>();
+const baseDeflection = new WeakMap<RitzPlate, Map<number, { value: number; x: number; y: number }>>();
+
+/**
+ * The field on the grid xs × ys. For a view of a shared solution it is built from the shared
+ * ν = 0 field, computed once per grid: with Mx⁰ = −w_xx, My⁰ = −w_yy, Mxy⁰ = −w_xy,
+ * Mx = Mx⁰ + ν My⁰, My = My⁰ + ν Mx⁰, Mxy = (1 − ν) Mxy⁰ (same w for every ν, see `solutions`).
+ */
+function fieldOf(sol: RitzPlate, xs: number[], ys: number[], grid: string): PlateFieldValues {
+  const base = baseOf.get(sol);
+  if (!base) return plateFieldAt(sol, xs, ys);
+  let fields = baseFields.get(base);
+  if (!fields) {
+    fields = new Map();
+    baseFields.set(base, fields);
+  }
+  let f0 = fields.get(grid);
+  if (!f0) {
+    f0 = plateFieldAt(base, xs, ys);
+    fields.set(grid, f0);
+  }
+  const nu = sol.poisson;
+  const n = f0.w.length;
+  const mx = new Float64Array(n);
+  const my = new Float64Array(n);
+  const mxy = new Float64Array(n);
+  for (let k = 0; k < n; k++) {
+    mx[k] = f0.mx[k] + nu * f0.my[k];
+    my[k] = f0.my[k] + nu * f0.mx[k];
+    mxy[k] = (1 - nu) * f0.mxy[k];
+  }
+  return { w: f0.w, mx, my, mxy };
+}
+
 function solveLevel(aspect: number, poisson: number, supports: PlateSupports, level: number, tie: number): LevelResult {
   const [cx, cy] = counts(supports, aspect, level);
-  const sol = solvePlateRitz(aspect, poisson, supports, cx, cy);
+  const shareable = [...supports.x, ...supports.y].every((e) => e !== 0);
+  let sol: RitzPlate;
+  if (shareable) {
+    const key = `${aspect}|${supports.x.join(',')}|${supports.y.join(',')}|${level}`;
+    let base = solutions.get(key);
+    if (!base) {
+      base = solvePlateRitz(aspect, 0, supports, cx, cy);
+      if (solutions.size >= SOLUTION_CACHE_SIZE) solutions.delete(solutions.keys().next().value as string);
+      solutions.set(key, base);
+    }
+    sol = { ...base, poisson };
+    baseOf.set(sol, base);
+  } else {
+    sol = solvePlateRitz(aspect, poisson, supports, cx, cy);
+  }
   const stressMax = maximise(sol, stressAt, 'stress', tie);
-  const wMax = maximise(sol, deflectionAt, 'deflection', tie);
+  const wMax = deflectionMaximum(sol, tie);
   return { sol, beta: 6 * stressMax.value, alpha: 12 * (1 - poisson * poisson) * wMax.value, stressMax, level };
+}
+
+/** Largest deflection; the same for every view of a shared solution (w does not depend on ν). */
+function deflectionMaximum(sol: RitzPlate, tie: number): { value: number; x: number; y: number } {
+  const base = baseOf.get(sol);
+  if (!base) return maximise(sol, deflectionAt, 'deflection', tie);
+  let byTie = baseDeflection.get(base);
+  if (!byTie) {
+    byTie = new Map();
+    baseDeflection.set(base, byTie);
+  }
+  let hit = byTie.get(tie);
+  if (!hit) {
+    hit = maximise(base, deflectionAt, 'deflection', tie);
+    byTie.set(tie, hit);
+  }
+  return hit;
 }
 
 /**
@@ -275,10 +354,13 @@ function edgeKey(edges: PlateInput['edges']): string {
 }
 
 const cache = new Map<string, PlateCoefficients>();
+/** Results kept (oldest dropped first), so that a long run over many slabs stays bounded. */
+const CACHE_SIZE = 512;
 
-/** Empty the result cache (for benchmarks and tests). */
+/** Empty the result caches (for benchmarks and tests). */
 export function clearPlateCache(): void {
   cache.clear();
+  solutions.clear();
 }
 
 /** Plate coefficients for the input (see the module doc); cached, result frozen. */
@@ -320,7 +402,7 @@ export function plateCoefficients(input: PlateInput): PlateCoefficients {
   const fnx = Math.min(401, Math.round(20 * aspect) + 1);
   const fx = grid(fnx, aspect);
   const fy = grid(fny, 1);
-  const f = plateFieldAt(sol, fx, fy);
+  const f = fieldOf(sol, fx, fy, `output ${fnx}×${fny}`);
   const values: number[] = new Array(fnx * fny);
   const faces: Array<'top' | 'bottom'> = new Array(fnx * fny);
   for (let k = 0; k < values.length; k++) {
@@ -349,6 +431,7 @@ export function plateCoefficients(input: PlateInput): PlateCoefficients {
       (eb > accuracy || ea > accuracy ? ` — NOT converged to ${accuracy}` : ''),
   };
   Object.freeze(result);
+  if (cache.size >= CACHE_SIZE) cache.delete(cache.keys().next().value as string);
   cache.set(key, result);
   return result;
 }
