@@ -100,7 +100,7 @@ export function analyse(project: Project): Analysis {
     warnings.push({
       code: 'SLAB_STRIP',
       path: 'opening.length_m',
-      message: `Slab: length/span ${round(p.length / p.span)} is above ${plateAspect(p)}; the plate is solved at length/span ${plateAspect(p)}, where it has reached its plane-strain strip limit (β and α change by less than 0.05 % beyond b/a = 20).`,
+      message: `Slab: length/span ${round(p.length / p.span)} is above ${plateAspect(p)}; the plate is solved at length/span ${plateAspect(p)}, where it has reached its plane-strain strip limit (β and α change by less than 0.05 % beyond it).`,
     });
   }
   if (p.type === 'slab') {

@@ -169,10 +169,15 @@ function grid(n: number, length: number): number[] {
  */
 function maximise(sol: RitzPlate, measure: Measure, kind: 'stress' | 'deflection', tie: number): { value: number; x: number; y: number } {
   const b = sol.aspect;
-  const ny = 25;
-  const nx = 2 * Math.ceil(12 * Math.sqrt(b)) + 1;
-  const xs = grid(nx, b);
-  const ys = grid(ny, 1);
+  // Where both ends of a side are alike the field is symmetric about the middle of that side:
+  // scan one half (the middle line is a node, and the spacing is that of the full grid).
+  const symX = sol.bx.ends[0] === sol.bx.ends[1];
+  const symY = sol.by.ends[0] === sol.by.ends[1];
+  const nxFull = 2 * Math.ceil(12 * Math.sqrt(b)) + 1;
+  const nx = symX ? (nxFull + 1) / 2 : nxFull;
+  const ny = symY ? 13 : 25;
+  const xs = grid(nx, symX ? b / 2 : b);
+  const ys = grid(ny, symY ? 0.5 : 1);
   const f = fieldOf(sol, xs, ys, `search ${nx}×${ny}`);
   const vals = new Float64Array(nx * ny);
   for (let k = 0; k < vals.length; k++) vals[k] = kind === 'stress' ? principal(f.mx[k], f.my[k], f.mxy[k])[0] : Math.abs(f.w[k]);
@@ -198,8 +203,8 @@ function maximise(sol: RitzPlate, measure: Measure, kind: 'stress' | 'deflection
     let x = xs[k % nx];
     let y = ys[Math.floor(k / nx)];
     let v = vals[k];
-    let hx = b / (nx - 1);
-    let hy = 1 / (ny - 1);
+    let hx = b / (nxFull - 1);
+    let hy = 1 / 24;
     while (hy > 2e-5) {
       let moved = false;
       for (const [dx, dy] of [[hx, 0], [-hx, 0], [0, hy], [0, -hy]]) {
