@@ -5,6 +5,7 @@
 import { benchVoussoir } from './voussoir.bench';
 import { benchPlate } from './plate.bench';
 import { benchAnalysis } from './analysis.bench';
+import { benchWorstCase } from './worst-case.bench';
 import { benchUncertainty } from './uncertainty.bench';
 import type { BenchResult } from './types';
 
@@ -12,6 +13,7 @@ const groups: [string, () => Promise<BenchResult[]>][] = [
   ['voussoir', benchVoussoir],
   ['plate', benchPlate],
   ['analysis', benchAnalysis],
+  ['worst case (fuzz set)', () => benchWorstCase()],
   ['uncertainty', benchUncertainty],
 ];
 
