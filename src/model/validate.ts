@@ -8,7 +8,7 @@
  * flag unknown keys (ignored), implausible but legal values, and judgement defaults.
  *
  * Limits (refused outside; the reasons are in the doc block of `NUMBERS` below): span
- * 0.01–1000 m; slab length 0.01–100 000 m and ≥ span (a slab longer than 100 spans is analysed
+ * 0.01–1000 m; slab length 0.01–100 000 m and ≥ span (a slab longer than 20 spans is analysed
  * as its plane-strain strip); thickness 0.001–1000 m; unit weight 5–60 kN/m³; E 0.001–10 000
  * GPa; Poisson 0 ≤ ν < 0.5; UCS 0.01–1000 MPa; tensile value 0–100 MPa (0 = no tensile
  * strength, e.g. a fractured mass: FS tension 0 wherever the layer is in net tension);
@@ -324,7 +324,7 @@ function scanForbidden(value: unknown, path: string, reader: Reader, seen: Set<o
  * "implausible" warnings flag values inside them that are legal but unusual. The bounds are
  * physically meaningful and generous (common practice unless a source is named):
  * - span 0.01–1000 m: from a hand-sized gap to far beyond any roof; the span search stops at 100 m.
- * - slab length 0.01–100 000 m (and ≥ span): a slab longer than 100 spans is analysed as its
+ * - slab length 0.01–100 000 m (and ≥ span): a slab longer than 20 spans is analysed as its
  *   plane-strain strip limit (METHODS §4, b/a → ∞).
  * - thickness 0.001–1000 m: a 1 mm lamina to a 1 km massive unit; a floor keeps q s²/t² finite.
  * - unit weight 5–60 kN/m³: light coal/evaporite ≈ 12 to dense ores ≈ 45, with margin.
