@@ -138,11 +138,14 @@ function counts(supports: PlateSupports, aspect: number, level: number): [number
   return [cx, cy];
 }
 
-/** Larger principal moment magnitude and its sign (+1 sagging / bottom tension, −1 hogging / top). */
-function principal(mx: number, my: number, mxy: number): [number, number] {
-  const mean = (mx + my) / 2;
-  const radius = Math.hypot((mx - my) / 2, mxy);
-  return [Math.abs(mean) + radius, mean >= 0 ? 1 : -1];
+/** Larger principal moment magnitude |mean| + radius (allocation-free: the search's hot path). */
+function principalValue(mx: number, my: number, mxy: number): number {
+  return Math.abs((mx + my) / 2) + Math.hypot((mx - my) / 2, mxy);
+}
+
+/** Sign of the larger principal moment: +1 sagging (bottom tension), −1 hogging (top). */
+function principalSign(mx: number, my: number): number {
+  return mx + my >= 0 ? 1 : -1;
 }
 
 type Measure = (sol: RitzPlate, x: number, y: number) => number;
@@ -150,7 +153,7 @@ type Measure = (sol: RitzPlate, x: number, y: number) => number;
 const scratch = new Float64Array(4);
 const stressAt: Measure = (sol, x, y) => {
   plateAtPoint(sol, x, y, scratch);
-  return principal(scratch[1], scratch[2], scratch[3])[0];
+  return principalValue(scratch[1], scratch[2], scratch[3]);
 };
 const deflectionAt: Measure = (sol, x, y) => {
   plateAtPoint(sol, x, y, scratch);
@@ -180,7 +183,7 @@ function maximise(sol: RitzPlate, measure: Measure, kind: 'stress' | 'deflection
   const ys = grid(ny, symY ? 0.5 : 1);
   const f = fieldOf(sol, xs, ys, `search ${nx}×${ny}`);
   const vals = new Float64Array(nx * ny);
-  for (let k = 0; k < vals.length; k++) vals[k] = kind === 'stress' ? principal(f.mx[k], f.my[k], f.mxy[k])[0] : Math.abs(f.w[k]);
+  for (let k = 0; k < vals.length; k++) vals[k] = kind === 'stress' ? principalValue(f.mx[k], f.my[k], f.mxy[k]) : Math.abs(f.w[k]);
   const peaks: number[] = [];
   for (let r = 0; r < ny; r++) {
     for (let s = 0; s < nx; s++) {
@@ -400,21 +403,29 @@ export function plateCoefficients(input: PlateInput): PlateCoefficients {
 
   const { sol, stressMax } = cur;
   const at = plateFieldAt(sol, [stressMax.x], [stressMax.y]);
-  const face = principal(at.mx[0], at.my[0], at.mxy[0])[1] > 0 ? 'bottom' : 'top';
+  const face = principalSign(at.mx[0], at.my[0]) > 0 ? 'bottom' : 'top';
   const centre = plateFieldAt(sol, [aspect / 2], [0.5]);
 
-  const fny = 21;
-  const fnx = Math.min(401, Math.round(20 * aspect) + 1);
-  const fx = grid(fnx, aspect);
-  const fy = grid(fny, 1);
-  const f = fieldOf(sol, fx, fy, `output ${fnx}×${fny}`);
-  const values: number[] = new Array(fnx * fny);
-  const faces: Array<'top' | 'bottom'> = new Array(fnx * fny);
-  for (let k = 0; k < values.length; k++) {
-    const [m, sign] = principal(f.mx[k], f.my[k], f.mxy[k]);
-    values[k] = 6 * m;
-    faces[k] = sign > 0 ? 'bottom' : 'top';
-  }
+  // The stress field for contour plots, built on first use (the checks need only β and α).
+  let field: PlateField | null = null;
+  const buildField = (): PlateField => {
+    const fny = 21;
+    const fnx = Math.min(401, Math.round(20 * aspect) + 1);
+    const fx = grid(fnx, aspect);
+    const fy = grid(fny, 1);
+    const f = fieldOf(sol, fx, fy, `output ${fnx}×${fny}`);
+    const values: number[] = new Array(fnx * fny);
+    const faces: Array<'top' | 'bottom'> = new Array(fnx * fny);
+    for (let k = 0; k < values.length; k++) {
+      values[k] = 6 * principalValue(f.mx[k], f.my[k], f.mxy[k]);
+      faces[k] = principalSign(f.mx[k], f.my[k]) > 0 ? 'bottom' : 'top';
+    }
+    return Object.freeze({
+      nx: fnx, ny: fny,
+      x: Object.freeze(fx) as number[], y: Object.freeze(fy) as number[],
+      values: Object.freeze(values) as number[], faces: Object.freeze(faces) as Array<'top' | 'bottom'>,
+    });
+  };
   const [cx, cy] = counts(supports, aspect, cur.level);
   const result: PlateCoefficients = {
     beta: cur.beta,
@@ -425,11 +436,10 @@ export function plateCoefficients(input: PlateInput): PlateCoefficients {
     betaCentre: 6 * centre.my[0],
     errorEstimate: eb,
     alphaErrorEstimate: ea,
-    field: Object.freeze({
-      nx: fnx, ny: fny,
-      x: Object.freeze(fx) as number[], y: Object.freeze(fy) as number[],
-      values: Object.freeze(values) as number[], faces: Object.freeze(faces) as Array<'top' | 'bottom'>,
-    }),
+    get field(): PlateField {
+      field ??= buildField();
+      return field;
+    },
     method:
       `Ritz energy method, Legendre basis ${cx} × ${cy} terms (long × short side, degree ${sol.bx.degree} × ${sol.by.degree}, ` +
       `${sol.unknowns} unknowns), level ${cur.level}; largest change over levels ${prev.level}–${cur.level}: β ${(100 * eb).toPrecision(2)}%, α ${(100 * ea).toPrecision(2)}%` +

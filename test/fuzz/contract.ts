@@ -7,7 +7,7 @@
  * `governing` names a layer and equals that layer's FS for the mode; the JSON round trip is
  * lossless. Returns the list of violations (empty when the contract holds).
  */
-import { analyse, beamProfile, slabField, spanCurve } from '../../src/analysis';
+import { analyse, beamProfile, designChart, minimumThickness, slabField, spanCurve } from '../../src/analysis';
 import type { Analysis } from '../../src/analysis';
 import { deflectionFs } from '../../src/analysis/checks';
 import type { Project, Report } from '../../src/model/types';
@@ -102,16 +102,19 @@ export function reportViolations(project: Project, report: Report): string[] {
   return bad;
 }
 
-/** Analyse a valid project and check the contract; also the chart functions on request. */
-export function checkProject(project: Project, withCharts: boolean): { violations: string[]; ms: number; analysis: Analysis | null } {
+/** Analyse a valid project and check the contract; also the chart data and the thickness search on request. */
+export function checkProject(project: Project, withCharts: boolean): { violations: string[]; ms: number; cpuMs: number; analysis: Analysis | null } {
+  const c0 = process.cpuUsage();
   const t0 = performance.now();
+  const cpu = () => { const c = process.cpuUsage(c0); return (c.user + c.system) / 1000; };
   let analysis: Analysis;
   try {
     analysis = analyse(project);
   } catch (e) {
-    return { violations: [`analyse threw: ${(e as Error).stack ?? String(e)}`], ms: performance.now() - t0, analysis: null };
+    return { violations: [`analyse threw: ${(e as Error).stack ?? String(e)}`], ms: performance.now() - t0, cpuMs: cpu(), analysis: null };
   }
   const ms = performance.now() - t0;
+  const cpuMs = cpu();
   const violations = reportViolations(project, analysis.report);
   violations.push(...nonFinite(analysis.layers, 'detail.layers').map((x) => `non-finite ${x}`));
   violations.push(...nonFinite(analysis.groups, 'detail.groups').map((x) => `non-finite ${x}`));
@@ -120,9 +123,13 @@ export function checkProject(project: Project, withCharts: boolean): { violation
       violations.push(...nonFinite(spanCurve(project), 'spanCurve').map((x) => `non-finite ${x}`));
       violations.push(...nonFinite(beamProfile(project, analysis, 0), 'beamProfile').map((x) => `non-finite ${x}`));
       violations.push(...nonFinite(slabField(project, analysis, 0), 'slabField').map((x) => `non-finite ${x}`));
+      const last = project.layers.length - 1;
+      violations.push(...nonFinite(designChart(project, last, { spans_m: [0.01, 1, 100], thicknesses_m: [0.001, 1, 1000] }), 'designChart').map((x) => `non-finite ${x}`));
+      const tMin = minimumThickness(project, last);
+      if (tMin !== null && !(tMin > 0 && Number.isFinite(tMin))) violations.push(`minimumThickness: ${tMin}`);
     } catch (e) {
       violations.push(`chart data threw: ${(e as Error).stack ?? String(e)}`);
     }
   }
-  return { violations, ms, analysis };
+  return { violations, ms, cpuMs, analysis };
 }

@@ -22,7 +22,9 @@ console.log(`Lamina fuzz — seed ${seed}, node ${process.version}, ${total.toFi
 console.log(`valid projects: ${r.valid} (generator refused ${r.generatorRefused})`);
 console.log(`mutated presets: ${r.mutations} — refused with field paths ${r.refused}, accepted and analysed ${r.accepted}`);
 console.log(`failures (crash, NaN/Infinity, contract): ${failureCount(r)}`);
-console.log(`analyse() time over the valid set: p50 ${fmt(percentile(r.times, 0.5))}, p99 ${fmt(percentile(r.times, 0.99))}, p99.9 ${fmt(percentile(r.times, 0.999))}, max ${fmt(percentile(r.times, 1))}`);
+const dist = (xs: number[]) => `p50 ${fmt(percentile(xs, 0.5))}, p99 ${fmt(percentile(xs, 0.99))}, p99.9 ${fmt(percentile(xs, 0.999))}, max ${fmt(percentile(xs, 1))}`;
+console.log(`analyse() wall time over the valid set: ${dist(r.times)}`);
+console.log(`analyse() CPU time over the valid set:  ${dist(r.cpuTimes)}`);
 for (const f of r.failures) {
   console.log(`\n✗ ${f.kind} #${f.index} (seed ${f.seed}):\n  ${f.problems.slice(0, 6).join('\n  ')}\n  input: ${f.input.slice(0, 2000)}`);
 }
