@@ -6,10 +6,10 @@
  */
 import type { LayerReport, Project, Report, VoussoirReport, Warning } from '../model/types';
 import type { Analysis, GroupDetail, LabDetail, LayerDetail, StrengthStep } from './types';
-import { evaluate, type LayerState, type State } from './evaluate';
+import { evaluate, plateAspect, type LayerState, type State } from './evaluate';
 import { projectToSI, type LayerSI, type ProjectSI } from './inputs';
 import { governingCheck, layerChecks, targetFor } from './checks';
-import { maxSpans, spanFsFunction, SPAN_CAP_M } from './span-finder';
+import { maxSpans, spanFsFunction, SPAN_CAP_M, SPAN_FLOOR_M } from './span-finder';
 import { SOURCES, TraceBuilder } from './trace';
 import { beamCoefficients } from '../mechanics/beam';
 
@@ -78,8 +78,10 @@ export function analyse(project: Project): Analysis {
       SOURCES.lamina,
       (value >= SPAN_CAP_M
         ? `The target holds at every span up to the ${SPAN_CAP_M} m search cap.`
-        : `Largest span with the ${MODE_WORDS[mode]} target met in every layer, by bracketing and bisection to 1 mm; all else fixed.`) +
-        (mode === 'tension' ? ' Strengths held at the current-span values; cross-jointed layers excluded.' : '') +
+        : value === 0
+          ? `The ${MODE_WORDS[mode]} target is not met at any span down to ${SPAN_FLOOR_M * 1e3} mm, the smallest span searched.`
+          : `Largest span with the ${MODE_WORDS[mode]} target met in every layer, by bracketing and bisection to 1 mm; all else fixed.`) +
+        (mode === 'tension' ? ' Strengths held at the current-span values; cross-jointed layers excluded; a layer with cross-joints limits the span to its joint spacing.' : '') +
         (p.type === 'slab' ? ' Slab: the aspect ratio is held fixed.' : ''),
     );
   }
@@ -92,6 +94,13 @@ export function analyse(project: Project): Analysis {
       code: 'SLIDING_SPAN',
       path: 'maxSpan_m.sliding',
       message: 'FS sliding rises with span (fc grows as s²), so sliding never limits the span from above; a sliding shortfall is reported at the current span.',
+    });
+  }
+  if (p.type === 'slab' && p.length !== null && p.length / p.span > plateAspect(p)) {
+    warnings.push({
+      code: 'SLAB_STRIP',
+      path: 'opening.length_m',
+      message: `Slab: length/span ${round(p.length / p.span)} is above ${plateAspect(p)}; the plate is solved at length/span ${plateAspect(p)}, where it has reached its plane-strain strip limit (β and α change by less than 0.05 % beyond it).`,
     });
   }
   if (p.type === 'slab') {
@@ -480,7 +489,9 @@ function plateReport(base: string, layer: LayerSI, ls: LayerState, p: ProjectSI,
   const pl = ls.plate;
   if (!pl) return null;
   const c = pl.coefficients;
-  const note = `β, α from Lamina's plate solution for b/a = ${round((p.length ?? p.span) / p.span)}, ${p.ends} edges, ν = ${layer.poisson} (${c.method}; estimated error ${(c.errorEstimate * 100).toFixed(2)} %).`;
+  const ratio = (p.length ?? p.span) / p.span;
+  const strip = ratio > plateAspect(p) ? ` (solved at b/a = ${plateAspect(p)}: a longer plate has reached its plane-strain strip limit)` : '';
+  const note = `β, α from Lamina's plate solution for b/a = ${round(ratio)}${strip}, ${p.ends} edges, ν = ${layer.poisson} (${c.method}; estimated error ${(c.errorEstimate * 100).toFixed(2)} %).`;
   trace.add(`${base}.plate.beta`, `Plate stress coefficient β, ${layer.name}`, 'beta', { beta: [c.beta, ''] }, c.beta, '', SOURCES.plate, note);
   trace.add(`${base}.plate.alpha`, `Plate deflection coefficient α, ${layer.name}`, 'alpha', { alpha: [c.alpha, ''] }, c.alpha, '', SOURCES.plate, note);
   trace.add(`${base}.plate.maxTension_MPa`, `Maximum net plate tension, ${layer.name}`, 'beta * q * a^2 / t^2 - sigma_h',

@@ -1,10 +1,15 @@
 /**
- * Largest span per mode (METHODS §11): the largest s in (0, 100 m] with FS(s) ≥ target in every
- * layer, all else fixed, found by bracketing and bisection to 1 mm. Tension: only layers not
- * cross-jointed at the current span take part, with their strengths held at the current-span
- * values. Snap-through: the largest s with a voussoir solution in every layer. Deflection:
- * δ/t ≤ limit. Sliding never limits the span from above (null). For a slab the aspect ratio
- * is held fixed. governing = the smallest non-null value (tension excluded when the basis is
+ * Largest span per mode (METHODS §11 v2): the largest s in [1 mm, 100 m] with FS(s) ≥ target in
+ * every layer, all else fixed, found by bracketing and bisection to 1 mm; the bracket continues
+ * down to 1 mm, so a mode that holds only at very short spans reports that span, and 0 only
+ * when it fails even at 1 mm. Every value is therefore in [0, 100] or null (mode not
+ * applicable). Tension: only layers not cross-jointed at the current span take part (every
+ * layer of a cantilever), with their strengths held at the current-span values; a layer with
+ * cross-joints limits its tension span to its joint spacing (beyond it the layer is cracked),
+ * and a cross-jointed overhang has its uncracked strength min(block, mass) up to its spacing.
+ * Snap-through: the largest s with a voussoir solution in every layer. Deflection: δ/t ≤
+ * limit. Sliding never limits the span from above (null). For a slab the aspect ratio is held
+ * fixed. governing = the smallest non-null value (tension excluded when the basis is
  * "jointed", except for a cantilever).
  */
 import type { MaxSpanReport, Mode } from '../model/types';
@@ -12,15 +17,70 @@ import { largestPassingSpan } from '../mechanics/span-search';
 import { deflectionFs, targetFor } from './checks';
 import type { State } from './evaluate';
 import { elasticBeam } from '../mechanics/beam';
-import { solveVoussoir } from '../mechanics/voussoir';
+import { solveVoussoir, type VoussoirResult } from '../mechanics/voussoir';
 import type { ProjectSI } from './inputs';
 
 export const SPAN_CAP_M = 100;
 /** Required accuracy is 1 mm; the search bisects ten times finer so the reported value is well inside it. */
 export const SPAN_TOLERANCE_M = 1e-3;
+/** Smallest span tried (METHODS §11 v2: the bracket continues down to 1 mm). */
+export const SPAN_FLOOR_M = 1e-3;
 const PASS = 1e12;
 
 export type SpanFs = Record<Mode, number | null>;
+
+type VoussoirMode = 'crushing' | 'sliding' | 'snapThrough' | 'deflection';
+
+/** FS of one layer in one voussoir mode (PASS where the value is null: no demand). */
+function voussoirModeFs(v: VoussoirResult, mode: VoussoirMode, limit: number): number {
+  if (v.snapThrough) return 0;
+  switch (mode) {
+    case 'snapThrough': return 1;
+    case 'crushing': return v.fsCrushing ?? PASS;
+    case 'sliding': return v.fsSliding ?? PASS;
+    case 'deflection': return deflectionFs(v.deflectionRatio, limit) ?? PASS;
+  }
+}
+
+/**
+ * The span-dependent part of every layer, with the loads, moduli, strengths and plate
+ * coefficients taken from the current state once (they do not depend on the span). Each
+ * layer's voussoir solution is kept per span, so the modes share it.
+ */
+function spanBeds(p: ProjectSI, current: State) {
+  const cantilever = current.ends === 'cantilever';
+  return current.layers.map((layer, i) => {
+    const input = p.layers[i];
+    const beta = layer.plate ? layer.plate.coefficients.beta : null;
+    const voussoirInput = !cantilever && layer.effectiveUnitWeight > 0 ? { thickness: input.thickness, unitWeight: layer.effectiveUnitWeight, modulus: layer.modulusMass, ucs: input.ucs, frictionDeg: input.jointFriction } : null;
+    const solved = new Map<number, VoussoirResult>();
+    return {
+      eligible: !layer.chain.crossJointed || cantilever,
+      // beyond its joint spacing a layer is cracked: no tension capacity (METHODS §11)
+      spacing: input.crossJointSpacing ?? Infinity,
+      design: layer.chain.crossJointed ? Math.min(layer.chain.block, layer.chain.mass) : layer.chain.design,
+      /** FS tension at a span (PASS where there is no net tension). */
+      tension(span: number): number {
+        if (span > this.spacing) return 0;
+        const t = input.thickness;
+        const net =
+          beta !== null
+            ? (beta * layer.load * span * span) / (t * t) - p.horizontalStress
+            : elasticBeam({ ends: current.ends, span, thickness: t, load: layer.load, modulus: layer.modulusBeam, horizontalStress: p.horizontalStress }).maxTension;
+        return net > 0 ? this.design / net : PASS;
+      },
+      hasVoussoir: voussoirInput !== null,
+      voussoir(span: number): VoussoirResult {
+        let v = solved.get(span);
+        if (!v) {
+          v = solveVoussoir({ span, ...voussoirInput! });
+          solved.set(span, v);
+        }
+        return v;
+      },
+    };
+  });
+}
 
 /**
  * Governing FS per mode at a span, strengths and cross-jointing held at the current-span state.
@@ -30,21 +90,7 @@ export type SpanFs = Record<Mode, number | null>;
  */
 export function spanFsFunction(p: ProjectSI, current: State): (span: number) => SpanFs {
   const limit = p.design.deflectionLimitRatio;
-  const cantilever = current.ends === 'cantilever';
-  const beds = current.layers.map((layer, i) => {
-    const input = p.layers[i];
-    return {
-      eligible: !layer.chain.crossJointed || cantilever,
-      zeroCapacity: layer.fsTensionNote === 'jointedOverhang',
-      design: layer.chain.design,
-      load: layer.load,
-      thickness: input.thickness,
-      modulusBeam: layer.modulusBeam,
-      modulusMass: layer.modulusMass,
-      beta: layer.plate ? layer.plate.coefficients.beta : null,
-      voussoir: !cantilever && layer.effectiveUnitWeight > 0 ? { thickness: input.thickness, unitWeight: layer.effectiveUnitWeight, modulus: layer.modulusMass, ucs: input.ucs, frictionDeg: input.jointFriction } : null,
-    };
-  });
+  const beds = spanBeds(p, current);
   const cache = new Map<number, SpanFs>();
   return (span: number): SpanFs => {
     const hit = cache.get(span);
@@ -55,47 +101,55 @@ export function spanFsFunction(p: ProjectSI, current: State): (span: number) => 
       out[mode] = prev === null ? value : Math.min(prev, value);
     };
     for (const b of beds) {
-      if (b.eligible) {
-        if (b.zeroCapacity) least('tension', 0);
-        else {
-          const tension =
-            b.beta !== null
-              ? (b.beta * b.load * span * span) / (b.thickness * b.thickness) - p.horizontalStress
-              : elasticBeam({ ends: current.ends, span, thickness: b.thickness, load: b.load, modulus: b.modulusBeam, horizontalStress: p.horizontalStress }).maxTension;
-          least('tension', tension > 0 ? b.design / tension : PASS);
-        }
-      }
-      if (!b.voussoir) continue;
-      const v = solveVoussoir({ span, ...b.voussoir });
-      if (v.snapThrough) {
-        least('snapThrough', 0);
-        least('crushing', 0);
-        least('sliding', 0);
-        least('deflection', 0);
-      } else {
-        least('snapThrough', 1);
-        least('crushing', v.fsCrushing ?? PASS);
-        least('sliding', v.fsSliding ?? PASS);
-        least('deflection', deflectionFs(v.deflectionRatio, limit) ?? PASS);
-      }
+      if (b.eligible) least('tension', b.tension(span));
+      if (!b.hasVoussoir) continue;
+      const v = b.voussoir(span);
+      for (const mode of ['crushing', 'sliding', 'snapThrough', 'deflection'] as const) least(mode, voussoirModeFs(v, mode, limit));
     }
     cache.set(span, out);
     return out;
   };
 }
 
+/**
+ * Pass/fail of one mode at a span for the search: the same minimum over the layers as
+ * `spanFsFunction`, but it stops at the first layer that fails, starting from the layer that
+ * failed last (above the largest span most layers fail, so most samples cost one layer).
+ */
+function modePasses(p: ProjectSI, current: State): (mode: Exclude<Mode, 'sliding'>, span: number) => boolean {
+  const limit = p.design.deflectionLimitRatio;
+  const beds = spanBeds(p, current);
+  const lastFail: Partial<Record<Mode, number>> = {};
+  return (mode, span) => {
+    const target = targetFor(mode, p.design);
+    const n = beds.length;
+    const start = lastFail[mode] ?? 0;
+    for (let k = 0; k < n; k++) {
+      const i = (start + k) % n;
+      const b = beds[i];
+      let fs: number;
+      if (mode === 'tension') {
+        if (!b.eligible) continue;
+        fs = b.tension(span);
+      } else {
+        if (!b.hasVoussoir) continue;
+        fs = voussoirModeFs(b.voussoir(span), mode, limit);
+      }
+      if (!(fs / target >= 1)) {
+        lastFail[mode] = i;
+        return false;
+      }
+    }
+    return true;
+  };
+}
+
 export function maxSpans(p: ProjectSI, current: State, fsAt: (span: number) => SpanFs = spanFsFunction(p, current)): MaxSpanReport {
   const here = fsAt(current.span);
-  const find = (mode: Mode): number | null => {
+  const passes = modePasses(p, current);
+  const find = (mode: Exclude<Mode, 'sliding'>): number | null => {
     if (here[mode] === null) return null;
-    const target = targetFor(mode, p.design);
-    return largestPassingSpan(
-      (s) => {
-        const fs = fsAt(s)[mode];
-        return fs === null ? PASS : fs / target;
-      },
-      { cap: SPAN_CAP_M, tolerance: SPAN_TOLERANCE_M / 10 },
-    );
+    return largestPassingSpan((s) => (passes(mode, s) ? 1 : 0), { cap: SPAN_CAP_M, tolerance: SPAN_TOLERANCE_M / 10, floor: SPAN_FLOOR_M });
   };
   const tension = find('tension');
   const crushing = find('crushing');

@@ -2,19 +2,20 @@
  * Default values for the project file (`*.lamina.json`, schema "lamina/1") and a sensible
  * starting project. Together with `validate.ts` this is the one source of truth for the schema.
  *
- * REQUIRED (refused when missing — nothing important is guessed):
+ * REQUIRED (refused when missing — nothing important is guessed; every bound, with its reason,
+ * is in `NUMBERS` in validate.ts):
  *   schema                         "lamina/1"
  *   opening.type                   "beam" | "slab" | "cantilever"
- *   opening.span_m                 > 0 m
- *   opening.length_m               slab only, ≥ span_m (ignored with a warning otherwise)
+ *   opening.span_m                 0.01–1000 m
+ *   opening.length_m               slab only, ≥ span_m, ≤ 100 000 m (ignored with a warning otherwise)
  *   opening.ends                   "clamped" | "simple" for a beam or a slab (for a cantilever it
  *                                  is ignored and defaults to "clamped")
  *   layers                         non-empty array, layers[0] = immediate roof
- *   layers[i].thickness_m          > 0 m
+ *   layers[i].thickness_m          0.001–1000 m
  *   layers[i].unitWeight_kNm3      5..60 kN/m³
- *   layers[i].youngModulus_GPa     > 0 GPa
- *   layers[i].ucs_MPa              > 0 MPa
- *   layers[i].tensile              a value_MPa (≥ 0) or at least one usable specimen
+ *   layers[i].youngModulus_GPa     0.001–10 000 GPa
+ *   layers[i].ucs_MPa              0.01–1000 MPa
+ *   layers[i].tensile              a value_MPa (0–100; 0 = none) or at least one usable specimen
  *                                  (valid, thickness ≤ diameter)
  *
  * OPTIONAL (value used when the key is omitted):

@@ -155,14 +155,19 @@ export function reference(project: Project): RefReport {
     };
   });
 
-  // Largest spans: a plain scan from the top (0.25 m steps, 0.02 m below 2 m) and bisection to 0.1 mm.
+  // Largest spans: a plain scan from the top (0.25 m steps, 0.02 m below 2 m, 1 mm below 2 cm) and bisection to 0.1 mm.
   const ratioAt = (mode: 'tension' | 'crushing' | 'snapThrough' | 'deflection', s: number): number => {
     let r = Infinity;
     layers0.forEach((L, i) => {
       if (mode === 'tension') {
         if (L.crossJointed && ends !== 'cantilever') return;
+        // METHODS §11 v2: beyond its joint spacing a layer is cracked (no tension capacity);
+        // up to it, a cross-jointed overhang keeps its uncracked strength min(block, mass).
+        const spacing = L.l.jointing.crossJointSpacing_m;
+        if (spacing !== null && s > spacing) { r = 0; return; }
         const b = beamAt(i, s);
-        const fs = ends === 'cantilever' && L.crossJointed ? 0 : b.max > 0 ? L.design / b.max : Infinity;
+        const strength = L.crossJointed ? Math.min(L.block, L.mass) : L.design;
+        const fs = b.max > 0 ? strength / b.max : Infinity;
         r = Math.min(r, fs / d.fsTarget.tension);
         return;
       }
@@ -180,6 +185,7 @@ export function reference(project: Project): RefReport {
   const largest = (mode: 'tension' | 'crushing' | 'snapThrough' | 'deflection'): number | null => {
     if (!applies(mode)) return null;
     const grid: number[] = [];
+    for (let s = 0.001; s < 0.02; s += 0.001) grid.push(s); // METHODS §11 v2: down to 1 mm
     for (let s = 0.02; s < 2; s += 0.02) grid.push(s);
     for (let s = 2; s < 100; s += 0.25) grid.push(s);
     grid.push(100);
