@@ -6,6 +6,7 @@ import { benchVoussoir } from './voussoir.bench';
 import { benchPlate } from './plate.bench';
 import { benchAnalysis } from './analysis.bench';
 import { benchLab } from './lab.bench';
+import { benchUncertainty } from './uncertainty.bench';
 import type { BenchResult } from './types';
 
 const groups: [string, () => Promise<BenchResult[]>][] = [
@@ -13,6 +14,7 @@ const groups: [string, () => Promise<BenchResult[]>][] = [
   ['plate', benchPlate],
   ['analysis', benchAnalysis],
   ['lab', benchLab],
+  ['uncertainty', benchUncertainty],
 ];
 
 // The browser benchmark (edit → results, bundle size) builds the app and starts chromium.
