@@ -17,6 +17,7 @@
  *     parseQuantity('0.45', 'm')    // 0.45 (a bare number is already in the given unit)
  */
 import { create, createUnitDependencies, unitDependencies, type Unit } from 'mathjs';
+import { normaliseDecimalComma } from './decimal-comma';
 
 const CUSTOM_UNITS: ReadonlyArray<[string, string]> = [
   ['psf', '1 lbf/ft^2'],
@@ -105,7 +106,8 @@ function toUnit(value: number, unitText: string): Unit | undefined {
 /**
  * Parse `text` (a number, optionally followed by a unit) and return it in `siUnit`
  * (e.g. 'm', 'mm', 'MPa', 'kPa', 'GPa', 'kN/m^3', 'kN'). A bare number is taken as already
- * in `siUnit`. Throws `UnitError` on unparsable text or a wrong dimension.
+ * in `siUnit`. A decimal comma is read as a point ("2,5 m"; see decimal-comma.ts). Throws
+ * `UnitError` on unparsable text or a wrong dimension, `AmbiguousNumberError` on "1,250".
  *     parseQuantity('160 lbf/ft^3', 'kN/m^3') // 25.134
  */
 export function parseQuantity(text: string, siUnit: string): number {
@@ -114,7 +116,7 @@ export function parseQuantity(text: string, siUnit: string): number {
   const dim = dimensionOf(siUnit);
   const expected = `expected ${dim.name} (e.g. ${dim.example}), got ${JSON.stringify(String(text))}`;
   if (typeof text !== 'string') throw new UnitError(expected);
-  const m = QUANTITY.exec(text);
+  const m = QUANTITY.exec(normaliseDecimalComma(text)); // "2,5 m" → "2.5 m"; "1,250" throws (ambiguous)
   if (!m) throw new UnitError(expected);
   const value = Number(m[1]);
   if (!Number.isFinite(value)) throw new UnitError(expected);

@@ -299,21 +299,44 @@ class Reader {
   }
 }
 
-/** Refuse `__proto__`, `constructor`, `prototype` as own keys anywhere in the input. */
-function scanForbidden(value: unknown, path: string, reader: Reader, seen: Set<object>): void {
-  if (typeof value !== 'object' || value === null || seen.has(value)) return;
-  seen.add(value);
-  const isArray = Array.isArray(value);
-  // own names only, so sparse arrays cost what they hold
-  for (const key of Object.getOwnPropertyNames(value)) {
-    if (isArray && key === 'length') continue;
-    const p = isArray && /^\d+$/.test(key) ? `${path}[${key}]` : child(path, key);
-    if (FORBIDDEN_KEYS.has(key)) {
-      reader.error(p, `forbidden key ${JSON.stringify(key)}`, 'FORBIDDEN_KEY');
-      continue;
+/**
+ * Refuse `__proto__`, `constructor`, `prototype` as own keys anywhere in the input. Iterative
+ * (an explicit stack), so a 100,000-deep object is scanned like a flat one instead of
+ * overflowing the call stack; a path is built only for a key that is refused.
+ */
+function scanForbidden(input: unknown, reader: Reader): void {
+  interface Node { value: object; parent: Node | null; step: string }
+  const pathOf = (node: Node | null, last: string): string => {
+    const steps = [last];
+    for (let n = node; n !== null && n.parent !== null; n = n.parent) steps.push(n.step);
+    let path = '';
+    for (let k = steps.length - 1; k >= 0; k--) path = steps[k].startsWith('[') ? `${path}${steps[k]}` : child(path, steps[k]);
+    return path;
+  };
+  if (typeof input !== 'object' || input === null) return;
+  const seen = new Set<object>([input]);
+  const stack: Node[] = [{ value: input, parent: null, step: '' }];
+  while (stack.length > 0) {
+    const node = stack.pop()!;
+    const isArray = Array.isArray(node.value);
+    const children: Node[] = [];
+    // own names only, so sparse arrays cost what they hold
+    for (const key of Object.getOwnPropertyNames(node.value)) {
+      if (isArray && key === 'length') continue;
+      const step = isArray && /^\d+$/.test(key) ? `[${key}]` : key;
+      if (FORBIDDEN_KEYS.has(key)) {
+        reader.error(pathOf(node, step), `forbidden key ${JSON.stringify(key)}`, 'FORBIDDEN_KEY');
+        continue;
+      }
+      const descriptor = Object.getOwnPropertyDescriptor(node.value, key);
+      const v: unknown = descriptor && 'value' in descriptor ? descriptor.value : undefined;
+      if (typeof v === 'object' && v !== null && !seen.has(v)) {
+        seen.add(v);
+        children.push({ value: v, parent: node, step });
+      }
     }
-    const descriptor = Object.getOwnPropertyDescriptor(value, key);
-    if (descriptor && 'value' in descriptor) scanForbidden(descriptor.value, p, reader, seen);
+    // reversed, so keys are visited (and errors listed) in document order
+    for (let k = children.length - 1; k >= 0; k--) stack.push(children[k]);
   }
 }
 
@@ -377,7 +400,7 @@ export function validateProject(input: unknown): ValidationResult {
     r.error('', `a project must be a JSON object, got ${describeValue(input)}`, 'TYPE');
     return { ok: false, errors: r.errors, warnings: r.warnings };
   }
-  scanForbidden(input, '', r, new Set());
+  scanForbidden(input, r);
   r.unknownKeys(input, SCHEMA_KEYS.project, '');
 
   const schema = own(input, 'schema');

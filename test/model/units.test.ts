@@ -96,7 +96,7 @@ describe('parseQuantity — conversions checked against METHODS §13', () => {
 
   it.each([
     '', '   ', 'abc', 'm', '3 MPa 5', '1+2 m', '2*3 m', '3 m + 4 m', 'sqrt(4) m', 'eval("1") m',
-    '1,5 m', '3 furlongs', '1e400 m', '6 m;', 'Infinity m', 'NaN',
+    '1,5,0 m', '3 furlongs', '1e400 m', '6 m;', 'Infinity m', 'NaN',
   ])('unparsable or unsafe text %j throws UnitError (text is never evaluated)', (text) => {
     expect(() => parseQuantity(text, 'm')).toThrow(UnitError);
   });

@@ -15,6 +15,7 @@ import type { AppState, ProjectStore } from '../state/project-store';
 import { tokens } from '../styles/tokens';
 import { sheet } from '../styles/sheet';
 import { textField } from '../inputs/field-templates';
+import { downloadText } from './download';
 import '../inputs/opening-loads-form';
 import '../inputs/strata-editor';
 import '../inputs/lab-tests-panel';
@@ -138,6 +139,18 @@ export class LaminaApp extends LitElement {
         border: 2px solid var(--lam-bad);
         padding: 0.3rem 0.8rem;
         margin: 0.4rem 0;
+      }
+      .autosave-alert {
+        border: 2px solid var(--lam-bad);
+        border-left-width: 8px;
+        padding: 0.3rem 0.8rem;
+        margin: 0.4rem 0;
+      }
+      .autosave-alert p {
+        margin: 0.3rem 0;
+      }
+      .autosave-alert button {
+        margin: 0 0.5rem 0.3rem 0;
       }
       .file-errors h2 {
         font-size: 1em;
@@ -336,6 +349,21 @@ export class LaminaApp extends LitElement {
     heading?.focus({ preventScroll: true });
   }
 
+  /** A failed or paused autosave, said plainly, with a way to keep the saved text as a file. */
+  private renderAutosave(s: AppState) {
+    const a = s.autosave;
+    if (a.status === 'saved') return nothing;
+    return html`<div class="autosave-alert" role="alert">
+      <p>${a.message}</p>
+      ${a.held !== null
+        ? html`<button type="button" id="autosave-download" @click=${() => downloadText('lamina-autosave-kept.json', a.held ?? '')}>
+              Download the autosaved text (${a.held.length.toLocaleString('en-US')} characters)
+            </button>
+            <button type="button" id="autosave-resume" @click=${() => this.store.resumeAutosave()}>I have kept it — resume autosave (it will be overwritten)</button>`
+        : nothing}
+    </div>`;
+  }
+
   private heading(n: number) {
     const s = SECTIONS[n - 1];
     return html`<h2 id="${s.id}-h" tabindex="-1"><span class="num-badge">${n}</span> ${s.title}</h2>`;
@@ -371,6 +399,7 @@ export class LaminaApp extends LitElement {
         </nav>
       </div>
       <div class="messages">
+        ${this.renderAutosave(s)}
         ${fileErrors.length
           ? html`<div class="file-errors" role="alert" tabindex="-1">
               <h2>Not accepted — ${fileErrors.length} field error${fileErrors.length === 1 ? '' : 's'}</h2>

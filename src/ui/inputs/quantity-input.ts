@@ -15,6 +15,7 @@ import { tokens } from '../styles/tokens';
 import { sheet } from '../styles/sheet';
 import { fireEdit } from './events';
 import { formatInputNumber } from './format-number';
+import { normaliseDecimalComma } from '../../model/decimal-comma';
 
 const PLAIN_NUMBER = /^\s*[-+]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][-+]?\d+)?\s*$/;
 
@@ -120,10 +121,16 @@ export class QuantityInput extends LitElement {
         throw new RangeError(`${this.label}: ${err instanceof Error ? err.message : String(err)}`);
       }
     }
-    if (!PLAIN_NUMBER.test(text)) {
+    let plain: string;
+    try {
+      plain = normaliseDecimalComma(text); // "0,25" → "0.25"
+    } catch (err) {
+      throw new RangeError(`${this.label}: ${err instanceof Error ? err.message : String(err)}`);
+    }
+    if (!PLAIN_NUMBER.test(plain)) {
       throw new RangeError(`${this.label}: expected a number${this.unitText ? ` (${this.unitText})` : ''}, got ${JSON.stringify(text)}`);
     }
-    return Number(text);
+    return Number(plain);
   }
 
   protected override willUpdate(changed: PropertyValues<this>): void {

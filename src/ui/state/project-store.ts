@@ -9,9 +9,21 @@ import type { Project } from '../../model/types';
 import type { Analysis, DesignChart, SpanCurve } from '../../analysis/types';
 import { setAtPath } from '../../model/project-path';
 import { UndoHistory } from './undo-history';
-import { writeAutosave, type KeyValueStorage } from './autosave';
+import { saveAutosave, type KeyValueStorage } from './autosave';
 
 export type UnitSystem = 'SI' | 'US';
+
+/**
+ * Autosave as the user must know it: `saved` (the last write succeeded, or there was nothing
+ * to write), `failed` (the browser refused the last write; the message says why and what to
+ * do), `paused` (an autosave that could not be backed up is kept untouched: `held` is its
+ * text, offered for download; nothing is written until `resumeAutosave()`).
+ */
+export interface AutosaveState {
+  status: 'saved' | 'failed' | 'paused';
+  message: string | null;
+  held: string | null;
+}
 
 export interface FieldError {
   path: string;
@@ -38,6 +50,7 @@ export interface AppState {
   inputWarnings: FieldError[];
   /** A one-line message for the user (file opened, link copied, autosave ignored …). */
   notice: string | null;
+  autosave: AutosaveState;
   /** Milliseconds spent in each step of the last analysis (for the benchmark). */
   timings: { analyse: number; curve: number; chart: number; minThickness: number };
 }
@@ -103,6 +116,7 @@ export class ProjectStore {
       pending: true,
       inputWarnings: checked.warnings.map(plain),
       notice: null,
+      autosave: { status: 'saved', message: null, held: null },
       timings: { analyse: 0, curve: 0, chart: 0, minThickness: 0 },
     };
     this.runAnalysis();
@@ -167,7 +181,7 @@ export class ProjectStore {
       pending: true,
       notice: source ? `${/^(File|Demo|Project link)\b/.test(source) ? 'Loaded' : 'Applied'}: ${source}.` : this.state.notice,
     });
-    writeAutosave(this.deps.storage ?? null, checked.project);
+    this.autosave(checked.project);
     this.schedule();
     return true;
   }
@@ -185,9 +199,38 @@ export class ProjectStore {
   private restore(project: Project): boolean {
     this.deps.mark?.('lamina:edit');
     this.set({ project, fieldErrors: [], fieldErrorsFrom: null, pending: true });
-    writeAutosave(this.deps.storage ?? null, project);
+    this.autosave(project);
     this.schedule();
     return true;
+  }
+
+  /** Write the project to the autosave unless paused; a refusal is shown, never swallowed. */
+  private autosave(project: Project): void {
+    const storage = this.deps.storage ?? null;
+    if (!storage || this.state.autosave.status === 'paused') return;
+    const r = saveAutosave(storage, project);
+    if (r.ok) {
+      if (this.state.autosave.status !== 'saved') this.set({ autosave: { status: 'saved', message: null, held: null } });
+      return;
+    }
+    this.set({
+      autosave: {
+        status: 'failed',
+        message: `Autosave failed: ${r.reason}. Your latest changes are not kept in this browser — use Save to keep them as a file.`,
+        held: null,
+      },
+    });
+  }
+
+  /** Keep an autosave that could not be backed up: pause autosave and hold its text for download. */
+  holdAutosave(text: string, message: string): void {
+    this.set({ autosave: { status: 'paused', message, held: text } });
+  }
+
+  /** The user kept (or gave up) the held autosave: autosave the current project again. */
+  resumeAutosave(): void {
+    this.set({ autosave: { status: 'saved', message: null, held: null } });
+    this.autosave(this.state.project);
   }
 
   setUnits(units: UnitSystem): void {
