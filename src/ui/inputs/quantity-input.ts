@@ -99,12 +99,16 @@ export class QuantityInput extends LitElement {
     `,
   ];
 
-  /** The text the field should show for `value` in the current unit system. */
+  /**
+   * The text the field should show for `value` in the current unit system, by the precision
+   * rule: as stored in the file unit (SI), to 4 significant figures when converted (US).
+   */
   private displayText(): string {
     if (this.value === null || this.value === undefined) return '';
     if (!Number.isFinite(this.value)) return '';
+    const converted = this.quantity !== '' && this.units !== 'SI';
     const shown = this.quantity ? toDisplay(this.value, this.quantity, this.units) : this.value;
-    return formatInputNumber(shown);
+    return formatInputNumber(shown, converted);
   }
 
   /** Parse the field text to a file-unit value; throws with a message naming what was expected. */
@@ -166,8 +170,9 @@ export class QuantityInput extends LitElement {
     if (!sameValue(v, this.value) || this.error) fireEdit(this, this.path, v);
   }
 
+  /** A plain number stays as typed ("2.50"); a number typed with a unit ("20 ft") shows converted. */
   private onBlur(): void {
-    if (!this.localError && !this.error) this.text = this.displayText();
+    if (!this.localError && !this.error && !PLAIN_NUMBER.test(this.text)) this.text = this.displayText();
   }
 
   override render() {

@@ -110,8 +110,8 @@ export class SpanFinderView extends LitElement {
                 ${v === null ? WHY_NULL[k] : v >= current ? 'meets the target at the current span' : 'below the current span: this mode fails now'}
                 ${jointed && k === 'tension' ? html` — not counted (design basis "jointed")` : nothing}
                 ${k === 'sliding' && slidingShort
-                  ? html`<br /><strong>Sliding falls short at the current ${spanWord}</strong> (least FS ${numberText(leastSliding, 3)} against
-                      ${numberText(p.design.fsTarget.sliding, 3)}); a shorter ${spanWord} makes it worse, so it must be resolved on its own.`
+                  ? html`<br /><strong>Sliding falls short at the current ${spanWord}</strong> (least FS ${numberText(leastSliding)} against
+                      ${numberText(p.design.fsTarget.sliding)}); a shorter ${spanWord} makes it worse, so it must be resolved on its own.`
                   : nothing}
               </td>
             </tr>`;
