@@ -15,7 +15,7 @@
  */
 import type { Project } from '../../model/types';
 import type { Analysis, DesignChart, SpanCurve } from '../../analysis/types';
-import { setAtPath } from './project-path';
+import { setAtPath } from '../../model/project-path';
 import { UndoHistory } from './undo-history';
 import { writeAutosave, type KeyValueStorage } from './autosave';
 
