@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { NEW_PROJECT_DESCRIPTION, STARTING_VALUES, isNewProject, newProject, pendingDefaults } from '../../src/model/new-project';
 import { DEFAULT_FS_TARGET, DEFAULT_DEFLECTION_LIMIT_RATIO } from '../../src/model/defaults';
 import { validateProject } from '../../src/model/validate';
-import { setAtPath } from '../../src/ui/state/project-path';
+import { setAtPath } from '../../src/model/project-path';
 
 describe('newProject', () => {
   it('is a valid one-layer project carrying the new-project description', () => {
