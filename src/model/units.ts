@@ -18,6 +18,7 @@
  */
 import { create, createUnitDependencies, unitDependencies, type Unit } from 'mathjs';
 import { normaliseDecimalComma } from './decimal-comma';
+import { MISSING, PRECISION, numberText } from './number-format';
 
 const CUSTOM_UNITS: ReadonlyArray<[string, string]> = [
   ['psf', '1 lbf/ft^2'],
@@ -219,17 +220,16 @@ export function unitLabel(quantity: Quantity, system: UnitSystem): string {
 }
 
 /**
- * Format a value given in the file unit as display text with its unit, to `digits`
- * significant digits (default 4): formatQuantity(6, 'length', 'US') // "19.69 ft".
- * `null` formats as "—".
+ * Format a value given in the file unit as display text with its unit, by the precision rule
+ * of `number-format.ts` (a result: 3 significant figures unless `digits` says otherwise):
+ * formatQuantity(6, 'length', 'US') // "19.7 ft". `null` formats as "—".
  */
-export function formatQuantity(value: number | null, quantity: Quantity, system: UnitSystem, digits = 4): string {
-  if (value === null) return '—';
+export function formatQuantity(value: number | null, quantity: Quantity, system: UnitSystem, digits: number = PRECISION.result): string {
+  if (value === null) return MISSING;
   if (!(Number.isInteger(digits) && digits >= 1 && digits <= 15)) {
     throw new RangeError(`formatQuantity: digits must be an integer from 1 to 15, got ${digits}`);
   }
-  const shown = Number(toDisplay(value, quantity, system).toPrecision(digits));
-  return `${shown === 0 ? 0 : shown} ${unitLabel(quantity, system)}`;
+  return `${numberText(toDisplay(value, quantity, system), digits)} ${unitLabel(quantity, system)}`;
 }
 
 /** Parse text typed into a field showing `quantity` in `system`; returns the file unit value. */

@@ -23,6 +23,7 @@
  *
  *     validateProject(JSON.parse(text)) // { ok: true, project, warnings } | { ok: false, errors, warnings }
  */
+import { numberText } from './number-format';
 import {
   DEFAULT_DEFLECTION_LIMIT_RATIO,
   DEFAULT_DISTURBANCE,
@@ -559,7 +560,7 @@ function readTensile(r: Reader, layer: Raw, layerPath: string, ucs: number | und
     if (value > 50) r.plausible(child(path, 'value_MPa'), value, ' MPa', null, 50);
     else if (ucs !== undefined && value > ucs / 3) {
       r.warn(child(path, 'value_MPa'),
-        `${value} MPa is implausibly high against ucs_MPa ${ucs} (above ucs/3 = ${+(ucs / 3).toPrecision(4)} MPa); check the value and its unit`,
+        `${value} MPa is implausibly high against ucs_MPa ${ucs} (above ucs/3 = ${numberText(ucs / 3)} MPa); check the value and its unit`,
         'IMPLAUSIBLE');
     }
   }
@@ -597,7 +598,7 @@ function readSpecimen(r: Reader, raw: unknown, path: string, k: number): Specime
     const sigma = (2000 * load) / (Math.PI * diameter * thickness);
     if (sigma > 50) {
       r.warn(child(path, 'peakLoad_kN'),
-        `gives a Brazilian strength of ${+sigma.toPrecision(4)} MPa, implausibly high (above 50 MPa); check the load is in kN and the sizes in mm`,
+        `gives a Brazilian strength of ${numberText(sigma)} MPa, implausibly high (above 50 MPa); check the load is in kN and the sizes in mm`,
         'IMPLAUSIBLE');
     }
   }

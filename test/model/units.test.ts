@@ -170,9 +170,10 @@ describe('display unit systems', () => {
     expect(unitLabel('length', 'SI')).toBe('m');
   });
 
-  it('formatQuantity(6, "length", "US") is "19.69 ft" — 6/0.3048 = 19.685 (METHODS §13)', () => {
-    expect(formatQuantity(6, 'length', 'US')).toBe('19.69 ft');
-    expect(formatQuantity(25, 'unitWeight', 'US')).toBe('159.1 lbf/ft³'); // 25/0.157087 = 159.15
+  it('formatQuantity(6, "length", "US") is "19.7 ft" — 6/0.3048 = 19.685, a result to 3 significant figures (METHODS §13)', () => {
+    expect(formatQuantity(6, 'length', 'US')).toBe('19.7 ft');
+    expect(formatQuantity(6, 'length', 'US', 4)).toBe('19.69 ft');
+    expect(formatQuantity(25, 'unitWeight', 'US')).toBe('159 lbf/ft³'); // 25/0.157087 = 159.15
     expect(formatQuantity(3, 'stress', 'US', 3)).toBe('435 psi'); // 3 × 145.04 = 435.1
     expect(formatQuantity(0.45, 'length', 'SI')).toBe('0.45 m');
     expect(formatQuantity(null, 'length', 'SI')).toBe('—');

@@ -279,7 +279,7 @@ export class LabTestsPanel extends LitElement {
   }
 
   private stress(v: number | null | undefined): string {
-    return v === null || v === undefined || !Number.isFinite(v) ? '—' : formatQuantity(v, 'stress', this.units, 3);
+    return v === null || v === undefined || !Number.isFinite(v) ? '—' : formatQuantity(v, 'stress', this.units);
   }
 
   private renderTable(i: number) {
@@ -324,7 +324,7 @@ export class LabTestsPanel extends LitElement {
                     <td><quantity-input compact label="Peak load of ${s.id}" path="${path}.peakLoad_kN" .value=${s.peakLoad_kN} quantity="force" units=${this.units} .error=${errFor(errs, `${path}.peakLoad_kN`)}></quantity-input></td>
                     <td>${checkboxField(this, { label: `Specimen ${s.id} broke along a central diametral fracture`, path: `${path}.valid`, value: s.valid, compact: true })}</td>
                     <td class="num">${d ? tracedValue(`detail.layers[${i}].lab.specimens[${k}].brazilian_MPa`, this.stress(d.brazilian_MPa), d.brazilian_MPa) : '—'}</td>
-                    <td class="num">${ld === null ? '—' : numberText(ld, 2)}</td>
+                    <td class="num">${ld === null ? '—' : numberText(ld)}</td>
                     <td>${d
                       ? d.accepted
                         ? html`<span class="status-used">used ✓</span>`
@@ -349,7 +349,7 @@ export class LabTestsPanel extends LitElement {
     const rule = lab.rule === 'lower5' ? 'lower 5% fractile m(1 − kn·V), EN 1990 Annex D' : 'mean of the accepted tests';
     const rep = this.analysis?.report.layers[i]?.strength;
     const d = `detail.layers[${i}].lab`;
-    const methodText = lab.method === 'brazilian' ? `Brazilian; direct = ${numberText(lab.directFactor, 2)} × Brazilian (${layer.rockClass})` : 'direct pull (no factor)';
+    const methodText = lab.method === 'brazilian' ? `Brazilian; direct = ${numberText(lab.directFactor)} × Brazilian (${layer.rockClass})` : 'direct pull (no factor)';
     return html`<table class="stats" aria-label="Test statistics of ${layer.name}">
       <tbody>
         <tr><th scope="row">Source</th><td>${lab.source === 'specimens' ? `${lab.n} accepted specimen${lab.n === 1 ? '' : 's'}` : 'value given (no specimens)'}</td></tr>
@@ -361,8 +361,8 @@ export class LabTestsPanel extends LitElement {
         </tr>
         <tr><th scope="row">Mean, direct</th><td class="num">${lab.mean_MPa === null ? '—' : tracedValue(`${d}.mean_MPa`, this.stress(lab.mean_MPa), lab.mean_MPa)}</td></tr>
         <tr><th scope="row">Standard deviation</th><td class="num">${lab.sd_MPa === null ? '—' : tracedValue(`${d}.sd_MPa`, this.stress(lab.sd_MPa), lab.sd_MPa)}</td></tr>
-        <tr><th scope="row">CoV V</th><td class="num">${lab.cov === null ? '—' : tracedValue(`${d}.cov`, numberText(lab.cov, 3), lab.cov)}</td></tr>
-        <tr><th scope="row">kn</th><td class="num">${lab.kn === null ? html`— <span class="hint">(mean rule)</span>` : numberText(lab.kn, 3)}</td></tr>
+        <tr><th scope="row">CoV V</th><td class="num">${lab.cov === null ? '—' : tracedValue(`${d}.cov`, numberText(lab.cov), lab.cov)}</td></tr>
+        <tr><th scope="row">kn</th><td class="num">${lab.kn === null ? html`— <span class="hint">(mean rule)</span>` : numberText(lab.kn)}</td></tr>
         <tr>
           <th scope="row">Characteristic, direct</th>
           <td class="num characteristic">${tracedValue(`layers[${i}].strength.characteristic_MPa`, this.stress(lab.characteristic_MPa), lab.characteristic_MPa)}</td>

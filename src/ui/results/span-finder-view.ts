@@ -19,6 +19,7 @@ import { numberText } from '../../report/number-text';
 import { MODE_NAME } from './check-rows';
 import { adoptableSpan } from './adoptable-span';
 import { displayText, displayValue } from './display-value';
+import { inputSignificant } from '../../model/number-format';
 import { tracedNumber } from './traced-number';
 import { resultsStyles } from './results-styles';
 
@@ -110,8 +111,8 @@ export class SpanFinderView extends LitElement {
                 ${v === null ? WHY_NULL[k] : v >= current ? 'meets the target at the current span' : 'below the current span: this mode fails now'}
                 ${jointed && k === 'tension' ? html` — not counted (design basis "jointed")` : nothing}
                 ${k === 'sliding' && slidingShort
-                  ? html`<br /><strong>Sliding falls short at the current ${spanWord}</strong> (least FS ${numberText(leastSliding, 3)} against
-                      ${numberText(p.design.fsTarget.sliding, 3)}); a shorter ${spanWord} makes it worse, so it must be resolved on its own.`
+                  ? html`<br /><strong>Sliding falls short at the current ${spanWord}</strong> (least FS ${numberText(leastSliding)} against
+                      ${numberText(p.design.fsTarget.sliding)}); a shorter ${spanWord} makes it worse, so it must be resolved on its own.`
                   : nothing}
               </td>
             </tr>`;
@@ -129,7 +130,7 @@ export class SpanFinderView extends LitElement {
           </tr>
           <tr data-mode="current">
             <th scope="row">Current ${spanWord}</th>
-            <td class="num" data-role="current-span" data-si-value=${current}>${displayText(current, 'length', u, 4)}</td>
+            <td class="num" data-role="current-span" data-si-value=${current}>${displayText(current, 'length', u, inputSignificant(u !== 'SI'))}</td>
             <td class="note">
               ${adopt === null ? '' : adopt >= current ? 'within the governing largest span' : html`<strong>exceeds the governing largest span</strong>`}
             </td>
@@ -145,7 +146,7 @@ export class SpanFinderView extends LitElement {
           @click=${() => adopt !== null && this.useSpan(adopt)}
           title="Set the ${spanWord} to the governing largest span (rounded down to 1 mm)"
         >
-          Use this span${adopt !== null ? ` (${displayText(adopt, 'length', u, 4)})` : ''}
+          Use this span${adopt !== null ? ` (${displayText(adopt, 'length', u, inputSignificant(u !== 'SI'))})` : ''}
         </button>
         ${adopt !== null ? html`<span class="note">the governing largest ${spanWord}, rounded down to 1 mm</span>` : nothing}
       </div>

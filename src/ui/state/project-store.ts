@@ -4,6 +4,14 @@
  * edit is validated by the model before it lands (a rejected edit keeps the project and sets
  * `fieldErrors`); accepted edits push undo history, autosave, and schedule the analysis
  * ~150 ms after the last edit (`flush()` runs it at once, for tests and the benchmark).
+ *
+ * Two kinds of refusal are kept apart:
+ * - a refused FIELD (`fieldErrors`): the field still holds the refused text, so its error stays
+ *   beside it until that field is accepted (or the project is replaced, undone or redone), and
+ *   `stale` is true: the results are for the last accepted values;
+ * - a refused PROJECT (a file, a link, a paste or a layer change: `fileErrors`): its errors
+ *   are listed on their own (the app shows them in a dialog) and are never attached to the
+ *   current, valid fields.
  */
 import type { Project } from '../../model/types';
 import type { Analysis, DesignChart, SpanCurve } from '../../analysis/types';
@@ -39,9 +47,12 @@ export interface AppState {
   chartLayer: number;
   minThickness_m: number | null;
   error: string | null;
+  /** Fields holding a refused value (unparsable text or a value the model refused). */
   fieldErrors: FieldError[];
-  /** Where the field errors came from: one field edit, or a whole project (file, preset, paste). */
-  fieldErrorsFrom: 'edit' | 'project' | null;
+  /** True while any field holds a refused value: the results are for the last accepted values. */
+  stale: boolean;
+  /** A refused file, link or paste: where it came from and every error in it. */
+  fileErrors: { source: string; errors: FieldError[] } | null;
   canUndo: boolean;
   canRedo: boolean;
   /** True between an accepted edit and the analysis that follows it. */
@@ -90,6 +101,8 @@ export class ProjectStore {
   private readonly history = new UndoHistory<Project>(100, 1000);
   private readonly listeners = new Set<Listener>();
   private timer: ReturnType<typeof setTimeout> | null = null;
+  /** Refused fields by the path that was edited (a refusal may name other paths too). */
+  private refused = new Map<string, FieldError[]>();
   /** True once the user picked a layer for the chart; until then it follows the governing layer. */
   private chartLayerChosen = false;
   readonly debounceMs: number;
@@ -110,7 +123,8 @@ export class ProjectStore {
       minThickness_m: null,
       error: null,
       fieldErrors: [],
-      fieldErrorsFrom: null,
+      stale: false,
+      fileErrors: null,
       canUndo: false,
       canRedo: false,
       pending: true,
@@ -138,10 +152,32 @@ export class ProjectStore {
     try {
       candidate = setAtPath(this.state.project, path, value);
     } catch (err) {
-      this.set({ fieldErrors: [{ path, message: errorText(err) }], fieldErrorsFrom: 'edit' });
+      this.refuseField(path, [{ path, message: errorText(err) }]);
       return false;
     }
     return this.accept(candidate, path);
+  }
+
+  /**
+   * A field holds text that cannot be read (`message`), or no longer does (`null`). The project
+   * is unchanged either way; the field is listed in `fieldErrors` and the results marked stale.
+   */
+  markRefused(path: string, message: string | null): void {
+    if (message === null) {
+      if (this.refused.delete(path)) this.set({});
+      return;
+    }
+    this.refuseField(path, [{ path, message }]);
+  }
+
+  private refuseField(path: string, errors: FieldError[]): void {
+    this.refused.set(path, errors.map(plain));
+    this.set({});
+  }
+
+  private clearRefused(path: string | null): void {
+    if (path === null) this.refused.clear();
+    else this.refused.delete(path);
   }
 
   /** Replace the whole project (open file, preset, paste, layer add/remove/reorder). */
@@ -159,25 +195,32 @@ export class ProjectStore {
     }
     if (!checked.ok) {
       const errors = checked.errors.length > 0 ? checked.errors.map(plain) : [{ path: '', message: 'refused' }];
-      this.set({
-        fieldErrors: errors,
-        fieldErrorsFrom: key !== null ? 'edit' : 'project',
-        notice: source ? `${source}: not loaded — ${errors.length} field error${errors.length === 1 ? '' : 's'}; the current project is unchanged.` : this.state.notice,
-      });
+      if (key !== null) {
+        this.refuseField(key, errors);
+      } else {
+        this.set({
+          fileErrors: { source: source ?? 'project', errors },
+          notice: `${source ?? 'The project'}: not loaded — ${errors.length} error${errors.length === 1 ? '' : 's'}; the current project is unchanged.`,
+        });
+      }
       return false;
     }
     if (key !== null && JSON.stringify(checked.project) === JSON.stringify(this.state.project)) {
       // The same value again (e.g. retyped after a refused edit): nothing to undo or re-analyse.
-      if (this.state.fieldErrors.length) this.set({ fieldErrors: [], fieldErrorsFrom: null });
+      if (this.refused.has(key)) {
+        this.clearRefused(key);
+        this.set({});
+      }
       return true;
     }
     this.history.record(this.state.project, key);
     if (source) this.chartLayerChosen = false;
+    // A new whole project resets every field, so no field holds a refused value any more.
+    this.clearRefused(key);
     this.set({
       project: checked.project,
       inputWarnings: checked.warnings.map(plain),
-      fieldErrors: [],
-      fieldErrorsFrom: null,
+      ...(key === null ? { fileErrors: null } : {}),
       pending: true,
       notice: source ? `${/^(File|Demo|Project link)\b/.test(source) ? 'Loaded' : 'Applied'}: ${source}.` : this.state.notice,
     });
@@ -198,7 +241,8 @@ export class ProjectStore {
 
   private restore(project: Project): boolean {
     this.deps.mark?.('lamina:edit');
-    this.set({ project, fieldErrors: [], fieldErrorsFrom: null, pending: true });
+    this.clearRefused(null);
+    this.set({ project, pending: true });
     this.autosave(project);
     this.schedule();
     return true;
@@ -251,9 +295,14 @@ export class ProjectStore {
     this.set({ notice });
   }
 
-  /** Show errors that did not come from an edit (a file that failed to parse). */
-  setFieldErrors(errors: FieldError[], notice: string | null = null): void {
-    this.set({ fieldErrors: errors.map(plain), fieldErrorsFrom: errors.length ? 'project' : null, notice });
+  /** A file that could not be read or parsed: list its errors on their own (never on the fields). */
+  setFileErrors(source: string, errors: FieldError[], notice: string | null = null): void {
+    this.set({ fileErrors: errors.length ? { source, errors: errors.map(plain) } : null, notice });
+  }
+
+  /** The user closed the list of a refused file's errors. */
+  dismissFileErrors(): void {
+    if (this.state.fileErrors) this.set({ fileErrors: null });
   }
 
   /** Run a pending analysis now (tests, benchmark). */
@@ -324,9 +373,12 @@ export class ProjectStore {
   }
 
   private set(patch: Partial<AppState>): void {
+    const fieldErrors = [...this.refused.values()].flat();
     this.state = {
       ...this.state,
       ...patch,
+      fieldErrors,
+      stale: fieldErrors.length > 0,
       canUndo: this.history.canUndo,
       canRedo: this.history.canRedo,
     };
