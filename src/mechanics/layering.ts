@@ -54,13 +54,24 @@ export interface SharedLoads {
   loads: number[];
   /** Per group: Σγt (self-weight), ΣEt³, and the extra pressure (surcharge − support) applied. */
   groups: { first: number; last: number; weight: number; stiffness: number; extra: number }[];
+  /** Standing support actually applied, Pa: min(support, load on group 0) (METHODS §12). */
+  supportApplied: number;
+  /** Support beyond the load it can relieve, dropped, Pa (≥ 0). */
+  supportExcess: number;
 }
 
-/** Loads per bed after sharing within groups; surcharge on the top group, support on group 0. */
+/**
+ * Loads per bed after sharing within groups; surcharge on the top group, standing support on
+ * group 0. Support can only relieve load that is there (METHODS §12): it is capped at group 0's
+ * weight (plus the surcharge when group 0 is also the top group), so no bed carries a negative
+ * load; the excess is returned in `supportExcess`.
+ * Check: one 0.6 m bed, 25 kN/m³ (15 kPa), 400 kPa support → load 0, excess 385 kPa.
+ */
 export function shareLoads(beds: readonly BedStiffness[], groups: readonly number[], surcharge: number, support: number): SharedLoads {
   if (groups.length !== beds.length) throw new RangeError('groups must give one index per bed');
   const count = beds.length === 0 ? 0 : groups[groups.length - 1] + 1;
   const summary: SharedLoads['groups'] = [];
+  let supportApplied = 0;
   for (let g = 0; g < count; g++) {
     const first = groups.indexOf(g);
     const last = groups.lastIndexOf(g);
@@ -70,12 +81,14 @@ export function shareLoads(beds: readonly BedStiffness[], groups: readonly numbe
       weight += beds[i].unitWeight * beds[i].thickness;
       stiffness += beds[i].modulus * beds[i].thickness ** 3;
     }
-    const extra = (g === count - 1 ? surcharge : 0) - (g === 0 ? support : 0);
+    const top = g === count - 1 ? surcharge : 0;
+    if (g === 0) supportApplied = Math.max(0, Math.min(support, weight + top));
+    const extra = top - (g === 0 ? supportApplied : 0);
     summary.push({ first, last, weight, stiffness, extra });
   }
   const loads = beds.map((b, i) => {
     const g = summary[groups[i]];
-    return (b.modulus * b.thickness ** 3 * (g.weight + g.extra)) / g.stiffness;
+    return Math.max(0, (b.modulus * b.thickness ** 3 * (g.weight + g.extra)) / g.stiffness);
   });
-  return { loads, groups: summary };
+  return { loads, groups: summary, supportApplied, supportExcess: Math.max(0, support - supportApplied) };
 }

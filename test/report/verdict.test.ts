@@ -13,11 +13,11 @@ describe('verdict sentences', () => {
     for (const c of allCases()) {
       const text = verdict(c);
       expect(text).toMatch(/^Governing check: /);
-      expect(text).toMatch(/As an intact beam/);
+      expect(text).toMatch(/As an intact (beam|overhang)/);
       expect(text).toMatch(/As a cracked/);
-      expect(text).toMatch(/Design basis/);
+      expect(text).toMatch(/Design basis|An overhang has no cracked-beam reserve/);
       expect(text).toMatch(/Result: /);
-      expect(text).toMatch(/Largest (span|overhang)/);
+      expect(text).toMatch(/Largest (span|overhang|entry width)/);
     }
   });
   it('the overhang (quarry bench) says a cantilever has no cracked-beam reserve and speaks of the overhang', () => {
@@ -35,7 +35,7 @@ describe('verdict sentences', () => {
   });
   it('the span sentence is in the display unit: ft in US units (1 ft = 0.3048 m, METHODS §13)', () => {
     const c = presetCase('coal-room-shale');
-    expect(verdict(c, 'US')).toMatch(/current span of 19\.69 ft/); // 6 m / 0.3048 = 19.685 ft
+    expect(verdict(c, 'US')).toMatch(/current span of 19\.7 ft/); // 6 m / 0.3048 = 19.685 ft, 3 digits
     expect(verdict(c, 'SI')).toMatch(/current span of 6 m/);
   });
 });

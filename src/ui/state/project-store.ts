@@ -5,6 +5,7 @@
  * `fieldErrors`); accepted edits push undo history, autosave, and schedule the analysis
  * ~150 ms after the last edit (`flush()` runs it at once, for tests and the benchmark).
  */
+import { MIGRATED_CODE } from '../../model/validate';
 import type { Project } from '../../model/types';
 import type { Analysis, DesignChart, SpanCurve } from '../../analysis/types';
 import { setAtPath } from './project-path';
@@ -43,7 +44,7 @@ export interface AppState {
 }
 
 export type ValidationOutcome =
-  | { ok: true; project: Project; warnings: ReadonlyArray<{ path: string; message: string }> }
+  | { ok: true; project: Project; warnings: ReadonlyArray<{ path: string; message: string; code?: string }> }
   | {
       ok: false;
       errors: ReadonlyArray<{ path: string; message: string }>;
@@ -165,7 +166,7 @@ export class ProjectStore {
       fieldErrors: [],
       fieldErrorsFrom: null,
       pending: true,
-      notice: source ? `${/^(File|Demo|Project link)\b/.test(source) ? 'Loaded' : 'Applied'}: ${source}.` : this.state.notice,
+      notice: migrationNotice(checked.warnings) ?? (source ? `${/^(File|Demo|Project link)\b/.test(source) ? 'Loaded' : 'Applied'}: ${source}.` : this.state.notice),
     });
     writeAutosave(this.deps.storage ?? null, checked.project);
     this.schedule();
@@ -291,12 +292,15 @@ export class ProjectStore {
   }
 }
 
+/** The one-time notice of a lamina/1 project migrated on load, if this validation migrated one. */
+function migrationNotice(warnings: ReadonlyArray<{ message: string; code?: string }>): string | null {
+  const w = warnings.find((x) => x.code === MIGRATED_CODE);
+  return w ? w.message : null;
+}
+
 const now = (): number => (typeof performance !== 'undefined' ? performance.now() : Date.now());
 
-/** Index of the governing layer (the report names it), 0 when there is none. */
+/** Index of the governing layer (the report gives it), 0 when there is none. */
 export function governingLayerIndex(analysis: Analysis): number {
-  const g = analysis.report.governing;
-  if (!g) return 0;
-  const i = analysis.report.layers.findIndex((l) => l.name === g.layer);
-  return i >= 0 ? i : 0;
+  return analysis.report.governing?.layerIndex ?? 0;
 }

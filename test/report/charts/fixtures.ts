@@ -25,10 +25,11 @@ function layer(name: string, thickness_m: number, rockClass: Layer['rockClass'],
 
 export function project(name0 = 'Shale'): Project {
   return {
-    schema: 'lamina/1',
+    schema: 'lamina/2',
     title: 'Fixture room',
     opening: { type: 'beam', span_m: 6, length_m: null, ends: 'clamped' },
-    loads: { surcharge_kPa: 10, support_kPa: 0, horizontalStress_MPa: 0 },
+    loads: { surcharge_kPa: 10, horizontalStress_MPa: 0 },
+    support: { standing_kPa: 0 },
     layers: [layer(name0, 0.45, 'sedimentary', 8), layer('Sandstone', 1.8, 'igneous', 20), layer('Mudstone', 0.9, 'metamorphic', 6)],
     design: { fsTarget: { tension: 4, crushing: 2, sliding: 1.5 }, deflectionLimitRatio: 0.1, characteristic: 'mean', basis: 'intact', planeStrainModulus: false },
   };
@@ -51,7 +52,7 @@ export const MAX_SPAN: MaxSpanReport = { tension: 1.908, crushing: 15.35, slidin
 
 export function analysis(p: Project = project()): Analysis {
   const report: Report = {
-    schema: 'lamina-report/1',
+    schema: 'lamina-report/2',
     layers: [layerReport(p.layers[0].name, 0.45, 0), layerReport('Sandstone', 1.8, 1), layerReport('Mudstone', 0.9, 1)],
     governing: { layer: p.layers[0].name, mode: 'tension', fs: 0.404 },
     maxSpan_m: MAX_SPAN,
