@@ -15,7 +15,7 @@ function files(dir: string): string[] {
   });
 }
 
-const RANK: Record<string, number> = { model: 0, strength: 1, mechanics: 1, analysis: 2, report: 3, cli: 4, ui: 4 };
+const RANK: Record<string, number> = { model: 0, strength: 1, mechanics: 1, analysis: 2, uncertainty: 3, report: 4, cli: 5, ui: 5 };
 const layerOf = (path: string) => relative(src, path).split(/[\\/]/)[0];
 
 function imports(text: string): string[] {
@@ -46,6 +46,15 @@ describe('architecture', () => {
       const text = readFileSync(file, 'utf8').replace(/\/\*[\s\S]*?\*\/|\/\/.*$/gm, '');
       for (const spec of imports(text)) expect(spec.startsWith('.'), `${relative(root, file)} imports ${spec}`).toBe(true);
       expect(/\b(document|window|localStorage|fetch|process)\b/.test(text), `${relative(root, file)} touches the DOM or I/O`).toBe(false);
+    }
+  });
+  it('src/uncertainty touches no DOM, storage, network or process (it runs in node and a Web Worker)', () => {
+    const found = all.filter((f) => layerOf(f) === 'uncertainty');
+    expect(found.length).toBeGreaterThan(5);
+    for (const file of found) {
+      const text = readFileSync(file, 'utf8').replace(/\/\*[\s\S]*?\*\/|\/\/.*$/gm, '');
+      expect(/\b(document|window|localStorage|fetch|process)\b/.test(text), `${relative(root, file)} touches the DOM or I/O`).toBe(false);
+      expect(imports(text).some((s) => s === 'mathjs' || s === 'lit'), `${relative(root, file)} imports mathjs or lit`).toBe(false);
     }
   });
   it('only src/model/units.ts and the report use mathjs; nothing else uses it for units', () => {

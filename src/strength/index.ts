@@ -14,3 +14,5 @@ export { sizeEffectFactor, effectiveBlockSize, SIZE_EFFECT_MAX_MM, DEFAULT_LAB_D
 export type { BlockSize, BlockSizeInput } from './size-effect';
 export { strengthChain } from './chain';
 export type { StrengthChain, StrengthChainInput, StrengthChainWarning } from './chain';
+export { qValue, unsupportedSpan, boltLengthRule, Q_RANGES, Q_MIN_RQD } from './q-system';
+export type { QInput } from './q-system';

@@ -5,12 +5,14 @@
 import { benchVoussoir } from './voussoir.bench';
 import { benchPlate } from './plate.bench';
 import { benchAnalysis } from './analysis.bench';
+import { benchUncertainty } from './uncertainty.bench';
 import type { BenchResult } from './types';
 
 const groups: [string, () => Promise<BenchResult[]>][] = [
   ['voussoir', benchVoussoir],
   ['plate', benchPlate],
   ['analysis', benchAnalysis],
+  ['uncertainty', benchUncertainty],
 ];
 
 // The browser benchmark (edit → results, bundle size) builds the app and starts chromium.

@@ -8,7 +8,7 @@
 import { MIGRATED_CODE } from '../../model/validate';
 import type { Project } from '../../model/types';
 import type { Analysis, DesignChart, SpanCurve } from '../../analysis/types';
-import { setAtPath } from './project-path';
+import { setAtPath } from '../../model/project-path';
 import { UndoHistory } from './undo-history';
 import { writeAutosave, type KeyValueStorage } from './autosave';
 

@@ -34,6 +34,13 @@ export function parsePath(path: string): PathKey[] {
 
 const FORBIDDEN = new Set(['__proto__', 'prototype', 'constructor']);
 
+/** Throws when a parsed path names `__proto__`, `prototype` or `constructor`. */
+export function refuseForbiddenKeys(keys: readonly PathKey[], path: string): void {
+  for (const k of keys) {
+    if (typeof k === 'string' && FORBIDDEN.has(k)) throw new RangeError(`refused field path "${path}"`);
+  }
+}
+
 /** Reads the value at `path`, or `undefined` when any step is missing. */
 export function getAtPath(root: unknown, path: string): unknown {
   let node: unknown = root;
@@ -50,9 +57,7 @@ export function getAtPath(root: unknown, path: string): unknown {
  */
 export function setAtPath<T>(root: T, path: string, value: unknown): T {
   const keys = parsePath(path);
-  for (const k of keys) {
-    if (typeof k === 'string' && FORBIDDEN.has(k)) throw new RangeError(`refused field path "${path}"`);
-  }
+  refuseForbiddenKeys(keys, path);
   const copy = structuredClone(root) as unknown;
   let node = copy as Record<PathKey, unknown>;
   for (let i = 0; i < keys.length - 1; i++) {
@@ -72,4 +77,28 @@ export function setAtPath<T>(root: T, path: string, value: unknown): T {
   }
   node[lastKey] = structuredClone(value);
   return copy as T;
+}
+
+/**
+ * A copy of `root` with the number `value` at the already parsed `keys` (from `parsePath`),
+ * sharing every object that is not on the path: only the objects along the path are copied, so
+ * a change costs a few shallow copies however large the project is (for the many samples of the
+ * uncertainty run). The field must already exist; `root` is never mutated.
+ *     withValueAt({ a: [{ b: 1 }], c: {} }, ['a', 0, 'b'], 2) // { a: [{ b: 2 }], c: <same object> }
+ */
+export function withValueAt<T>(root: T, keys: readonly PathKey[], value: unknown): T {
+  const path = keys.map((k) => (typeof k === 'number' ? `[${k}]` : `.${k}`)).join('').replace(/^\./, '');
+  refuseForbiddenKeys(keys, path);
+  const copyAt = (node: unknown, depth: number): unknown => {
+    if (node === null || typeof node !== 'object') throw new RangeError(`${path}: no field at "${keys.slice(0, depth).join('.')}"`);
+    const key = keys[depth];
+    if (Array.isArray(node) !== (typeof key === 'number') || !Object.prototype.hasOwnProperty.call(node, key)) {
+      throw new RangeError(`${path}: no field at "${keys.slice(0, depth + 1).join('.')}"`);
+    }
+    const copy = (Array.isArray(node) ? [...node] : { ...node }) as Record<PathKey, unknown>;
+    copy[key] = depth === keys.length - 1 ? value : copyAt((node as Record<PathKey, unknown>)[key], depth + 1);
+    return copy;
+  };
+  if (keys.length === 0) throw new RangeError('empty field path');
+  return copyAt(root, 0) as T;
 }

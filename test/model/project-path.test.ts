@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { getAtPath, parsePath, setAtPath } from '../../../src/ui/state/project-path';
+import { getAtPath, parsePath, setAtPath, withValueAt } from '../../src/model/project-path';
 
 describe('project-path', () => {
   it("parsePath('layers[1].tensile.specimens[0].valid') is ['layers', 1, 'tensile', 'specimens', 0, 'valid'] — DESIGN.md path form", () => {
@@ -41,5 +41,16 @@ describe('project-path', () => {
   it('getAtPath of a missing step is undefined', () => {
     expect(getAtPath({ a: null }, 'a.b')).toBeUndefined();
     expect(getAtPath({ a: [1, 2] }, 'a[1]')).toBe(2);
+  });
+  it('withValueAt copies only the objects on the path and refuses missing fields and forbidden keys', () => {
+    const root = { a: [{ b: 1 }, { b: 2 }], c: { d: 3 } };
+    const out = withValueAt(root, ['a', 1, 'b'], 5);
+    expect(out).toEqual({ a: [{ b: 1 }, { b: 5 }], c: { d: 3 } });
+    expect(root.a[1].b).toBe(2);
+    expect(out.c).toBe(root.c);
+    expect(out.a[0]).toBe(root.a[0]);
+    expect(() => withValueAt(root, ['a', 2, 'b'], 1)).toThrow(/a\[2\]\.b: no field/);
+    expect(() => withValueAt(root, ['c', 'x'], 1)).toThrow(/no field/);
+    expect(() => withValueAt(root, ['__proto__', 'x'], 1)).toThrow(/refused field path/);
   });
 });
