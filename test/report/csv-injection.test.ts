@@ -27,15 +27,18 @@ describe('resultsCsv and spanCurveCsv: nothing a spreadsheet would evaluate', ()
   it('a layer named with each payload is written neutralised, and a negative demand stays a plain number', () => {
     const c = hostileCase();
     for (const name of PAYLOADS) {
+      // The CSV renders the check table (report.checks): rename layer 1 there and give its tension row a negative demand.
       const report = {
         ...c.analysis.report,
-        layers: c.analysis.report.layers.map((l, i) => (i === 0 ? { ...l, name, elastic: { ...l.elastic, maxTension_MPa: -1.25 } } : l)),
+        checks: c.analysis.report.checks.map((r) =>
+          r.layerIndex === 0 ? { ...r, layer: name, ...(r.mode === 'tension' ? { demand: -1.25, unit: 'MPa' } : {}) } : r,
+        ),
       };
       const text = resultsCsv({ ...c.analysis, report }, 'SI', c.project);
       const rows = csvParse(text);
       const tension = rows.find((r) => r.layer === '1' && r.mode === 'tension')!;
       expect(tension.layer_name).toBe(`'${name}`);
-      if (!report.layers[0].plate) expect(tension.demand_MPa).toBe('-1.25');
+      expect(tension.demand_MPa).toBe('-1.25');
       // no cell of the file (text or not) begins with a formula character, except numbers
       for (const cells of csvParseRows(text)) {
         for (const cell of cells) if (/^[=+\-@\t\r]/.test(cell)) expect(Number.isFinite(Number(cell)), cell).toBe(true);
