@@ -119,6 +119,36 @@ export interface Design {
   planeStrainModulus: boolean;
 }
 
+/** Sampling of the uncertainty run (METHODS §16). */
+export type SamplingMethodName = 'monteCarlo' | 'latinHypercube';
+export type VariableDistributionName = 'normal' | 'lognormal' | 'uniform' | 'triangular';
+
+/** One uncertain input: a field path and its distribution; the mean defaults to the project's value. */
+export interface UncertainVariable {
+  path: string;
+  distribution: VariableDistributionName;
+  mean?: number;
+  cov?: number;
+  sd?: number;
+  min?: number;
+  max?: number;
+  /** triangular only */
+  mode?: number;
+}
+
+/** The file's `uncertainty` block (DESIGN "Contract changes in v2"). */
+export interface Uncertainty {
+  /** 100 … 1 000 000, default 20 000 */
+  samples: number;
+  /** whole number 0 … 2³¹ − 1, default 1 */
+  seed: number;
+  /** default "latinHypercube" */
+  method: SamplingMethodName;
+  /** null, or a probability in (0, 1): adds a counted `probability` row */
+  acceptablePf: number | null;
+  variables: UncertainVariable[];
+}
+
 export interface Project {
   schema: 'lamina/2';
   title: string;
@@ -129,6 +159,8 @@ export interface Project {
   /** layers[0] is the immediate roof; then upward. */
   layers: Layer[];
   design: Design;
+  /** Optional: null or absent = no uncertainty run. */
+  uncertainty?: Uncertainty | null;
 }
 
 // ---------------------------------------------------------------- report
