@@ -86,7 +86,8 @@ export function moduliFor(layer: LayerSI, chain: StrengthChain, p: ProjectSI): {
 /** β, α for a slab; the aspect ratio is the project's, held fixed when the span varies (METHODS §11). */
 export function plateFor(p: ProjectSI, poisson: number): PlateCoefficients | null {
   if (p.type !== 'slab' || p.length === null) return null;
-  return plateCoefficients({ aspect: p.length / p.span, edges: p.plateEdges, poisson });
+  const aspect = p.length / p.span;
+  return p.plateSource ? p.plateSource(aspect, poisson) : plateCoefficients({ aspect, edges: p.plateEdges, poisson });
 }
 
 export interface EvaluateOptions {
