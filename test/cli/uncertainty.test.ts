@@ -8,16 +8,16 @@ function fakeIo(files: Record<string, string>, errIsTty = false) {
   const out: string[] = [];
   const err: string[] = [];
   const io: Io = {
-    out: (t) => void out.push(t),
-    err: (t) => void err.push(t),
-    readFile: (p) => {
+    out: (t: string) => void out.push(t),
+    err: (t: string) => void err.push(t),
+    readFile: (p: string) => {
       if (p in files) return files[p];
       throw Object.assign(new Error(`ENOENT: ${p}`), { code: 'ENOENT' });
     },
     writeFile: () => {},
     readStdin: () => '',
     errIsTty,
-  } as unknown as Io;
+  };
   return { io, out: () => out.join(''), err: () => err.join('') };
 }
 
