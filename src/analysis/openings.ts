@@ -11,18 +11,16 @@ import type { OpeningInput } from '../model/openings-csv';
 import type { Loads, Mode, Opening, Project, Support } from '../model/types';
 import { parseProject, ProjectError, type FieldIssue } from '../model/validate';
 import { analyse, meetsTargets } from './analyse';
-import { targetFor } from './check-table';
 
 export interface OpeningResult {
   row: number;
   name: string;
   opening: Opening;
   loads: Loads;
-  /** Standing support of this opening (the row's support_kPa column, else the project's). */
   support: Support;
   /** "meets" every target, "below" one, or "n/a" when no check applies (no net load). */
   status: 'meets' | 'below' | 'n/a';
-  governing: { layer: string; mode: Mode; fs: number; target: number } | null;
+  governing: { layerIndex: number; layer: string; mode: Mode; fs: number; target: number } | null;
   /** Largest span meeting every target (m), all else fixed; null where none is found. */
   maxSpan_m: number | null;
   /** Warnings of this opening's analysis and of its opening and loads fields. */
@@ -38,19 +36,19 @@ export function openingProject(strata: Project, input: OpeningInput): Project {
     opening: {
       type: input.type,
       span_m: input.span_m,
-      length_m: input.type === 'slab' ? input.length_m : null,
-      ends: input.ends ?? strata.opening.ends,
-      edges: input.type === 'slab' ? strata.opening.edges : null,
+      length_m: input.type === 'slab' || input.type === 'intersection' ? input.length_m : null,
+      ends: input.ends ?? (input.type === 'intersection' ? 'simple' : strata.opening.ends),
+      edges: null,
     },
     loads: {
       surcharge_kPa: input.surcharge_kPa ?? strata.loads.surcharge_kPa,
       horizontalStress_MPa: input.horizontalStress_MPa ?? strata.loads.horizontalStress_MPa,
     },
-    support: { ...strata.support, standing_kPa: input.support_kPa ?? strata.support.standing_kPa },
+    support: { standing_kPa: input.support_kPa ?? strata.support.standing_kPa },
   };
 }
 
-const ROW_FIELDS = /^(opening|loads|support\.standing_kPa)(\.|$)/;
+const ROW_FIELDS = /^(opening|loads|support)(\.|$)/;
 
 /** Validate and analyse one opening. Refusals keep the validator's field paths. */
 export function checkOpening(strata: Project, input: OpeningInput): OpeningCheck {
@@ -65,7 +63,7 @@ export function checkOpening(strata: Project, input: OpeningInput): OpeningCheck
   const analysis = analyse(project);
   const report = analysis.report;
   const g = report.governing;
-  const governing = g === null ? null : { layer: g.layer, mode: g.mode, fs: g.fs, target: targetFor(g.mode, project.design) };
+  const governing = g === null ? null : { layerIndex: g.layerIndex, layer: g.layer, mode: g.mode, fs: g.fs, target: g.target };
   return {
     ok: true,
     result: {
