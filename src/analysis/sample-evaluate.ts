@@ -26,7 +26,7 @@
 import type { Mode, Project } from '../model/types';
 import { MODES } from './check-labels';
 import { checkTable } from './check-table';
-import { evaluate } from './evaluate';
+import { evaluate, STRIP_ASPECT } from './evaluate';
 import { projectToSI, type LayerSI, type ProjectSI } from './inputs';
 import { platesForSampling, type SamplingPlates } from './sample-plates';
 
@@ -110,7 +110,8 @@ function samplingPlates(base: ProjectSI, fields: readonly SampledField[]): Sampl
   const span = fields.find((f) => f.path === 'opening.span_m' && varies(f));
   const poissons = fields.filter((f) => /^layers\[\d+\]\.poisson$/.test(f.path) && varies(f));
   if (!span && poissons.length === 0) return null;
-  const aspect: [number, number] = span ? [base.length / span.upper, base.length / span.lower] : [base.length / base.span, base.length / base.span];
+  const cap = (a: number) => Math.min(a, STRIP_ASPECT); // as plateAspect: a longer slab is its strip
+  const aspect: [number, number] = span ? [cap(base.length / span.upper), cap(base.length / span.lower)] : [cap(base.length / base.span), cap(base.length / base.span)];
   let lo = Math.min(...base.layers.map((l) => l.poisson), ...poissons.map((f) => f.lower));
   let hi = Math.max(...base.layers.map((l) => l.poisson), ...poissons.map((f) => f.upper));
   if (!(hi > lo)) hi = lo;
