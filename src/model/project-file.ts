@@ -191,6 +191,13 @@ function orderedProject(p: Project): Record<string, unknown> {
     crushingStrength: p.design.crushingStrength,
     planeStrainModulus: p.design.planeStrainModulus,
   };
+  if (p.uncertainty !== undefined) {
+    const u = p.uncertainty;
+    out.uncertainty = u === null ? null : {
+      samples: u.samples, seed: u.seed, method: u.method, acceptablePf: u.acceptablePf,
+      variables: u.variables.map((v) => ({ ...v })),
+    };
+  }
   return out;
 }
 

@@ -39,6 +39,7 @@ import {
   defaultSpecimenId,
 } from './defaults';
 import { migrateV1 } from './migrate';
+import { ELIGIBLE_FIELDS, eligibleField } from './uncertain-fields';
 import type {
   CharacteristicRule,
   CrushingStrength,
@@ -53,6 +54,10 @@ import type {
   RockClass,
   Specimen,
   TensileMethod,
+  SamplingMethodName,
+  Uncertainty,
+  UncertainVariable,
+  VariableDistributionName,
 } from './types';
 
 export interface FieldIssue {
@@ -89,7 +94,7 @@ export function parseProject(input: unknown): { project: Project; warnings: Fiel
 
 /** Keys the schema knows, per object (also the order the file is written in). */
 export const SCHEMA_KEYS = {
-  project: ['schema', 'title', 'description', 'opening', 'loads', 'support', 'layers', 'design'],
+  project: ['schema', 'title', 'description', 'opening', 'loads', 'support', 'layers', 'design', 'uncertainty'],
   opening: ['type', 'span_m', 'length_m', 'ends', 'edges'],
   edges: ['short', 'long'],
   loads: ['surcharge_kPa', 'horizontalStress_MPa'],
@@ -104,7 +109,16 @@ export const SCHEMA_KEYS = {
   hoekBrown: ['mi', 'disturbance'],
   design: ['fsTarget', 'deflectionLimitRatio', 'characteristic', 'basis', 'tensileBasis', 'crushingStrength', 'planeStrainModulus'],
   fsTarget: ['tension', 'crushing', 'sliding'],
+  uncertainty: ['samples', 'seed', 'method', 'acceptablePf', 'variables'],
+  variable: ['path', 'distribution', 'mean', 'cov', 'sd', 'min', 'max', 'mode'],
 } as const;
+
+export const SAMPLING_METHOD_NAMES: readonly SamplingMethodName[] = ['monteCarlo', 'latinHypercube'];
+export const VARIABLE_DISTRIBUTIONS: readonly VariableDistributionName[] = ['normal', 'lognormal', 'uniform', 'triangular'];
+/** Bounds of `uncertainty.samples` (common practice: below 100 the interval is meaningless; 1e6 bounds the run time). */
+export const MIN_SAMPLES = 100;
+export const MAX_SAMPLES = 1_000_000;
+export const MAX_VARIABLES = 100;
 
 export const OPENING_TYPES: readonly OpeningType[] = ['beam', 'slab', 'cantilever', 'intersection'];
 export const END_CONDITIONS: readonly EndCondition[] = ['clamped', 'simple'];
@@ -441,11 +455,13 @@ function finish(r: Reader, input: Raw, migratedFrom: 'lamina/1' | undefined): Va
   const support = readSupport(r, input);
   const layers = readLayers(r, input);
   const design = readDesign(r, input);
+  const uncertainty = readUncertainty(r, input, layers);
 
-  if (r.errors.length > 0 || !opening || !loads || !support || !layers || !design || title === undefined || description === undefined) {
+  if (r.errors.length > 0 || uncertainty === undefined || !opening || !loads || !support || !layers || !design || title === undefined || description === undefined) {
     return { ok: false, errors: r.errors, warnings: r.warnings };
   }
   const project: Project = { schema: 'lamina/2', title, opening, loads, support, layers, design };
+  if (own(input, 'uncertainty') !== undefined) project.uncertainty = uncertainty;
   const extra = migratedFrom ? { migratedFrom } : {};
   if (own(input, 'description') !== undefined) {
     // keep key order: description follows title
@@ -746,4 +762,57 @@ function readDesign(r: Reader, input: Raw): Project['design'] | undefined {
     return undefined;
   }
   return { fsTarget, deflectionLimitRatio: ratio, characteristic, basis, tensileBasis, crushingStrength, planeStrainModulus: planeStrain };
+}
+
+/**
+ * The `uncertainty` block (METHODS §16): null, or sampling settings and variables. Each
+ * variable names an eligible field (model/uncertain-fields.ts) that exists in this project;
+ * cov and sd ≥ 0, min < max. The distributions themselves are built, with the remaining
+ * checks (a spread that fits the physical range), by uncertainty/variables.ts.
+ */
+function readUncertainty(r: Reader, input: Raw, layers: Layer[] | undefined): Uncertainty | null | undefined {
+  const path = 'uncertainty';
+  const v = own(input, 'uncertainty');
+  if (v === undefined || v === null) return null;
+  const o = r.object(input, 'uncertainty', '', 'must be null or an object { samples, seed, method, acceptablePf, variables }');
+  if (!o) return undefined;
+  r.unknownKeys(o, SCHEMA_KEYS.uncertainty, path);
+  const samples = r.number(o, 'samples', path, { unit: '', min: MIN_SAMPLES, max: MAX_SAMPLES }, { default: 20000 });
+  if (typeof samples === 'number' && !Number.isInteger(samples)) r.error(child(path, 'samples'), `must be a whole number, got ${samples}`, 'TYPE');
+  const seed = r.number(o, 'seed', path, { unit: '', min: 0, max: 2 ** 31 - 1 }, { default: 1 });
+  if (typeof seed === 'number' && !Number.isInteger(seed)) r.error(child(path, 'seed'), `must be a whole number, got ${seed}`, 'TYPE');
+  const method = r.enumeration(o, 'method', path, SAMPLING_METHOD_NAMES, 'latinHypercube');
+  const acceptablePf = r.number(o, 'acceptablePf', path, { unit: '', min: 0, minOpen: true, max: 1, maxOpen: true }, { nullable: true });
+  const list = r.array(o, 'variables', path, false, MAX_VARIABLES) ?? [];
+  const variables: UncertainVariable[] = [];
+  list.forEach((raw, j) => {
+    const at = `${path}.variables[${j}]`;
+    if (!isObject(raw)) {
+      r.error(at, `must be an object { path, distribution, mean, cov | sd, min, max }, got ${describeValue(raw)}`, 'TYPE');
+      return;
+    }
+    r.unknownKeys(raw, SCHEMA_KEYS.variable, at);
+    const fieldPath = own(raw, 'path');
+    const eligible = typeof fieldPath === 'string' ? eligibleField(fieldPath) : null;
+    if (typeof fieldPath !== 'string') r.error(child(at, 'path'), `required, must be a field path such as "layers[0].thickness_m", got ${describeValue(fieldPath)}`, 'TYPE');
+    else if (eligible === null) r.error(child(at, 'path'), `"${fieldPath}" cannot be sampled; eligible: ${ELIGIBLE_FIELDS.map((f) => f.pattern).join(', ')}`, 'PATH');
+    else {
+      const index = /^layers\[(\d+)\]/.exec(fieldPath);
+      if (index && layers && Number(index[1]) >= layers.length) r.error(child(at, 'path'), `"${fieldPath}" does not exist: the project has ${layers.length} layer(s)`, 'PATH');
+      if (eligible.pattern === 'loads.support_kPa') r.error(child(at, 'path'), `"${fieldPath}" is the lamina/1 name: use "support.standing_kPa"`, 'PATH');
+    }
+    const distribution = r.enumeration(raw, 'distribution', at, VARIABLE_DISTRIBUTIONS, undefined);
+    const numbers: Partial<Record<'mean' | 'cov' | 'sd' | 'min' | 'max' | 'mode', number>> = {};
+    for (const key of ['mean', 'cov', 'sd', 'min', 'max', 'mode'] as const) {
+      const rule: NumberRule = key === 'cov' || key === 'sd' ? { unit: '', min: 0 } : { unit: '' };
+      const n = r.number(raw, key, at, rule, { nullable: true });
+      if (typeof n === 'number') numbers[key] = n;
+    }
+    if (numbers.min !== undefined && numbers.max !== undefined && !(numbers.min < numbers.max)) {
+      r.error(child(at, 'max'), `must be greater than min (${numbers.min}), got ${numbers.max}`, 'RANGE');
+    }
+    if (typeof fieldPath === 'string' && distribution !== undefined) variables.push({ path: fieldPath, distribution, ...numbers });
+  });
+  if (typeof samples !== 'number' || typeof seed !== 'number' || method === undefined || acceptablePf === undefined) return undefined;
+  return { samples, seed, method, acceptablePf, variables };
 }

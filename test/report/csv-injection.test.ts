@@ -31,7 +31,7 @@ describe('resultsCsv and spanCurveCsv: nothing a spreadsheet would evaluate', ()
       const report = {
         ...c.analysis.report,
         checks: c.analysis.report.checks.map((r) =>
-          r.layerIndex === 0 ? { ...r, layer: name, ...(r.mode === 'tension' ? { demand: -1.25, unit: 'MPa' } : {}) } : r,
+          r.layerIndex === 0 ? { ...r, layer: name, ...(r.mode === 'tension' ? { demand: -1.25, unit: 'MPa' as const } : {}) } : r,
         ),
       };
       const text = resultsCsv({ ...c.analysis, report }, 'SI', c.project);
