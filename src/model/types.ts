@@ -47,10 +47,48 @@ export interface Loads {
   horizontalStress_MPa: number;
 }
 
+/** How a bolt pattern is credited (METHODS §12). */
+export type BoltAction = 'suspension' | 'beamBuilding';
+
+/** A square or rectangular pattern of rock bolts (METHODS §12). */
+export interface BoltPattern {
+  /** Bolt length above the roof line, m; the tip is at this height. */
+  length_m: number;
+  /** Tensile capacity of one bolt, kN. */
+  capacity_kN: number;
+  spacingAcross_m: number;
+  spacingAlong_m: number;
+  /** Anchorage length at the tip, m (default 0.3, common practice). */
+  anchorage_m: number;
+  action: BoltAction;
+  /** Shear capacity of one bolt, kN (default 0.6 × capacity: steel shears at fy/√3). */
+  shearCapacity_kN: number;
+  /** Pretension of one bolt, kN (default 0). */
+  pretension_kN: number;
+}
+
 /** Support installed in the opening (METHODS §12). */
 export interface Support {
   /** Standing support (props, cribs) pushing up on the immediate roof; capped at the load it relieves. */
   standing_kPa: number;
+  /** Rock bolts, or null for none. */
+  bolts: BoltPattern | null;
+}
+
+/** The Q-system ratings of the empirical cross-check (Barton, Lien & Lunde 1974); RQD from the immediate roof. */
+export interface QRatings {
+  jn: number;
+  jr: number;
+  ja: number;
+  jw: number;
+  srf: number;
+  /** Excavation support ratio. */
+  esr: number;
+}
+
+/** Optional empirical cross-check (never counted; METHODS §12). */
+export interface Empirical {
+  q: QRatings | null;
 }
 
 export interface Specimen {
@@ -102,6 +140,8 @@ export interface FsTargets {
   tension: number;
   crushing: number;
   sliding: number;
+  /** Bolts: FS per bolt and FS of the interlayer shear (default 1.5, common practice). */
+  bolt: number;
 }
 
 export interface Design {
@@ -126,6 +166,8 @@ export interface Project {
   opening: Opening;
   loads: Loads;
   support: Support;
+  /** Empirical cross-check inputs (never counted). */
+  empirical: Empirical;
   /** layers[0] is the immediate roof; then upward. */
   layers: Layer[];
   design: Design;
