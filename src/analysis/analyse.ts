@@ -13,6 +13,8 @@ import { MODE_SHORT } from './check-labels';
 import { maxSpans, spanFsFunction, SPAN_CAP_M } from './span-finder';
 import { SOURCES, TraceBuilder } from './trace';
 import { beamCoefficients } from '../mechanics/beam';
+import { empiricalReport, supportReport } from './support-report';
+import { suspensionOf } from './support';
 
 const MPa = 1e-6;
 const kPa = 1e-3;
@@ -135,6 +137,8 @@ export function analyse(project: Project): Analysis {
     checks,
     governing,
     maxSpan_m: maxSpan,
+    support: supportReport(project, p, state, trace, warnings, { needed: null, reason: null }),
+    empirical: empiricalReport(project, p, state, trace),
     warnings,
     trace: trace.entries,
   };
@@ -176,7 +180,10 @@ function layerResults(p: ProjectSI, state: State, i: number, ls: LayerState, tra
 
   // Load.
   const g = state.shared.groups[ls.group];
-  if (g.first === g.last) {
+  if (suspensionOf(p)?.suspended.includes(i)) {
+    trace.add(`${base}.load_kPa`, `Load carried by ${layer.name} over the opening (suspended)`, '0 kPa', {}, 0, 'kPa', 'Suspension principle (Obert & Duvall 1967); statics',
+      'This layer hangs from the bolts: its weight goes to the bolts and from them to the anchor layer’s group; over the opening it carries nothing (its skin between bolts is checked instead).');
+  } else if (g.first === g.last) {
     trace.add(`${base}.load_kPa`, `Load carried by ${layer.name}`, 'gamma * t + p_x', { gamma: [layer.unitWeight * kPa, 'kN/m^3'], t: [layer.thickness, 'm'], p_x: [g.extra * kPa, 'kPa'] },
       ls.load * kPa, 'kPa', SOURCES.obertDuvall, extraNote(p, state, ls.group, state.shared.groups.length));
   } else {
@@ -184,7 +191,7 @@ function layerResults(p: ProjectSI, state: State, i: number, ls: LayerState, tra
       { Ei: [ls.modulusBeam * GPa, 'GPa'], t: [layer.thickness, 'm'], W: [g.weight * kPa, 'kPa'], p_x: [g.extra * kPa, 'kPa'], S: [g.stiffness * GPa, 'GPa m^3'] },
       ls.load * kPa, 'kPa', SOURCES.obertDuvall, `Layers ${g.first + 1}–${g.last + 1} bend together and share the load in proportion to E t³. ${extraNote(p, state, ls.group, state.shared.groups.length)}`);
   }
-  if (!(ls.load > 0) && !(state.shared.supportExcess > 0)) {
+  if (!(ls.load > 0) && !(state.shared.supportExcess > 0) && !suspensionOf(p)?.suspended.includes(i)) {
     warnings.push({ code: 'NO_NET_LOAD', path: `${base}`, message: `${layer.name}: no net load on this layer (q = ${round(ls.load * kPa)} kPa); bending and voussoir checks show no demand.` });
   }
   const slenderness = state.span / layer.thickness;

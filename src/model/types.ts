@@ -240,6 +240,12 @@ export interface LayerReport {
 
 export type Mode = 'tension' | 'crushing' | 'sliding' | 'snapThrough' | 'deflection';
 
+/** Modes of the support rows (METHODS §12): FS per bolt, a hanging layer between bolts, an interface of a bonded set. */
+export type SupportMode = 'bolt' | 'skin' | 'interlayerShear';
+
+/** Every mode a check-table row can have. */
+export type CheckMode = Mode | SupportMode;
+
 /** How a check stands: meets/below its target (counted), info (computed, not counted), n/a. */
 export type CheckStatusKind = 'meets' | 'below' | 'info' | 'na';
 
@@ -250,11 +256,11 @@ export type CheckStatusKind = 'meets' | 'below' | 'info' | 'na';
 export interface CheckRow {
   layerIndex: number;
   layer: string;
-  mode: Mode;
-  /** MPa for tension and crushing, δ/t for deflection; null where the check has no demand figure. */
+  mode: CheckMode;
+  /** MPa for tension and crushing, δ/t for deflection, kN per bolt, kPa interlayer shear; null where the check has no demand figure. */
   demand: number | null;
   capacity: number | null;
-  unit: 'MPa' | 'ratio' | null;
+  unit: 'MPa' | 'ratio' | 'kN' | 'kPa' | null;
   /** null where the check does not apply. Snap-through: 1 stands, 0 snaps. Deflection: limit/(δ/t). */
   fs: number | null;
   target: number;
@@ -269,7 +275,7 @@ export interface CheckRow {
 export interface Governing {
   layerIndex: number;
   layer: string;
-  mode: Mode;
+  mode: CheckMode;
   fs: number;
   target: number;
 }
@@ -307,6 +313,49 @@ export interface TraceEntry {
   note?: string;
 }
 
+/** The bolt pattern's results (METHODS §12; DESIGN "Contract changes in v2"). */
+export interface BoltsReport {
+  /** Load per bolt, kN (suspension; 0 when nothing hangs or no anchorage is credited). */
+  load_kN: number;
+  /** Capacity / load; null when no load hangs from the bolts. */
+  fsBolt: number | null;
+  /** The layer holding the anchorage zone; null when the zone straddles an interface. */
+  anchorLayer: number | null;
+  /** The layers hanging from the bolts (suspension). */
+  suspended: number[];
+  /** Beam building: whether the bonded bound is credited and the least interface FS; null otherwise. */
+  composite: { credited: boolean; fsShear: number | null } | null;
+}
+
+/** The support that would make every counted check meet its target (METHODS §12). */
+export interface SupportNeededReport {
+  /** Smallest standing support pressure, kPa; null when none suffices. */
+  standing_kPa: number | null;
+  /** Largest square bolt spacing (given length, capacity and action), m; null when none suffices. */
+  boltSpacing_m: number | null;
+  /** Shortest bolt length (given spacing, capacity and action), m; null when none suffices. */
+  boltLength_m: number | null;
+  /** Largest span with the support as given, m (entered span units). */
+  maxSpan_m: number | null;
+  /** Why a search found nothing (one sentence), or why none is needed. */
+  reasons: string[];
+}
+
+export interface SupportReport {
+  bolts: BoltsReport | null;
+  /** null with `neededReason` "no support needed" where the roof already meets every target. */
+  needed: SupportNeededReport | null;
+  neededReason: string | null;
+}
+
+/** The Q-system cross-check (never counted). */
+export interface EmpiricalReport {
+  q: number;
+  unsupportedSpan_m: number;
+  boltLength_m: number;
+  note: string;
+}
+
 export interface Report {
   schema: 'lamina-report/2';
   opening: OpeningReport;
@@ -315,6 +364,10 @@ export interface Report {
   checks: CheckRow[];
   governing: Governing | null;
   maxSpan_m: MaxSpanReport | null;
+  /** Support results; null where the project has no bolts and no standing support. */
+  support: SupportReport | null;
+  /** Empirical cross-check; null without `empirical.q`. */
+  empirical: EmpiricalReport | null;
   warnings: Warning[];
   trace: TraceEntry[];
 }
