@@ -1,4 +1,7 @@
-/** A small strict argument parser: known flags only, values where required. */
+/**
+ * A small strict argument parser: known flags only, values where required. `-` alone is a
+ * positional argument (standard input); after `--` every argument is positional.
+ */
 export class UsageError extends Error {}
 
 export interface ParsedArgs {
@@ -8,14 +11,18 @@ export interface ParsedArgs {
 }
 
 const VALUE_FLAGS = new Set(['--html', '--csv', '--units', '--rock', '--layer']);
-const BOOLEAN_FLAGS = new Set(['--json', '--markdown', '--help', '-h']);
+const BOOLEAN_FLAGS = new Set(['--json', '--jsonl', '--markdown', '--help', '-h']);
 
 export function parseArgs(argv: readonly string[]): ParsedArgs {
   const positional: string[] = [];
   const flags: Record<string, string | true> = {};
   for (let i = 0; i < argv.length; i++) {
     const arg = argv[i];
-    if (arg.startsWith('-')) {
+    if (arg === '--') {
+      positional.push(...argv.slice(i + 1));
+      break;
+    }
+    if (arg.startsWith('-') && arg !== '-') {
       const [name, inline] = arg.includes('=') ? [arg.slice(0, arg.indexOf('=')), arg.slice(arg.indexOf('=') + 1)] : [arg, undefined];
       if (VALUE_FLAGS.has(name)) {
         const value = inline ?? argv[++i];

@@ -1,25 +1,26 @@
-/** `lamina check` and `lamina span`. */
-import { readFileSync } from 'node:fs';
-import { analyse, meetsTargets, minimumThickness, spanCurve } from '../analysis';
-import { buildReportDocument, renderHtml, renderMarkdown, resultsCsv, spanCurveCsv } from '../report';
-import { formatQuantity } from '../model/units';
-import type { ParsedArgs } from './args';
-import { UsageError } from './args';
-import { loadProject, onePath, unitsFlag } from './input';
-import type { Io } from './main';
+/**
+ * `lamina check` (one or many project files, patterns, `-` for standard input) and
+ * `lamina span`. Each file is checked on its own: a refused file is reported and the others
+ * still run; the exit code is the worst over the files and a summary line goes to stderr.
+ */
+import { version } from '../../package.json';
+import { analyse, meetsTargets } from '../analysis/analyse';
+import { spanCurve } from '../analysis/span-curve';
+import { minimumThickness } from '../analysis/thickness';
+import type { Analysis } from '../analysis/types';
+import type { Project } from '../model/types';
+import { formatQuantity, type UnitSystem } from '../model/units';
+import { resultsCsv, spanCurveCsv } from '../report/results-csv';
+import { UsageError, type ParsedArgs } from './args';
+import { EXIT_BELOW, EXIT_INTERNAL, EXIT_MEETS, EXIT_REFUSED, worstExit, type ExitCode } from './exit-codes';
+import { InputError, onePath, parseProjectText, printWarnings, unitsFlag } from './input';
+import { expandInputs, readSource, type InputSource } from './inputs';
+import type { Io } from './io';
+import { writeOutput } from './output';
 import { caution, checkText, spanLines } from './text-report';
 
 export function laminaVersion(): string {
-  try {
-    const pkg = JSON.parse(readFileSync(new URL('../../package.json', import.meta.url), 'utf8')) as { version?: string };
-    return pkg.version ?? 'unknown';
-  } catch {
-    return 'unknown';
-  }
-}
-
-function printWarnings(io: Io, path: string, warnings: { path: string; message: string }[]): void {
-  for (const w of warnings) io.err(`lamina: warning: ${path}: ${w.message.startsWith(w.path) ? w.message : `${w.path}: ${w.message}`}\n`);
+  return version;
 }
 
 /** The FS-versus-span curve goes beside the results table: OUT.csv → OUT-span.csv. */
@@ -27,33 +28,116 @@ export function spanCsvPath(out: string): string {
   return out.toLowerCase().endsWith('.csv') ? `${out.slice(0, -4)}-span.csv` : `${out}-span.csv`;
 }
 
-export function runCheck(args: ParsedArgs, io: Io): number {
-  const path = onePath(args, 'project file');
-  const units = unitsFlag(args);
-  const { project, text, warnings } = loadProject(path, io.readFile);
-  printWarnings(io, path, warnings);
-  const analysis = analyse(project);
-  const needsCurve = args.flags['--markdown'] || args.flags['--html'] || args.flags['--csv'];
-  const curve = needsCurve ? spanCurve(project) : null;
-  const doc = () => buildReportDocument({ project, analysis, curve, projectText: text, units, version: laminaVersion(), date: new Date().toISOString().slice(0, 10) });
-  if (typeof args.flags['--html'] === 'string') io.writeFile(args.flags['--html'], renderHtml(doc()));
-  if (typeof args.flags['--csv'] === 'string') {
-    const out = args.flags['--csv'];
-    io.writeFile(out, resultsCsv(analysis, units, project));
-    io.writeFile(spanCsvPath(out), spanCurveCsv(curve!, units));
-  }
-  if (args.flags['--json'] && args.flags['--markdown']) throw new UsageError('choose one of --json and --markdown');
-  if (args.flags['--json']) io.out(JSON.stringify(analysis.report, null, 2) + '\n');
-  else if (args.flags['--markdown']) io.out(renderMarkdown(doc()));
-  else io.out(checkText(project, analysis, units));
-  return meetsTargets(project, analysis.report) ? 0 : 1;
+type Format = 'text' | 'markdown' | 'json' | 'jsonl';
+
+/** One file's entry in `--json` (several files) and `--jsonl` output. */
+export interface CheckEntry {
+  file: string;
+  status: 'meets' | 'below' | 'refused' | 'internal error';
+  exit: ExitCode;
+  report?: Analysis['report'];
+  errors?: ReadonlyArray<{ path: string; message: string }>;
 }
 
-export function runSpan(args: ParsedArgs, io: Io): number {
+function outputFormat(args: ParsedArgs): Format {
+  const chosen = (['--json', '--jsonl', '--markdown'] as const).filter((f) => args.flags[f]);
+  if (chosen.length > 1) throw new UsageError(`choose one of --json, --jsonl and --markdown (got ${chosen.join(' and ')})`);
+  return chosen.length ? (chosen[0].slice(2) as Format) : 'text';
+}
+
+const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
+
+export async function runCheck(args: ParsedArgs, io: Io): Promise<ExitCode> {
+  const units = unitsFlag(args);
+  const format = outputFormat(args);
+  if (args.positional.length === 0) throw new UsageError('check needs at least one project file (or - for standard input)');
+  const sources = expandInputs(args.positional);
+  // One named file keeps the single-report output (--json prints the report itself).
+  const single = args.positional.length === 1 && sources.length === 1 && sources[0].name === args.positional[0];
+  const html = args.flags['--html'];
+  const csv = args.flags['--csv'];
+  if ((typeof html === 'string' || typeof csv === 'string') && !single) {
+    throw new UsageError('--html and --csv write the report of one project file; give exactly one file');
+  }
+  // The calculation report renders trace formulas with mathjs: load it only when asked for.
+  const reports = format === 'markdown' || typeof html === 'string' ? await import('./report-output') : null;
+
+  const tally = { meets: 0, below: 0, refused: 0, internal: 0 };
+  let worst: ExitCode = EXIT_MEETS;
+  let entries = 0;
+  const emit = (entry: CheckEntry) => {
+    if (format === 'jsonl') io.out(JSON.stringify(entry) + '\n');
+    else if (format === 'json' && !single) io.out(`${entries === 0 ? '[\n' : ',\n'}${JSON.stringify(entry)}`);
+    entries++;
+  };
+
+  for (const source of sources) {
+    const entry = checkOne(source, io, { units, format, single, html, csv, reports });
+    worst = worstExit(worst, entry.exit);
+    if (entry.status === 'meets') tally.meets++;
+    else if (entry.status === 'below') tally.below++;
+    else if (entry.status === 'refused') tally.refused++;
+    else tally.internal++;
+    emit(entry);
+  }
+  if (format === 'json' && !single) io.out(entries === 0 ? '[]\n' : '\n]\n');
+  io.err(
+    `lamina: ${plural(sources.length, 'file')} checked: ${tally.meets} meet${tally.meets === 1 ? 's' : ''} the targets, ${tally.below} below, ${tally.refused} refused` +
+      `${tally.internal ? `, ${tally.internal} internal error${tally.internal === 1 ? '' : 's'}` : ''}\n`,
+  );
+  return worst;
+}
+
+interface CheckOptions {
+  units: UnitSystem;
+  format: Format;
+  single: boolean;
+  html: string | true | undefined;
+  csv: string | true | undefined;
+  reports: typeof import('./report-output') | null;
+}
+
+function checkOne(source: InputSource, io: Io, o: CheckOptions): CheckEntry {
+  const file = source.name;
+  let parsed: { project: Project; text: string };
+  try {
+    const { project, text, warnings } = parseProjectText(file, readSource(source, io));
+    printWarnings(io.err, file, warnings);
+    parsed = { project, text };
+  } catch (e) {
+    if (!(e instanceof InputError)) throw e;
+    io.err(`lamina: input refused: ${e.message}\n`);
+    return { file, status: 'refused', exit: EXIT_REFUSED, errors: e.issues };
+  }
+  const { project, text } = parsed;
+  let analysis: Analysis;
+  try {
+    analysis = analyse(project);
+  } catch (e) {
+    // A file the validator accepted must analyse: this is a bug in Lamina, not the user's input.
+    io.err(`lamina: internal error: ${file}: ${e instanceof Error ? e.message : String(e)}\n`);
+    return { file, status: 'internal error', exit: EXIT_INTERNAL, errors: [{ path: '', message: `internal error: ${e instanceof Error ? e.message : String(e)}` }] };
+  }
+  const exit = meetsTargets(project, analysis.report) ? EXIT_MEETS : EXIT_BELOW;
+  const curve = o.reports || typeof o.csv === 'string' ? spanCurve(project) : null;
+  const doc = () => o.reports!.reportDocument({ project, analysis, curve: curve!, text, units: o.units, version: laminaVersion() });
+  if (typeof o.html === 'string') writeOutput(io, '--html', o.html, o.reports!.renderHtml(doc()));
+  if (typeof o.csv === 'string') {
+    writeOutput(io, '--csv', o.csv, resultsCsv(analysis, o.units, project));
+    writeOutput(io, '--csv', spanCsvPath(o.csv), spanCurveCsv(curve!, o.units));
+  }
+  if (o.format === 'json' && o.single) io.out(JSON.stringify(analysis.report, null, 2) + '\n');
+  else if (o.format === 'markdown') io.out(o.reports!.renderMarkdown(doc()));
+  else if (o.format === 'text') io.out((o.single ? '' : `File: ${file}\n`) + checkText(project, analysis, o.units));
+  return { file, status: exit === EXIT_MEETS ? 'meets' : 'below', exit, report: analysis.report };
+}
+
+export async function runSpan(args: ParsedArgs, io: Io): Promise<ExitCode> {
   const path = onePath(args, 'project file');
   const units = unitsFlag(args);
-  const { project, warnings } = loadProject(path, io.readFile);
-  printWarnings(io, path, warnings);
+  const [source] = expandInputs([path]);
+  const { project, warnings } = parseProjectText(path, readSource(source, io));
+  printWarnings(io.err, path, warnings);
   const layerFlag = args.flags['--layer'];
   const layer = layerFlag === undefined ? 1 : Number(layerFlag);
   if (!(Number.isInteger(layer) && layer >= 1 && layer <= project.layers.length)) {
@@ -79,5 +163,5 @@ export function runSpan(args: ParsedArgs, io: Io): number {
     ];
     io.out(lines.join('\n'));
   }
-  return meetsTargets(project, analysis.report) ? 0 : 1;
+  return meetsTargets(project, analysis.report) ? EXIT_MEETS : EXIT_BELOW;
 }

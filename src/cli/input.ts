@@ -5,7 +5,15 @@ import type { Project } from '../model/types';
 import type { UnitSystem } from '../model/units';
 import { UsageError, type ParsedArgs } from './args';
 
-export class InputError extends Error {}
+/** A refused input (exit 2). `issues` lists each problem with its field path, when known. */
+export class InputError extends Error {
+  constructor(
+    message: string,
+    readonly issues: ReadonlyArray<{ path: string; message: string }> = [{ path: '', message }],
+  ) {
+    super(message);
+  }
+}
 
 export function readFileOrRefuse(path: string, readFile: (p: string) => string): string {
   try {
@@ -15,17 +23,22 @@ export function readFileOrRefuse(path: string, readFile: (p: string) => string):
   }
 }
 
-export function loadProject(path: string, readFile: (p: string) => string): { project: Project; text: string; warnings: FieldIssue[] } {
-  const text = readFileOrRefuse(path, readFile);
+/** Parse and validate project text read from `name`; a refusal names every field. */
+export function parseProjectText(name: string, text: string): { project: Project; text: string; warnings: FieldIssue[] } {
   try {
     const { project, warnings } = readProjectText(text);
     return { project, text, warnings };
   } catch (e) {
     if (e instanceof ProjectError) {
-      throw new InputError(`${path}:\n` + e.issues.map((i) => `  ${i.path ? `${i.path}: ` : ''}${stripPath(i.message, i.path)}`).join('\n'));
+      const issues = e.issues.map((i) => ({ path: i.path, message: stripPath(i.message, i.path) }));
+      throw new InputError(`${name}:\n` + issues.map((i) => `  ${i.path ? `${i.path}: ` : ''}${i.message}`).join('\n'), issues);
     }
     throw e;
   }
+}
+
+export function loadProject(path: string, readFile: (p: string) => string): { project: Project; text: string; warnings: FieldIssue[] } {
+  return parseProjectText(path, readFileOrRefuse(path, readFile));
 }
 
 /** Messages may already start with their path; print it once. */
@@ -43,4 +56,9 @@ export function unitsFlag(args: ParsedArgs): UnitSystem {
 export function onePath(args: ParsedArgs, what: string): string {
   if (args.positional.length !== 1) throw new UsageError(`${args.command} needs exactly one ${what}, got ${args.positional.length}`);
   return args.positional[0];
+}
+
+/** Print a file's validation warnings on stderr, each with its field path. */
+export function printWarnings(err: (text: string) => void, name: string, warnings: ReadonlyArray<{ path: string; message: string }>): void {
+  for (const w of warnings) err(`lamina: warning: ${name}: ${w.message.startsWith(w.path) ? w.message : `${w.path}: ${w.message}`}\n`);
 }

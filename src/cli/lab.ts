@@ -8,16 +8,18 @@ import { characteristicValue } from '../strength/statistics';
 import { formatQuantity, type UnitSystem } from '../model/units';
 import { numberText } from '../report/number-text';
 import { UsageError, type ParsedArgs } from './args';
-import { InputError, onePath, readFileOrRefuse, unitsFlag } from './input';
-import type { Io } from './main';
+import { EXIT_MEETS, type ExitCode } from './exit-codes';
+import { InputError, onePath, unitsFlag } from './input';
+import { expandInputs, readSource } from './inputs';
+import type { Io } from './io';
 import { caution } from './text-report';
 
-export function runLab(args: ParsedArgs, io: Io): number {
+export function runLab(args: ParsedArgs, io: Io): ExitCode {
   const path = onePath(args, 'specimen CSV file');
   const units: UnitSystem = unitsFlag(args);
   const rock = (args.flags['--rock'] ?? 'sedimentary') as string;
   if (!(ROCK_CLASSES as readonly string[]).includes(rock)) throw new UsageError(`--rock must be one of ${ROCK_CLASSES.join(', ')}, got "${rock}"`);
-  const text = readFileOrRefuse(path, io.readFile);
+  const text = readSource(expandInputs([path])[0], io);
   const parsed = parseSpecimensCsv(text);
   if (parsed.errors.length) {
     throw new InputError(`${path}:\n` + parsed.errors.map((e) => `  ${e.message}`).join('\n'));
@@ -65,7 +67,7 @@ export function runLab(args: ParsedArgs, io: Io): number {
   };
   if (args.flags['--json']) {
     io.out(JSON.stringify(result, null, 2) + '\n');
-    return 0;
+    return EXIT_MEETS;
   }
   const S = (v: number) => formatQuantity(v, 'stress', units);
   const D = (v: number) => formatQuantity(v, 'smallLength', units);
@@ -88,5 +90,5 @@ export function runLab(args: ParsedArgs, io: Io): number {
     '',
   );
   io.out(lines.join('\n'));
-  return 0;
+  return EXIT_MEETS;
 }

@@ -1,61 +1,57 @@
-#!/usr/bin/env node
 /**
- * The Lamina command line: `check`, `span`, `lab`. Exit codes (DESIGN.md): 0 all checks meet
- * their targets; 1 at least one is below; 2 the input was refused (stderr names the field).
+ * The Lamina command line: `check`, `span`, `lab`, `openings`. Exit codes (src/cli/exit-codes.ts,
+ * DESIGN.md): 0 all checks meet their targets; 1 at least one is below; 2 the input was refused
+ * or an output could not be written (stderr names the field, option or path); 3 an internal
+ * error (a bug). Each command's module is imported when it runs, so `--help` loads almost
+ * nothing and no command loads what another needs.
  */
-import { readFileSync } from 'node:fs';
 import { parseArgs, UsageError } from './args';
+import { EXIT_INTERNAL, EXIT_MEETS, EXIT_REFUSED, type ExitCode } from './exit-codes';
 import { USAGE } from './help';
-import { runCheck, runSpan } from './check';
-import { runLab } from './lab';
 import { InputError } from './input';
+import type { Io } from './io';
+import { OutputError } from './output';
 
-export interface Io {
-  out: (text: string) => void;
-  err: (text: string) => void;
-  readFile: (path: string) => string;
-  writeFile: (path: string, text: string) => void;
+export type { Io } from './io';
+export { processIo } from './io';
+
+async function dispatch(command: string, args: ReturnType<typeof parseArgs>, io: Io): Promise<ExitCode> {
+  switch (command) {
+    case 'check':
+      return (await import('./check')).runCheck(args, io);
+    case 'span':
+      return (await import('./check')).runSpan(args, io);
+    case 'lab':
+      return (await import('./lab')).runLab(args, io);
+    case 'openings':
+      return (await import('./openings')).runOpenings(args, io);
+    default:
+      throw new UsageError(`unknown command "${command}" (expected check, span, lab, openings or help)`);
+  }
 }
 
-export function run(argv: readonly string[], io: Io): number {
+export async function run(argv: readonly string[], io: Io): Promise<ExitCode> {
   try {
     const args = parseArgs(argv);
     if (args.flags['--help'] || args.flags['-h'] || args.command === null || args.command === 'help') {
       io.out(USAGE);
-      return args.command === null && !args.flags['--help'] && !args.flags['-h'] ? 2 : 0;
+      return args.command === null && !args.flags['--help'] && !args.flags['-h'] ? EXIT_REFUSED : EXIT_MEETS;
     }
-    switch (args.command) {
-      case 'check':
-        return runCheck(args, io);
-      case 'span':
-        return runSpan(args, io);
-      case 'lab':
-        return runLab(args, io);
-      default:
-        throw new UsageError(`unknown command "${args.command}" (expected check, span, lab or help)`);
-    }
+    return await dispatch(args.command, args, io);
   } catch (e) {
     if (e instanceof UsageError) {
-      io.err(`lamina: ${e.message}\nRun "npm run lamina -- help" for usage.\n`);
-      return 2;
+      io.err(`lamina: ${e.message}\nRun "lamina help" for usage.\n`);
+      return EXIT_REFUSED;
     }
     if (e instanceof InputError) {
       io.err(`lamina: input refused: ${e.message}\n`);
-      return 2;
+      return EXIT_REFUSED;
     }
-    io.err(`lamina: internal error: ${e instanceof Error ? e.message : String(e)}\n`);
-    return 3;
+    if (e instanceof OutputError) {
+      io.err(`lamina: ${e.message}\n`);
+      return EXIT_REFUSED;
+    }
+    io.err(`lamina: internal error (a bug in Lamina, please report it): ${e instanceof Error ? e.message : String(e)}\n`);
+    return EXIT_INTERNAL;
   }
-}
-
-const isMain = process.argv[1] !== undefined && /cli[\\/]main\.(ts|js)$/.test(process.argv[1]);
-if (isMain) {
-  const { writeFileSync } = await import('node:fs');
-  const code = run(process.argv.slice(2), {
-    out: (t) => process.stdout.write(t),
-    err: (t) => process.stderr.write(t),
-    readFile: (path) => readFileSync(path, 'utf8'),
-    writeFile: (path, text) => writeFileSync(path, text, 'utf8'),
-  });
-  process.exitCode = code;
 }

@@ -2,7 +2,10 @@
  * Units at the boundary: the ONE module that owns mathjs for units. Text typed into a form
  * field (`20 ft`, `2500 psi`, `160 lbf/ft^3`) is parsed with a strict pattern and converted
  * with `math.unit(value, unit)`; user text is never evaluated as an expression.
- * Display conversions (SI ↔ US customary) go through the same instance.
+ * Display conversions (SI ↔ US customary) use plain factors from the unit definitions below
+ * (no mathjs), so formatting a number never loads the unit machinery: the command line and
+ * any other caller that only displays values do not pay for mathjs (the bundler drops it when
+ * `parseQuantity` is not reachable; mathjs is free of import side effects).
  *
  * Custom units defined here: psf = lbf/ft², ksf = 1000 lbf/ft², ksi = 1000 psi,
  * pcf = lbf/ft³, kcf = 1000 lbf/ft³. mathjs supplies psi = 6894.757 Pa, lbf = 4.448222 N,
@@ -15,10 +18,6 @@
  */
 import { create, createUnitDependencies, unitDependencies, type Unit } from 'mathjs';
 
-// Only the unit machinery (not `all`): keeps the app bundle small and leaves no expression
-// evaluator in this module at all.
-const math = create({ unitDependencies, createUnitDependencies }, {});
-
 const CUSTOM_UNITS: ReadonlyArray<[string, string]> = [
   ['psf', '1 lbf/ft^2'],
   ['ksf', '1000 lbf/ft^2'],
@@ -26,8 +25,25 @@ const CUSTOM_UNITS: ReadonlyArray<[string, string]> = [
   ['pcf', '1 lbf/ft^3'],
   ['kcf', '1000 lbf/ft^3'],
 ];
-for (const [name, definition] of CUSTOM_UNITS) {
-  if (!math.Unit.isValuelessUnit(name)) math.createUnit(name, definition);
+
+type UnitMath = ReturnType<typeof createUnitMath>;
+
+// Only the unit machinery (not `all`): keeps the app bundle small and leaves no expression
+// evaluator in this module at all.
+function createUnitMath() {
+  const m = create({ unitDependencies, createUnitDependencies }, {});
+  for (const [name, definition] of CUSTOM_UNITS) {
+    if (!m.Unit.isValuelessUnit(name)) m.createUnit(name, definition);
+  }
+  return m;
+}
+
+let unitMath: UnitMath | undefined;
+
+/** The one mathjs instance, created on first use (parsing only). */
+function mathUnits(): UnitMath {
+  unitMath ??= createUnitMath();
+  return unitMath;
 }
 
 /** Thrown on unparsable text or a quantity of the wrong dimension. */
@@ -53,6 +69,7 @@ const DIMENSIONS: ReadonlyArray<{ probe: string; name: string; example: string }
 ];
 
 function dimensionOf(siUnit: string): { name: string; example: string } {
+  const math = mathUnits();
   const target = math.unit(1, siUnit);
   for (const d of DIMENSIONS) if (target.equalBase(math.unit(1, d.probe))) return d;
   return { name: `a quantity in ${siUnit}`, example: `1 ${siUnit}` };
@@ -79,7 +96,7 @@ function tidy(x: number): number {
 
 function toUnit(value: number, unitText: string): Unit | undefined {
   try {
-    return math.unit(value, unitText);
+    return mathUnits().unit(value, unitText);
   } catch {
     return undefined;
   }
@@ -147,20 +164,32 @@ export const QUANTITIES: Readonly<Record<Quantity, QuantityUnits>> = {
   deflection: { file: 'mm', SI: 'mm', US: 'in', label: { SI: 'mm', US: 'in' } },
 };
 
-const factorCache = new Map<string, number>();
+// Definitions (exact): 1 in = 0.0254 m, 1 ft = 0.3048 m, 1 lbf = 0.45359237 kg × 9.80665 m/s²
+// (international yard and pound, 1959; standard gravity). Hence psi = lbf/in² = 6894.757 Pa,
+// psf = lbf/ft² = 47.880 Pa, lbf/ft³ = 157.087 N/m³ (METHODS §13). test/model/units.test.ts
+// checks every factor against mathjs's own unit definitions.
+const IN_M = 0.0254;
+const FT_M = 0.3048;
+const LBF_N = 0.45359237 * 9.80665;
+const PSI_PA = LBF_N / (IN_M * IN_M);
+
+/** US display units per file unit, per quantity (SI display units are the file units). */
+const US_PER_FILE_UNIT: Readonly<Record<Quantity, number>> = {
+  length: 1 / FT_M, // m → ft
+  smallLength: 1e-3 / IN_M, // mm → in
+  stress: 1e6 / PSI_PA, // MPa → psi
+  pressure: 1e3 / (LBF_N / (FT_M * FT_M)), // kPa → psf
+  modulus: 1e9 / (1e3 * PSI_PA), // GPa → ksi
+  unitWeight: 1e3 / (LBF_N / FT_M ** 3), // kN/m³ → lbf/ft³
+  force: 1e3 / LBF_N, // kN → lbf
+  deflection: 1e-3 / IN_M, // mm → in
+};
 
 /** Display units per file unit for `quantity` in `system` (all conversions are linear). */
 function displayFactor(quantity: Quantity, system: UnitSystem): number {
-  const q = QUANTITIES[quantity];
-  if (!q) throw new RangeError(`unknown quantity ${JSON.stringify(quantity)}`);
+  if (!Object.hasOwn(QUANTITIES, quantity)) throw new RangeError(`unknown quantity ${JSON.stringify(quantity)}`);
   if (system !== 'SI' && system !== 'US') throw new RangeError(`unknown unit system ${JSON.stringify(system)}`);
-  const key = `${quantity}|${system}`;
-  let f = factorCache.get(key);
-  if (f === undefined) {
-    f = math.unit(1, q.file).toNumber(q[system]);
-    factorCache.set(key, f);
-  }
-  return f;
+  return system === 'SI' ? 1 : US_PER_FILE_UNIT[quantity];
 }
 
 /** Convert a value in the file unit of `quantity` to the display unit of `system`. */

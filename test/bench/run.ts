@@ -5,6 +5,7 @@
 import { benchVoussoir } from './voussoir.bench';
 import { benchPlate } from './plate.bench';
 import { benchAnalysis } from './analysis.bench';
+import { benchCli } from './cli.bench';
 import { benchUncertainty } from './uncertainty.bench';
 import type { BenchResult } from './types';
 
@@ -12,6 +13,7 @@ const groups: [string, () => Promise<BenchResult[]>][] = [
   ['voussoir', benchVoussoir],
   ['plate', benchPlate],
   ['analysis', benchAnalysis],
+  ['command line', benchCli],
   ['uncertainty', benchUncertainty],
 ];
 
@@ -28,7 +30,7 @@ for (const [name, run] of groups) {
   for (const r of await run()) {
     if (r.pass === false) failed++;
     const ratio = r.ratio === undefined ? '' : `  ×${r.ratio.toFixed(1)} vs ${r.baseline ?? 'baseline'}`;
-    console.log(`${r.pass === false ? '✗' : r.pass ? '✓' : ' '} ${r.name}: ${fmt(r.median_us)}${ratio}${r.target ? `  (target ${r.target})` : ''}`);
+    console.log(`${r.pass === false ? '✗' : r.pass ? '✓' : ' '} ${r.name}: ${r.min_us === undefined ? fmt(r.median_us) : `${fmt(r.min_us)} / ${fmt(r.median_us)} (min / median)`}${ratio}${r.target ? `  (target ${r.target})` : ''}`);
   }
 }
 console.log(`\n${failed === 0 ? 'All targets met.' : `${failed} target(s) missed.`}`);

@@ -18,6 +18,11 @@ function fakeIo(files: Record<string, string> = {}) {
       return readFileSync(p, 'utf8');
     },
     writeFile: (p, t) => void (written[p] = t),
+    readStdin: () => {
+      if ('-' in files) return files['-'];
+      throw new Error('no standard input in this test');
+    },
+    errIsTty: false,
   };
   return { io, out: () => out.join(''), err: () => err.join(''), written };
 }
@@ -25,26 +30,26 @@ function fakeIo(files: Record<string, string> = {}) {
 const example = JSON.parse(readFileSync(presetFiles().find((f) => f.includes('coal-room'))!, 'utf8'));
 
 describe('lamina CLI', () => {
-  it('--help prints the usage and the caution, exit 0', () => {
+  it('--help prints the usage and the caution, exit 0', async () => {
     const f = fakeIo();
-    expect(run(['--help'], f.io)).toBe(0);
+    expect(await run(['--help'], f.io)).toBe(0);
     expect(f.out()).toContain(CAUTION);
     expect(f.out()).toContain('check');
   });
-  it('no command is a usage error (exit 2) that still shows the usage', () => {
+  it('no command is a usage error (exit 2) that still shows the usage', async () => {
     const f = fakeIo();
-    expect(run([], f.io)).toBe(2);
+    expect(await run([], f.io)).toBe(2);
     expect(f.out()).toContain('Usage');
   });
-  it('an unknown option exits 2 naming it', () => {
+  it('an unknown option exits 2 naming it', async () => {
     const f = fakeIo();
-    expect(run(['check', 'x.json', '--frobnicate'], f.io)).toBe(2);
+    expect(await run(['check', 'x.json', '--frobnicate'], f.io)).toBe(2);
     expect(f.err()).toContain('--frobnicate');
   });
-  it('check --json prints a lamina-report/2 report without NaN or Infinity', () => {
+  it('check --json prints a lamina-report/2 report without NaN or Infinity', async () => {
     for (const file of presetFiles()) {
       const f = fakeIo();
-      const code = run(['check', file, '--json'], f.io);
+      const code = await run(['check', file, '--json'], f.io);
       expect([0, 1]).toContain(code);
       const text = f.out();
       expect(text).not.toMatch(/NaN|Infinity/);
@@ -53,10 +58,10 @@ describe('lamina CLI', () => {
       expect(report.layers.length).toBeGreaterThan(0);
       expect(Object.keys(report.maxSpan_m)).toEqual(['tension', 'crushing', 'sliding', 'snapThrough', 'deflection', 'governing']);
     }
-  });
-  it('exit code 1 when a check is below target and 0 when all meet (one thick bed, low targets)', () => {
+    }, 60_000);
+  it('exit code 1 when a check is below target and 0 when all meet (one thick bed, low targets)', async () => {
     const below = fakeIo({ 'p.json': JSON.stringify(example) });
-    expect(run(['check', 'p.json'], below.io)).toBe(1);
+    expect(await run(['check', 'p.json'], below.io)).toBe(1);
     const safe = structuredClone(example);
     // One 0.8 m bed over 4 m: tension q s²/(2t²) ≈ 0.25 MPa; sliding s·tanφ/(4z) ≈ 4·0.70/(4·0.4) ≈ 1.75.
     safe.opening.span_m = 4.0;
@@ -64,51 +69,51 @@ describe('lamina CLI', () => {
     safe.layers[0].thickness_m = 0.8;
     safe.design.fsTarget = { tension: 1.0, crushing: 1.2, sliding: 1.0 };
     const ok = fakeIo({ 'p.json': JSON.stringify(safe) });
-    expect(run(['check', 'p.json'], ok.io), ok.out()).toBe(0);
+    expect(await run(['check', 'p.json'], ok.io), ok.out()).toBe(0);
   });
-  it('human output gives units on the numbers and the caution', () => {
+  it('human output gives units on the numbers and the caution', async () => {
     const f = fakeIo();
-    run(['check', presetFiles()[0]], f.io);
+    await run(['check', presetFiles()[0]], f.io);
     const text = f.out();
     expect(text).toContain(CAUTION);
     expect(text).toMatch(/span \d+(\.\d+)? m/);
     expect(text).toMatch(/\d MPa/);
     const us = fakeIo();
-    run(['check', presetFiles()[0], '--units', 'US'], us.io);
+    await run(['check', presetFiles()[0], '--units', 'US'], us.io);
     expect(us.out()).toMatch(/\d ft/);
     expect(us.out()).toMatch(/\d psi/);
   });
-  it('an invalid project exits 2 with field paths on stderr and nothing on stdout', () => {
+  it('an invalid project exits 2 with field paths on stderr and nothing on stdout', async () => {
     const bad = structuredClone(example);
     bad.layers[1].thickness_m = -0.2;
     bad.opening.span_m = 0;
     const f = fakeIo({ 'bad.json': JSON.stringify(bad) });
-    expect(run(['check', 'bad.json', '--json'], f.io)).toBe(2);
+    expect(await run(['check', 'bad.json', '--json'], f.io)).toBe(2);
     expect(f.err()).toContain('layers[1].thickness_m');
     expect(f.err()).toContain('opening.span_m');
     expect(f.out()).toBe('');
   });
-  it('malformed JSON and a missing file exit 2', () => {
+  it('malformed JSON and a missing file exit 2', async () => {
     const f = fakeIo({ 'x.json': '{ "schema": ' });
-    expect(run(['check', 'x.json'], f.io)).toBe(2);
+    expect(await run(['check', 'x.json'], f.io)).toBe(2);
     const g = fakeIo();
-    expect(run(['check', '/nonexistent/none.lamina.json'], g.io)).toBe(2);
+    expect(await run(['check', '/nonexistent/none.lamina.json'], g.io)).toBe(2);
     expect(g.err()).toContain('cannot read');
   });
-  it('span prints the largest spans and the minimum thickness', () => {
+  it('span prints the largest spans and the minimum thickness', async () => {
     const f = fakeIo();
-    run(['span', presetFiles()[0], '--json'], f.io);
+    await run(['span', presetFiles()[0], '--json'], f.io);
     const r = JSON.parse(f.out());
     expect(r.maxSpan_m.governing).toBeGreaterThan(0);
     expect(r.minimumThickness.thickness_m === null || r.minimumThickness.thickness_m > 0).toBe(true);
     const h = fakeIo();
-    run(['span', presetFiles()[0]], h.io);
+    await run(['span', presetFiles()[0]], h.io);
     expect(h.out()).toContain('Minimum thickness');
     expect(h.out()).toContain(CAUTION);
   });
-  it('--csv writes the results table and the span curve, both parseable', () => {
+  it('--csv writes the results table and the span curve, both parseable', async () => {
     const f = fakeIo();
-    run(['check', presetFiles()[0], '--csv', 'out.csv'], f.io);
+    await run(['check', presetFiles()[0], '--csv', 'out.csv'], f.io);
     expect(Object.keys(f.written).sort()).toEqual(['out-span.csv', 'out.csv']);
     expect(csvParse(f.written['out.csv']).length).toBeGreaterThan(0);
     expect(csvParse(f.written['out-span.csv']).length).toBeGreaterThan(10);
@@ -118,9 +123,9 @@ describe('lamina CLI', () => {
 describe('lamina lab', () => {
   // Check value: METHODS §5 (ISRM 1978): P = 10 kN, D = 54 mm, L = 27 mm → 4.366 MPa; P = 20 kN → 8.733 MPa.
   const csv = 'id,diameter_mm,thickness_mm,peakLoad_kN,valid\nA,54,27,10,true\nB,54,27,20,yes\nC,54,60,12,true\nD,54,27,9,false\n';
-  it('reduces Brazilian specimens and names rejected ones', () => {
+  it('reduces Brazilian specimens and names rejected ones', async () => {
     const f = fakeIo({ 'lab.csv': csv });
-    expect(run(['lab', 'lab.csv', '--json'], f.io)).toBe(0);
+    expect(await run(['lab', 'lab.csv', '--json'], f.io)).toBe(0);
     const r = JSON.parse(f.out());
     expect(r.specimens[0].brazilian_MPa).toBeCloseTo(4.366, 3);
     expect(r.specimens[1].brazilian_MPa).toBeCloseTo(8.733, 3);
@@ -130,29 +135,29 @@ describe('lamina lab', () => {
     // direct = 0.7 × mean Brazilian (Perras & Diederichs 2014): 0.7 × 6.5493 = 4.5845 MPa
     expect(r.directMean_MPa).toBeCloseTo(0.7 * (4.3663 + 8.7326) / 2, 3);
   });
-  it('--rock igneous uses the 0.8 factor (Perras & Diederichs 2014)', () => {
+  it('--rock igneous uses the 0.8 factor (Perras & Diederichs 2014)', async () => {
     const f = fakeIo({ 'lab.csv': csv });
-    run(['lab', 'lab.csv', '--rock', 'igneous', '--json'], f.io);
+    await run(['lab', 'lab.csv', '--rock', 'igneous', '--json'], f.io);
     expect(JSON.parse(f.out()).directFactor).toBe(0.8);
   });
-  it('bad CSV rows exit 2 naming the row and the column', () => {
+  it('bad CSV rows exit 2 naming the row and the column', async () => {
     const f = fakeIo({ 'bad.csv': 'id,diameter_mm,thickness_mm,peakLoad_kN\nA,abc,27,10\n' });
-    expect(run(['lab', 'bad.csv'], f.io)).toBe(2);
+    expect(await run(['lab', 'bad.csv'], f.io)).toBe(2);
     expect(f.err()).toMatch(/row 2/);
     expect(f.err()).toContain('diameter_mm');
   });
-  it('an unknown rock class exits 2', () => {
+  it('an unknown rock class exits 2', async () => {
     const f = fakeIo({ 'lab.csv': csv });
-    expect(run(['lab', 'lab.csv', '--rock', 'basaltic'], f.io)).toBe(2);
+    expect(await run(['lab', 'lab.csv', '--rock', 'basaltic'], f.io)).toBe(2);
   });
 });
 
-describe('npm run lamina from a fresh clone', () => {
-  it('runs the CLI through the package script with the exit codes of DESIGN.md', () => {
+describe('npm run lamina', () => {
+  it('builds and runs the CLI through the package script with the exit codes of DESIGN.md', async () => {
     const ok = spawnSync('npm', ['run', '-s', 'lamina', '--', 'check', presetFiles()[0], '--json'], { encoding: 'utf8' });
     expect([0, 1]).toContain(ok.status);
     expect(JSON.parse(ok.stdout).schema).toBe('lamina-report/2');
     const help = execFileSync('npm', ['run', '-s', 'lamina', '--', '--help'], { encoding: 'utf8' });
     expect(help).toContain('licensed engineer');
-  }, 60_000);
+  }, 120_000);
 });

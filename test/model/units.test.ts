@@ -11,6 +11,7 @@ import {
   unitLabel,
   type Quantity,
 } from '../../src/model/units';
+import { create, createUnitDependencies, unitDependencies } from 'mathjs';
 import { expectClose } from '../helpers/expect-close';
 
 // METHODS §13 factors: 1 psi = 6894.757 Pa; 1 lbf/ft³ = 0.157087 kN/m³; 1 ft = 0.3048 m;
@@ -131,6 +132,18 @@ describe('display unit systems', () => {
     ['deflection', 25.4, 1], // 25.4 mm = 1 in
   ] as Array<[Quantity, number, number]>)('%s: toDisplay(%d in file units, "US") is %d', (quantity, fileValue, usValue) => {
     expectClose(toDisplay(fileValue, quantity, 'US'), usValue, 5e-5); // check values carry 5–6 digits
+  });
+
+  it('each plain display factor equals the mathjs conversion of the same units (registry library) to 1e-9', () => {
+    // units.ts formats without mathjs; the factors must agree with mathjs's ft, in, lbf, psi.
+    const m = create({ unitDependencies, createUnitDependencies }, {});
+    m.createUnit('psf', '1 lbf/ft^2');
+    m.createUnit('ksi', '1000 psi');
+    for (const q of Object.keys(QUANTITIES) as Quantity[]) {
+      const { file, US } = QUANTITIES[q];
+      // 1e-9: mathjs stores psi rounded to 6894.75729 Pa (9 digits); units.ts derives it from lbf and in.
+      expectClose(toDisplay(1, q, 'US'), m.unit(1, file).toNumber(US), 1e-9);
+    }
   });
 
   it('SI display units are the file units (factor 1)', () => {

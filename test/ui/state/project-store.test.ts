@@ -42,7 +42,7 @@ function deps(extra: Partial<StoreDeps> = {}) {
     calls: { analyse: 0, chart: [] },
     validate,
     analyse: (p) => { d.calls.analyse++; return analyse(p); },
-    spanCurve: (p) => ({ spans_m: [1], fs: {} as never, targets: {} as never, currentSpan_m: p.opening.span_m }),
+    spanCurve: (p) => ({ spans_m: [1], fs: {} as never, targets: {} as never, counts: {} as never, currentSpan_m: p.opening.span_m }),
     designChart: (_p, layer) => { d.calls.chart.push(layer); return { layer } as never; },
     minimumThickness: () => 0.3,
     storage: {
