@@ -15,6 +15,7 @@ import { SOURCES, TraceBuilder } from './trace';
 import { beamCoefficients } from '../mechanics/beam';
 import { empiricalReport, supportReport } from './support-report';
 import { suspensionOf } from './support';
+import { supportNeeded } from './support-needed';
 
 const MPa = 1e-6;
 const kPa = 1e-3;
@@ -137,7 +138,9 @@ export function analyse(project: Project): Analysis {
     checks,
     governing,
     maxSpan_m: maxSpan,
-    support: supportReport(project, p, state, trace, warnings, { needed: null, reason: null }),
+    // The support needed is searched only where the project asks about support (bolts or standing support given).
+    support: supportReport(project, p, state, trace, warnings,
+      project.support.bolts !== null || project.support.standing_kPa > 0 ? supportNeeded(project) : { needed: null, reason: null }),
     empirical: empiricalReport(project, p, state, trace),
     warnings,
     trace: trace.entries,
