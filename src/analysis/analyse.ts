@@ -138,14 +138,24 @@ export function analyse(project: Project): Analysis {
     checks,
     governing,
     maxSpan_m: maxSpan,
-    // The support needed is searched only where the project asks about support (bolts or standing support given).
-    support: supportReport(project, p, state, trace, warnings,
-      project.support.bolts !== null || project.support.standing_kPa > 0 ? supportNeeded(project) : { needed: null, reason: null }),
+    // The support needed is a separate search (`withSupportNeeded`): the plain analysis stays one pass.
+    support: supportReport(project, p, state, trace, warnings, { needed: null, reason: null }),
     empirical: empiricalReport(project, p, state, trace),
     warnings,
     trace: trace.entries,
   };
   return { report, layers: details, groups, separations };
+}
+
+/**
+ * The analysis with `report.support.needed` filled by the searches of `support-needed.ts`
+ * (METHODS §12): for the CLI's support command and the report's support section.
+ */
+export function analyseWithSupportNeeded(project: Project): Analysis {
+  const a = analyse(project);
+  const n = supportNeeded(project);
+  const support = a.report.support ?? { bolts: null, needed: null, neededReason: null };
+  return { ...a, report: { ...a.report, support: { ...support, needed: n.needed, neededReason: n.reason } } };
 }
 
 export function analyseProject(project: Project): Report {

@@ -7,6 +7,9 @@
  * (c) for the given spacing, capacity and action, the shortest bolt length in 0.1 m steps
  *     (from the anchorage + 0.1 m up to the strata thickness);
  * (d) the largest span with the support as given (to 1 mm, cap 100 m).
+ * Strength chains are held at the current-span values through every search (as the span
+ * finder does, METHODS §11). The span search samples 32 spans (not 64) and bisects to 1 cm;
+ * the spacing is found to 5 mm (bolt patterns are set out to the centimetre).
  * "Passes" means: no counted row of the check table is below its target (`allCountedMeet`).
  * Where the unsupported roof (no bolts, no standing support) already passes, nothing is
  * searched: `needed` is null with the reason "no support needed". Where a search finds
@@ -20,21 +23,25 @@ import { allCountedMeet, checkTable } from './check-table';
 import { MODE_NAME } from './check-labels';
 import { evaluate } from './evaluate';
 import { projectToSI } from './inputs';
-import { SPAN_CAP_M, SPAN_TOLERANCE_M } from './span-finder';
+import type { StrengthChain } from '../strength/chain';
+import { SPAN_CAP_M } from './span-finder';
 
 export const NO_SUPPORT_NEEDED = 'no support needed';
 
 /** Largest standing pressure tried, Pa (10 MPa: far beyond any prop or crib). */
 const PRESSURE_MAX = 10e6;
 
-function rowsOf(project: Project): CheckRow[] {
+/** Strength chains held fixed through a search (they depend on the span only; METHODS §11 holds them at the current span). */
+type Chains = StrengthChain[] | undefined;
+
+function rowsOf(project: Project, chains?: Chains): CheckRow[] {
   const p = projectToSI(project);
-  return checkTable(p, evaluate(p));
+  return checkTable(p, evaluate(p, chains ? { chains } : {}));
 }
 
-/** True when every counted check of the project meets its target. */
-export function supportPasses(project: Project): boolean {
-  return allCountedMeet(rowsOf(project));
+/** True when every counted check of the project meets its target (strength chains recomputed unless given). */
+export function supportPasses(project: Project, chains?: Chains): boolean {
+  return allCountedMeet(rowsOf(project, chains));
 }
 
 const withStanding = (project: Project, kPa: number): Project => ({ ...project, support: { ...project.support, standing_kPa: kPa } });
@@ -66,9 +73,10 @@ export function supportNeeded(project: Project): SupportNeeded {
   const bare: Project = { ...project, support: { standing_kPa: 0, bolts: null } };
   if (supportPasses(bare)) return { needed: null, reason: NO_SUPPORT_NEEDED };
   const reasons: string[] = [];
+  const chains = evaluate(projectToSI(project)).layers.map((l) => l.chain);
 
   // (a) standing support, bolts as given.
-  const pa = smallestStandingPressure((pr) => supportPasses(withStanding(project, pr / 1e3)), { max: PRESSURE_MAX });
+  const pa = smallestStandingPressure((pr) => supportPasses(withStanding(project, pr / 1e3), chains), { max: PRESSURE_MAX });
   if (pa === null) reasons.push(cannotFixSentence(withStanding(project, PRESSURE_MAX / 1e3), 'Standing support up to 10 MPa'));
 
   // (b), (c) need a pattern to vary.
@@ -78,19 +86,19 @@ export function supportNeeded(project: Project): SupportNeeded {
   if (bolts === null) {
     reasons.push('No bolt pattern given: enter a bolt length, capacity and action to size the spacing and the length.');
   } else {
-    spacing = largestSquareSpacing((s) => supportPasses(withBolts(project, { spacingAcross_m: s, spacingAlong_m: s })));
+    spacing = largestSquareSpacing((s) => supportPasses(withBolts(project, { spacingAcross_m: s, spacingAlong_m: s }), chains), { tolerance: 5e-3 });
     if (spacing === null) reasons.push(cannotFixSentence(withBolts(project, { spacingAcross_m: 0.3, spacingAlong_m: 0.3 }), 'Bolts at 0.3 m spacing'));
     const strata = project.layers.reduce((t, l) => t + l.thickness_m, 0);
     const min = Math.round((bolts.anchorage_m + 0.1) * 10) / 10;
     if (min <= strata) {
-      length = shortestBoltLength((L) => supportPasses(withBolts(project, { length_m: L })), { min, max: strata });
+      length = shortestBoltLength((L) => supportPasses(withBolts(project, { length_m: L }), chains), { min, max: strata });
     }
     if (length === null) reasons.push(cannotFixSentence(withBolts(project, { length_m: strata }), `Bolts ${min}–${+strata.toPrecision(4)} m long (up to the strata thickness)`));
   }
 
   // (d) the largest span with the support as given.
   const cap = SPAN_CAP_M;
-  const span = largestPassingSpan((s) => (supportPasses(withSpan(project, s)) ? 1 : 0), { cap, tolerance: SPAN_TOLERANCE_M });
+  const span = largestPassingSpan((s) => (supportPasses(withSpan(project, s), chains) ? 1 : 0), { cap, tolerance: 1e-2, samples: 32 });
   return {
     needed: { standing_kPa: pa === null ? null : pa / 1e3, boltSpacing_m: spacing, boltLength_m: length, maxSpan_m: span > 0 ? span : null, reasons },
     reason: null,

@@ -11,7 +11,7 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { analyse } from '../../src/analysis/analyse';
+import { analyse, analyseWithSupportNeeded } from '../../src/analysis/analyse';
 import { NO_SUPPORT_NEEDED, supportNeeded, supportPasses } from '../../src/analysis/support-needed';
 import { readProjectText } from '../../src/model/project-file';
 import { defaultProject } from '../../src/model/defaults';
@@ -52,7 +52,8 @@ describe('support needed — the coal-room demo, bolted', () => {
   });
 
   it('the report carries the search; a roof that passes unsupported needs none', () => {
-    expect(analyse(bolted(7)).report.support?.needed?.boltSpacing_m).toBeCloseTo(Math.sqrt(100 / 18.75), 2);
+    expect(analyse(bolted(7)).report.support?.needed).toBe(null);
+    expect(analyseWithSupportNeeded(bolted(7)).report.support?.needed?.boltSpacing_m).toBeCloseTo(Math.sqrt(100 / 18.75), 2);
     const fine = { ...defaultProject(), opening: { ...defaultProject().opening, span_m: 2 }, support: { standing_kPa: 0, bolts: pattern({ length_m: 0.45, anchorage_m: 0.1 }) } };
     expect(supportPasses({ ...fine, support: { standing_kPa: 0, bolts: null } })).toBe(true);
     expect(supportNeeded(fine)).toEqual({ needed: null, reason: NO_SUPPORT_NEEDED });

@@ -7,6 +7,7 @@ import { benchPlate } from './plate.bench';
 import { benchAnalysis } from './analysis.bench';
 import { benchCli } from './cli.bench';
 import { benchUncertainty } from './uncertainty.bench';
+import { benchSupport } from './support.bench';
 import type { BenchResult } from './types';
 
 const groups: [string, () => Promise<BenchResult[]>][] = [
@@ -15,6 +16,7 @@ const groups: [string, () => Promise<BenchResult[]>][] = [
   ['analysis', benchAnalysis],
   ['command line', benchCli],
   ['uncertainty', benchUncertainty],
+  ['support needed', benchSupport],
 ];
 
 // The browser benchmark (edit → results, bundle size) builds the app and starts chromium.
