@@ -6,11 +6,11 @@
  */
 import type { LayerReport, Project, Report, VoussoirReport, Warning } from '../model/types';
 import type { Analysis, GroupDetail, LabDetail, LayerDetail, StrengthStep } from './types';
-import { evaluate, type LayerState, type State } from './evaluate';
+import { evaluate, plateAspect, type LayerState, type State } from './evaluate';
 import { projectToSI, type LayerSI, type ProjectSI } from './inputs';
 import { allCountedMeet, BLOCK_RATIO, checkTable, DEEP_BEAM_RATIO, governingOf } from './check-table';
 import { MODE_SHORT } from './check-labels';
-import { maxSpans, spanFsFunction, SPAN_CAP_M } from './span-finder';
+import { maxSpans, spanFsFunction, SPAN_CAP_M, SPAN_FLOOR_M } from './span-finder';
 import { SOURCES, TraceBuilder } from './trace';
 import { beamCoefficients } from '../mechanics/beam';
 import { empiricalReport, supportReport } from './support-report';
@@ -96,7 +96,9 @@ export function analyse(project: Project): Analysis {
       SOURCES.lamina,
       (value >= SPAN_CAP_M
         ? `The target holds at every span up to the ${SPAN_CAP_M} m search cap.`
-        : `Largest span with the ${MODE_SHORT[mode]} target met in every layer in which it counts at the current span, by bracketing and bisection to 1 mm; all else fixed.`) +
+        : value === 0
+          ? `The ${MODE_SHORT[mode]} target is not met at any span down to ${SPAN_FLOOR_M * 1e3} mm, the smallest span searched.`
+          : `Largest span with the ${MODE_SHORT[mode]} target met in every layer in which it counts at the current span, by bracketing and bisection to 1 mm; all else fixed.`) +
         (mode === 'tension' ? ' Strengths held at the current-span values; a layer with cross-joints is limited to its joint spacing (beyond it the layer is cracked).' : '') +
         (p.type === 'slab' ? ' Slab: the aspect ratio is held fixed.' : '') +
         (p.type === 'intersection' ? ' Intersection: the value is the entry width w1, with w2/w1 held and the diagonal analysed.' : ''),
@@ -118,6 +120,13 @@ export function analyse(project: Project): Analysis {
       code: 'HORIZONTAL_STRESS_VOUSSOIR',
       path: 'loads.horizontalStress_MPa',
       message: `The voussoir model (Diederichs & Kaiser 1999) has no in-situ horizontal stress. Lamina adds σh = ${round(p.horizontalStress * MPa)} MPa to the arch thrust in the crushing check (demand fc + σh) and gives it no credit in sliding or snap-through, which may relax once the roof cracks (METHODS §3a).`,
+    });
+  }
+  if (p.type === 'slab' && p.length !== null && p.length / p.span > plateAspect(p)) {
+    warnings.push({
+      code: 'SLAB_STRIP',
+      path: 'opening.length_m',
+      message: `Slab: length/span ${round(p.length / p.span)} is above ${plateAspect(p)}; the plate is solved at length/span ${plateAspect(p)}, where it has reached its plane-strain strip limit (β and α change by less than 0.05 % beyond it).`,
     });
   }
   if (p.type === 'slab') {
@@ -580,7 +589,9 @@ function plateReport(base: string, layer: LayerSI, ls: LayerState, p: ProjectSI,
   const pl = ls.plate;
   if (!pl) return null;
   const c = pl.coefficients;
-  const note = `β, α from Lamina's plate solution for b/a = ${round((p.length ?? p.span) / p.span)}, ${p.ends} edges, ν = ${layer.poisson} (${c.method}; estimated error ${(c.errorEstimate * 100).toFixed(2)} %).`;
+  const ratio = (p.length ?? p.span) / p.span;
+  const strip = ratio > plateAspect(p) ? ` (solved at b/a = ${plateAspect(p)}: a longer plate has reached its plane-strain strip limit)` : '';
+  const note = `β, α from Lamina's plate solution for b/a = ${round(ratio)}${strip}, ${p.ends} edges, ν = ${layer.poisson} (${c.method}; estimated error ${(c.errorEstimate * 100).toFixed(2)} %).`;
   trace.add(`${base}.plate.beta`, `Plate stress coefficient β, ${layer.name}`, 'beta', { beta: [c.beta, ''] }, c.beta, '', SOURCES.plate, note);
   trace.add(`${base}.plate.alpha`, `Plate deflection coefficient α, ${layer.name}`, 'alpha', { alpha: [c.alpha, ''] }, c.alpha, '', SOURCES.plate, note);
   trace.add(`${base}.plate.maxTension_MPa`, `Maximum net plate tension, ${layer.name}`, 'beta * q * a^2 / t^2 - sigma_h',

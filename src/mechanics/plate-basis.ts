@@ -122,6 +122,19 @@ function solveSmall(A: number[][], rhs: number[]): number[] {
  */
 export function constrainedBasis(ends: readonly [EndFixity, EndFixity], count: number, even: boolean): Basis1D {
   if (!(Number.isInteger(count) && count >= 1)) throw new RangeError(`basis size must be an integer ≥ 1, got ${count}`);
+  const key = `${ends[0]},${ends[1]}|${count}|${even}`;
+  const hit = basisCache.get(key);
+  if (hit) return hit;
+  const basis = buildBasis(ends, count, even);
+  if (basisCache.size >= 512) basisCache.delete(basisCache.keys().next().value as string);
+  basisCache.set(key, basis);
+  return basis;
+}
+
+/** Bases already built (they depend only on the ends, the size and the parity); frozen. */
+const basisCache = new Map<string, Basis1D>();
+
+function buildBasis(ends: readonly [EndFixity, EndFixity], count: number, even: boolean): Basis1D {
   if (even && ends[0] !== ends[1]) throw new RangeError('an even basis needs like ends');
   const rows: Array<{ side: -1 | 1; order: 0 | 1 }> = [];
   for (const [side, fix] of [[-1, ends[0]], [1, ends[1]]] as const) {
@@ -144,5 +157,5 @@ export function constrainedBasis(ends: readonly [EndFixity, EndFixity], count: n
     coef.push([1, ...c]);
   }
   const degree = index[index.length - 1] + m;
-  return { ends, index, coef, degree };
+  return Object.freeze({ ends, index, coef, degree });
 }

@@ -37,7 +37,7 @@
  *     plateCoefficients({ aspect: 2, edges: 'simple', poisson: 0.3 }).alpha // ≈ 0.1106
  */
 import type { EndFixity } from './plate-basis';
-import { type PlateSupports, type RitzPlate, plateAtPoint, plateFieldAt, solvePlateRitz } from './plate-ritz';
+import { type PlateFieldValues, type PlateSupports, type RitzPlate, plateAtPoint, plateFieldAt, solvePlateRitz } from './plate-ritz';
 
 export type EdgeSupport = 'clamped' | 'simple' | 'free';
 
@@ -93,7 +93,8 @@ export interface PlateCoefficients {
 }
 
 const FIXITY: Record<EdgeSupport, EndFixity> = { free: 0, simple: 1, clamped: 2 };
-const MAX_ASPECT = 100;
+/** Largest b/a solved; a longer plate has reached its plane-strain strip limit (see `stripAspect`). */
+export const MAX_ASPECT = 100;
 const MAX_LEVEL = 22;
 const FIRST_LEVEL = 3;
 const MAX_UNKNOWNS = 800;
@@ -137,11 +138,14 @@ function counts(supports: PlateSupports, aspect: number, level: number): [number
   return [cx, cy];
 }
 
-/** Larger principal moment magnitude and its sign (+1 sagging / bottom tension, −1 hogging / top). */
-function principal(mx: number, my: number, mxy: number): [number, number] {
-  const mean = (mx + my) / 2;
-  const radius = Math.hypot((mx - my) / 2, mxy);
-  return [Math.abs(mean) + radius, mean >= 0 ? 1 : -1];
+/** Larger principal moment magnitude |mean| + radius (allocation-free: the search's hot path). */
+function principalValue(mx: number, my: number, mxy: number): number {
+  return Math.abs((mx + my) / 2) + Math.hypot((mx - my) / 2, mxy);
+}
+
+/** Sign of the larger principal moment: +1 sagging (bottom tension), −1 hogging (top). */
+function principalSign(mx: number, my: number): number {
+  return mx + my >= 0 ? 1 : -1;
 }
 
 type Measure = (sol: RitzPlate, x: number, y: number) => number;
@@ -149,7 +153,7 @@ type Measure = (sol: RitzPlate, x: number, y: number) => number;
 const scratch = new Float64Array(4);
 const stressAt: Measure = (sol, x, y) => {
   plateAtPoint(sol, x, y, scratch);
-  return principal(scratch[1], scratch[2], scratch[3])[0];
+  return principalValue(scratch[1], scratch[2], scratch[3]);
 };
 const deflectionAt: Measure = (sol, x, y) => {
   plateAtPoint(sol, x, y, scratch);
@@ -168,13 +172,18 @@ function grid(n: number, length: number): number[] {
  */
 function maximise(sol: RitzPlate, measure: Measure, kind: 'stress' | 'deflection', tie: number): { value: number; x: number; y: number } {
   const b = sol.aspect;
-  const ny = 25;
-  const nx = 2 * Math.ceil(12 * Math.sqrt(b)) + 1;
-  const xs = grid(nx, b);
-  const ys = grid(ny, 1);
-  const f = plateFieldAt(sol, xs, ys);
+  // Where both ends of a side are alike the field is symmetric about the middle of that side:
+  // scan one half (the middle line is a node, and the spacing is that of the full grid).
+  const symX = sol.bx.ends[0] === sol.bx.ends[1];
+  const symY = sol.by.ends[0] === sol.by.ends[1];
+  const nxFull = 2 * Math.ceil(12 * Math.sqrt(b)) + 1;
+  const nx = symX ? (nxFull + 1) / 2 : nxFull;
+  const ny = symY ? 13 : 25;
+  const xs = grid(nx, symX ? b / 2 : b);
+  const ys = grid(ny, symY ? 0.5 : 1);
+  const f = fieldOf(sol, xs, ys, `search ${nx}×${ny}`);
   const vals = new Float64Array(nx * ny);
-  for (let k = 0; k < vals.length; k++) vals[k] = kind === 'stress' ? principal(f.mx[k], f.my[k], f.mxy[k])[0] : Math.abs(f.w[k]);
+  for (let k = 0; k < vals.length; k++) vals[k] = kind === 'stress' ? principalValue(f.mx[k], f.my[k], f.mxy[k]) : Math.abs(f.w[k]);
   const peaks: number[] = [];
   for (let r = 0; r < ny; r++) {
     for (let s = 0; s < nx; s++) {
@@ -197,8 +206,8 @@ function maximise(sol: RitzPlate, measure: Measure, kind: 'stress' | 'deflection
     let x = xs[k % nx];
     let y = ys[Math.floor(k / nx)];
     let v = vals[k];
-    let hx = b / (nx - 1);
-    let hy = 1 / (ny - 1);
+    let hx = b / (nxFull - 1);
+    let hy = 1 / 24;
     while (hy > 2e-5) {
       let moved = false;
       for (const [dx, dy] of [[hx, 0], [-hx, 0], [0, hy], [0, -hy]]) {
@@ -246,12 +255,90 @@ interface LevelResult {
   level: number;
 }
 
+/**
+ * Solved Ritz systems that do not depend on ν, by aspect, edges and level. With every edge
+ * clamped or simply supported the basis vanishes on the edges, so ∫X″X = −∫X′X′ exactly and
+ * the ν terms of the stiffness, ν(B⊗Bᵀ + Bᵀ⊗B) − 2ν A1⊗A1, cancel: the deflection is the same
+ * for every ν (the known result for plates with w = 0 on straight edges; Timoshenko &
+ * Woinowsky-Krieger 1959, §10) and only the moments change with ν. Layers of one slab that
+ * differ only in ν then share one solve per level. Bounded (oldest dropped first).
+ */
+const solutions = new Map<string, RitzPlate>();
+const SOLUTION_CACHE_SIZE = 64;
+/** A ν-specific view of a shared solution → the shared (ν = 0) solution. */
+const baseOf = new WeakMap<RitzPlate, RitzPlate>();
+/** Fields of a shared solution at ν = 0 on a named grid, and its deflection maximum per tie. */
+const baseFields = new WeakMap<RitzPlate, Map<string, PlateFieldValues>>();
+const baseDeflection = new WeakMap<RitzPlate, Map<number, { value: number; x: number; y: number }>>();
+
+/**
+ * The field on the grid xs × ys. For a view of a shared solution it is built from the shared
+ * ν = 0 field, computed once per grid: with Mx⁰ = −w_xx, My⁰ = −w_yy, Mxy⁰ = −w_xy,
+ * Mx = Mx⁰ + ν My⁰, My = My⁰ + ν Mx⁰, Mxy = (1 − ν) Mxy⁰ (same w for every ν, see `solutions`).
+ */
+function fieldOf(sol: RitzPlate, xs: number[], ys: number[], grid: string): PlateFieldValues {
+  const base = baseOf.get(sol);
+  if (!base) return plateFieldAt(sol, xs, ys);
+  let fields = baseFields.get(base);
+  if (!fields) {
+    fields = new Map();
+    baseFields.set(base, fields);
+  }
+  let f0 = fields.get(grid);
+  if (!f0) {
+    f0 = plateFieldAt(base, xs, ys);
+    fields.set(grid, f0);
+  }
+  const nu = sol.poisson;
+  const n = f0.w.length;
+  const mx = new Float64Array(n);
+  const my = new Float64Array(n);
+  const mxy = new Float64Array(n);
+  for (let k = 0; k < n; k++) {
+    mx[k] = f0.mx[k] + nu * f0.my[k];
+    my[k] = f0.my[k] + nu * f0.mx[k];
+    mxy[k] = (1 - nu) * f0.mxy[k];
+  }
+  return { w: f0.w, mx, my, mxy };
+}
+
 function solveLevel(aspect: number, poisson: number, supports: PlateSupports, level: number, tie: number): LevelResult {
   const [cx, cy] = counts(supports, aspect, level);
-  const sol = solvePlateRitz(aspect, poisson, supports, cx, cy);
+  const shareable = [...supports.x, ...supports.y].every((e) => e !== 0);
+  let sol: RitzPlate;
+  if (shareable) {
+    const key = `${aspect}|${supports.x.join(',')}|${supports.y.join(',')}|${level}`;
+    let base = solutions.get(key);
+    if (!base) {
+      base = solvePlateRitz(aspect, 0, supports, cx, cy);
+      if (solutions.size >= SOLUTION_CACHE_SIZE) solutions.delete(solutions.keys().next().value as string);
+      solutions.set(key, base);
+    }
+    sol = { ...base, poisson };
+    baseOf.set(sol, base);
+  } else {
+    sol = solvePlateRitz(aspect, poisson, supports, cx, cy);
+  }
   const stressMax = maximise(sol, stressAt, 'stress', tie);
-  const wMax = maximise(sol, deflectionAt, 'deflection', tie);
+  const wMax = deflectionMaximum(sol, tie);
   return { sol, beta: 6 * stressMax.value, alpha: 12 * (1 - poisson * poisson) * wMax.value, stressMax, level };
+}
+
+/** Largest deflection; the same for every view of a shared solution (w does not depend on ν). */
+function deflectionMaximum(sol: RitzPlate, tie: number): { value: number; x: number; y: number } {
+  const base = baseOf.get(sol);
+  if (!base) return maximise(sol, deflectionAt, 'deflection', tie);
+  let byTie = baseDeflection.get(base);
+  if (!byTie) {
+    byTie = new Map();
+    baseDeflection.set(base, byTie);
+  }
+  let hit = byTie.get(tie);
+  if (!hit) {
+    hit = maximise(base, deflectionAt, 'deflection', tie);
+    byTie.set(tie, hit);
+  }
+  return hit;
 }
 
 /**
@@ -275,10 +362,13 @@ function edgeKey(edges: PlateInput['edges']): string {
 }
 
 const cache = new Map<string, PlateCoefficients>();
+/** Results kept (oldest dropped first), so that a long run over many slabs stays bounded. */
+const CACHE_SIZE = 512;
 
-/** Empty the result cache (for benchmarks and tests). */
+/** Empty the result caches (for benchmarks and tests). */
 export function clearPlateCache(): void {
   cache.clear();
+  solutions.clear();
 }
 
 /** Plate coefficients for the input (see the module doc); cached, result frozen. */
@@ -313,21 +403,29 @@ export function plateCoefficients(input: PlateInput): PlateCoefficients {
 
   const { sol, stressMax } = cur;
   const at = plateFieldAt(sol, [stressMax.x], [stressMax.y]);
-  const face = principal(at.mx[0], at.my[0], at.mxy[0])[1] > 0 ? 'bottom' : 'top';
+  const face = principalSign(at.mx[0], at.my[0]) > 0 ? 'bottom' : 'top';
   const centre = plateFieldAt(sol, [aspect / 2], [0.5]);
 
-  const fny = 21;
-  const fnx = Math.min(401, Math.round(20 * aspect) + 1);
-  const fx = grid(fnx, aspect);
-  const fy = grid(fny, 1);
-  const f = plateFieldAt(sol, fx, fy);
-  const values: number[] = new Array(fnx * fny);
-  const faces: Array<'top' | 'bottom'> = new Array(fnx * fny);
-  for (let k = 0; k < values.length; k++) {
-    const [m, sign] = principal(f.mx[k], f.my[k], f.mxy[k]);
-    values[k] = 6 * m;
-    faces[k] = sign > 0 ? 'bottom' : 'top';
-  }
+  // The stress field for contour plots, built on first use (the checks need only β and α).
+  let field: PlateField | null = null;
+  const buildField = (): PlateField => {
+    const fny = 21;
+    const fnx = Math.min(401, Math.round(20 * aspect) + 1);
+    const fx = grid(fnx, aspect);
+    const fy = grid(fny, 1);
+    const f = fieldOf(sol, fx, fy, `output ${fnx}×${fny}`);
+    const values: number[] = new Array(fnx * fny);
+    const faces: Array<'top' | 'bottom'> = new Array(fnx * fny);
+    for (let k = 0; k < values.length; k++) {
+      values[k] = 6 * principalValue(f.mx[k], f.my[k], f.mxy[k]);
+      faces[k] = principalSign(f.mx[k], f.my[k]) > 0 ? 'bottom' : 'top';
+    }
+    return Object.freeze({
+      nx: fnx, ny: fny,
+      x: Object.freeze(fx) as number[], y: Object.freeze(fy) as number[],
+      values: Object.freeze(values) as number[], faces: Object.freeze(faces) as Array<'top' | 'bottom'>,
+    });
+  };
   const [cx, cy] = counts(supports, aspect, cur.level);
   const result: PlateCoefficients = {
     beta: cur.beta,
@@ -338,17 +436,17 @@ export function plateCoefficients(input: PlateInput): PlateCoefficients {
     betaCentre: 6 * centre.my[0],
     errorEstimate: eb,
     alphaErrorEstimate: ea,
-    field: Object.freeze({
-      nx: fnx, ny: fny,
-      x: Object.freeze(fx) as number[], y: Object.freeze(fy) as number[],
-      values: Object.freeze(values) as number[], faces: Object.freeze(faces) as Array<'top' | 'bottom'>,
-    }),
+    get field(): PlateField {
+      field ??= buildField();
+      return field;
+    },
     method:
       `Ritz energy method, Legendre basis ${cx} × ${cy} terms (long × short side, degree ${sol.bx.degree} × ${sol.by.degree}, ` +
       `${sol.unknowns} unknowns), level ${cur.level}; largest change over levels ${prev.level}–${cur.level}: β ${(100 * eb).toPrecision(2)}%, α ${(100 * ea).toPrecision(2)}%` +
       (eb > accuracy || ea > accuracy ? ` — NOT converged to ${accuracy}` : ''),
   };
   Object.freeze(result);
+  if (cache.size >= CACHE_SIZE) cache.delete(cache.keys().next().value as string);
   cache.set(key, result);
   return result;
 }

@@ -16,8 +16,10 @@ export interface SpanSearchOptions {
   cap?: number;
   /** Bisection stops when the bracket is narrower than this, m (default 1e-3). */
   tolerance?: number;
-  /** Number of grid samples (default 64, at least 2). */
+  /** Number of grid samples over cap/1000 … cap (default 64, at least 2). */
   samples?: number;
+  /** Smallest span tried, m (default 1e-3): below cap/1000 the grid goes on down to it. */
+  floor?: number;
 }
 
 export interface ValueSearchOptions {
@@ -57,19 +59,22 @@ function bisect(
 }
 
 /**
- * Largest s in (0, cap] with ratio(s) ≥ 1 (ratio = FS/target, already min over layers; a failed
- * or infeasible state returns 0). Brackets on a geometric grid cap/1000 … cap, scanned from the
- * top down, then bisects between the largest passing sample and the failing sample above it to
+ * Largest s in [floor, cap] with ratio(s) ≥ 1 (ratio = FS/target, already min over layers; a
+ * failed or infeasible state returns 0). Brackets on a geometric grid cap/1000 … cap, scanned
+ * from the top down and continued with the same step below cap/1000 down to `floor` (default
+ * 1 mm), then bisects between the largest passing sample and the failing sample above it to
  * `tolerance` (default 1e-3 m), returning the passing end. Returns cap when ratio(cap) ≥ 1, 0
- * when even the smallest grid span fails. SI: m. Source: METHODS §11 (bracketing and bisection).
+ * when it fails even at the floor (METHODS §11 v2: "0 only when it fails even at 1 mm").
+ * SI: m. Source: METHODS §11 (bracketing and bisection).
  *     largestPassingSpan((s) => (5 / s) ** 2) // ≈ 5 (within 1 mm, and ratio ≥ 1 there)
  */
 export function largestPassingSpan(
   ratio: (span: number) => number,
   options: SpanSearchOptions = {},
 ): number {
-  const { cap = 100, tolerance = 1e-3, samples = 64 } = options;
+  const { cap = 100, tolerance = 1e-3, samples = 64, floor = 1e-3 } = options;
   if (!(cap > 0 && cap < Infinity)) throw new RangeError(`cap must be > 0 m, got ${cap}`);
+  if (!(floor > 0 && floor <= cap)) throw new RangeError(`floor must be > 0 m and ≤ cap, got ${floor}`);
   checkOptions(tolerance, samples);
   if (passes(ratio(cap))) return cap;
   const lowest = cap / 10 ** SPAN_DECADES;
@@ -77,8 +82,15 @@ export function largestPassingSpan(
   let above = cap; // failing sample
   for (let i = samples - 2; i >= 0; i--) {
     const s = i === 0 ? lowest : lowest * step ** i;
+    if (s < floor) break;
     if (passes(ratio(s))) return bisect(ratio, s, above, tolerance);
     above = s;
+  }
+  // Below the grid: the same geometric step down to the floor.
+  for (let s = Math.min(above, lowest) / step; above > floor; s /= step) {
+    const x = Math.max(s, floor);
+    if (passes(ratio(x))) return bisect(ratio, x, above, Math.min(tolerance, x / 10));
+    above = x;
   }
   return 0;
 }

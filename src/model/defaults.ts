@@ -2,21 +2,22 @@
  * Default values for the project file (`*.lamina.json`, schema "lamina/2") and a sensible
  * starting project. Together with `validate.ts` this is the one source of truth for the schema.
  *
- * REQUIRED (refused when missing — nothing important is guessed):
+ * REQUIRED (refused when missing — nothing important is guessed; every bound, with its reason,
+ * is in `NUMBERS` in validate.ts):
  *   schema                         "lamina/2" ("lamina/1" is migrated first: `migrate.ts`)
  *   opening.type                   "beam" | "slab" | "cantilever" | "intersection"
- *   opening.span_m                 > 0 m (intersection: the narrower entry width w1)
+ *   opening.span_m                 0.01–1000 m (intersection: the narrower entry width w1)
  *   opening.length_m               slab: long side ≥ span_m; intersection: the wider entry
- *                                  width w2 ≥ span_m (ignored with a warning otherwise)
+ *                                  width w2 ≥ span_m; ≤ 100 000 m (ignored with a warning otherwise)
  *   opening.ends                   "clamped" | "simple" for a beam or a slab (for a cantilever it
  *                                  is ignored and defaults to "clamped"; for an intersection it
  *                                  defaults to "simple": pillar corners give little fixity)
  *   layers                         non-empty array, layers[0] = immediate roof
- *   layers[i].thickness_m          > 0 m
+ *   layers[i].thickness_m          0.001–1000 m
  *   layers[i].unitWeight_kNm3      5..60 kN/m³
- *   layers[i].youngModulus_GPa     > 0 GPa
- *   layers[i].ucs_MPa              > 0 MPa
- *   layers[i].tensile              a value_MPa (≥ 0) or at least one usable specimen
+ *   layers[i].youngModulus_GPa     0.001–10 000 GPa
+ *   layers[i].ucs_MPa              0.01–1000 MPa
+ *   layers[i].tensile              a value_MPa (0–100; 0 = none) or at least one usable specimen
  *                                  (valid, thickness ≤ diameter)
  *
  * OPTIONAL (value used when the key is omitted):

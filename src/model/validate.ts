@@ -8,16 +8,18 @@
  * got: `layers[1].thickness_m: must be > 0 m, got -0.2`. Errors refuse the project; warnings
  * flag unknown keys (ignored), implausible but legal values, and judgement defaults.
  *
- * Limits (refused outside): thickness > 0 m; span > 0 m; unit weight 5..60 kN/m³ (from light
- * coal/evaporite ≈ 12 to dense ores ≈ 45, with margin; common practice); E > 0 GPa;
- * Poisson 0 ≤ ν < 0.5; UCS > 0 MPa; tensile value ≥ 0 MPa (0 = no tensile strength, e.g. a
- * fractured mass); surcharge, standing support ≥ 0 kPa; horizontal stress any finite value in MPa
- * (compression positive); slab length and intersection entry width w2 ≥ span; slab edges not
- * free on both pairs; specimen dimensions and peak load > 0;
- * JCond89 0..30; RQD 0..100; fracture frequency ≥ 0 /m; cross-joint spacing > 0 m or null;
- * joint friction 0 ≤ φ < 90°; mi > 0; disturbance 0..1; FS targets > 0;
- * deflection limit ratio > 0; at most 100 layers and 1000 specimens per layer; bolts and Q ratings
- * within BOLT_BOUNDS and Q_BOUNDS below (a bolt no longer than the strata, anchorage < length).
+ * Limits (refused outside; the reasons are in the doc block of `NUMBERS` below): span
+ * 0.01–1000 m; slab length and intersection entry width w2 0.01–100 000 m and ≥ span (a slab
+ * longer than 20 spans is analysed as its plane-strain strip); slab edges not free on both pairs; thickness 0.001–1000 m; unit weight 5–60 kN/m³; E 0.001–10 000
+ * GPa; Poisson 0 ≤ ν < 0.5; UCS 0.01–1000 MPa; tensile value 0–100 MPa (0 = no tensile
+ * strength, e.g. a fractured mass: FS tension 0 wherever the layer is in net tension);
+ * surcharge, standing support 0–100 000 kPa; horizontal stress −1000…1000 MPa (compression positive);
+ * specimen diameter and thickness 1–1000 mm, peak load 0.001–10 000 kN; cross-joint spacing
+ * 0.001–10 000 m or null; fracture frequency 0–1000 /m; JCond89 0–30; RQD 0–100; joint
+ * friction 0 ≤ φ < 90°; mi 1–100; disturbance 0–1; FS targets 0.1–100; deflection limit ratio
+ * 0.001–1; at most 100 layers and 1000 specimens per layer; bolts and Q ratings within
+ * BOLT_BOUNDS and Q_BOUNDS below (a bolt no longer than the strata, anchorage < length). The contract: every project
+ * accepted here analyses without throwing and with finite numbers (`npm run fuzz` checks it).
  * Keys `__proto__`, `constructor` and `prototype` are refused anywhere in the input.
  * Numbers must be JSON numbers (no numeric strings) and finite.
  *
@@ -159,7 +161,7 @@ const FORBIDDEN_KEYS = new Set(['__proto__', 'constructor', 'prototype']);
 
 type Raw = Record<string, unknown>;
 
-interface NumberRule {
+export interface NumberRule {
   /** Unit suffix for messages, with its leading space where one is wanted (' m', '°', ''). */
   unit: string;
   min?: number;
@@ -367,29 +369,55 @@ function scanForbidden(value: unknown, path: string, reader: Reader, seen: Set<o
   }
 }
 
-const NUMBERS = {
-  span: { unit: ' m', min: 0, minOpen: true },
-  length: { unit: ' m', min: 0, minOpen: true },
-  pressure: { unit: ' kPa', min: 0 },
-  horizontalStress: { unit: ' MPa' },
-  thickness: { unit: ' m', min: 0, minOpen: true },
+/**
+ * Hard bounds of every number in a project file: the contract between the validator and the
+ * kernels. Every value inside them analyses without throwing and gives finite results (the fuzz
+ * harness, `npm run fuzz`, checks this on random projects over the whole of these ranges);
+ * "implausible" warnings flag values inside them that are legal but unusual. The bounds are
+ * physically meaningful and generous (common practice unless a source is named):
+ * - span 0.01–1000 m: from a hand-sized gap to far beyond any roof; the span search stops at 100 m.
+ * - slab length 0.01–100 000 m (and ≥ span): a slab longer than 20 spans is analysed as its
+ *   plane-strain strip limit (METHODS §4, b/a → ∞).
+ * - thickness 0.001–1000 m: a 1 mm lamina to a 1 km massive unit; a floor keeps q s²/t² finite.
+ * - unit weight 5–60 kN/m³: light coal/evaporite ≈ 12 to dense ores ≈ 45, with margin.
+ * - Young's modulus 0.001–10 000 GPa: 1 MPa (a soil) to ten times diamond's ≈ 1 000 GPa.
+ * - Poisson's ratio 0 ≤ ν < 0.5: the thermodynamic range of an isotropic solid in bending.
+ * - UCS 0.01–1000 MPa: 10 kPa (a stiff soil) to about three times the strongest rock (≈ 350 MPa).
+ * - tensile value 0–100 MPa: 0 = no tensile strength (e.g. a fractured mass or an uncemented
+ *   sand, METHODS §10); rock Brazilian strengths stay below ≈ 40 MPa.
+ * - surcharge, support 0–100 000 kPa: 100 MPa is the vertical stress about 4 km down.
+ * - horizontal stress −1000…1000 MPa (compression positive): a kilometre-scale margin over any
+ *   measured in-situ stress (≲ 100 MPa).
+ * - specimen diameter, thickness 1–1000 mm: from a mini-disc to a 1 m block; peak load
+ *   0.001–10 000 kN: 1 N to far beyond any Brazilian test frame (≈ 500 kN).
+ * - cross-joint spacing 0.001–10 000 m; fracture frequency 0–1000 /m (one per mm).
+ * - RQD 0–100 %; JCond89 0–30 (Bieniawski 1989); joint friction 0 ≤ φ < 90°.
+ * - Hoek–Brown mi 1–100 (Hoek's tables span ≈ 4–35); disturbance D 0–1 (Hoek et al. 2002).
+ * - FS targets 0.1–100; deflection limit δ/t 0.001–1 (δ/t ≈ 0.25 is already ultimate).
+ */
+export const NUMBERS = {
+  span: { unit: ' m', min: 0.01, max: 1000 },
+  length: { unit: ' m', min: 0.01, max: 100_000 },
+  pressure: { unit: ' kPa', min: 0, max: 100_000 },
+  horizontalStress: { unit: ' MPa', min: -1000, max: 1000 },
+  thickness: { unit: ' m', min: 0.001, max: 1000 },
   unitWeight: { unit: ' kN/m³', min: 5, max: 60 },
-  modulus: { unit: ' GPa', min: 0, minOpen: true },
+  modulus: { unit: ' GPa', min: 0.001, max: 10_000 },
   poisson: { unit: '', min: 0, max: 0.5, maxOpen: true },
-  ucs: { unit: ' MPa', min: 0, minOpen: true },
-  tensile: { unit: ' MPa', min: 0 },
-  specimenSize: { unit: ' mm', min: 0, minOpen: true },
-  peakLoad: { unit: ' kN', min: 0, minOpen: true },
-  spacing: { unit: ' m', min: 0, minOpen: true },
-  frequency: { unit: ' /m', min: 0 },
+  ucs: { unit: ' MPa', min: 0.01, max: 1000 },
+  tensile: { unit: ' MPa', min: 0, max: 100 },
+  specimenSize: { unit: ' mm', min: 1, max: 1000 },
+  peakLoad: { unit: ' kN', min: 0.001, max: 10_000 },
+  spacing: { unit: ' m', min: 0.001, max: 10_000 },
+  frequency: { unit: ' /m', min: 0, max: 1000 },
   rqd: { unit: '', min: 0, max: 100 },
   jointCondition: { unit: '', min: 0, max: 30 },
   friction: { unit: '°', min: 0, max: 90, maxOpen: true },
-  mi: { unit: '', min: 0, minOpen: true },
+  mi: { unit: '', min: 1, max: 100 },
   disturbance: { unit: '', min: 0, max: 1 },
-  factor: { unit: '', min: 0, minOpen: true },
-  ratio: { unit: '', min: 0, minOpen: true },
-} satisfies Record<string, NumberRule>;
+  factor: { unit: '', min: 0.1, max: 100 },
+  ratio: { unit: '', min: 0.001, max: 1 },
+} as const satisfies Record<string, NumberRule>;
 
 /**
  * Check a raw parsed project and build the normalised `Project`, collecting every error and

@@ -104,8 +104,9 @@ const MPa = (x: number): string => `${+(x / 1e6).toPrecision(4)} MPa`;
  * Perras & Diederichs 2014) → characteristic (mean, or EN 1990 Annex D 5 % fractile) →
  * block (× (d_lab/d_eff)^0.18, Hoek & Brown 1980) and rock mass (× s·mi/mb, Hoek–Brown 2002,
  * GSI from RQD and JCond89) → design = min(block, mass) on the "rockMass" basis, block on the
- * "lab" basis (METHODS §10), or 0 when cross-jointed (common practice). SI in and out (m, Pa). Throws a RangeError when there is neither an accepted
- * specimen nor a value.
+ * "lab" basis (METHODS §10), or 0 when cross-jointed (common practice). SI in and out (m, Pa).
+ * A given value of 0 means no tensile strength: every strength is 0 and a NO_TENSILE_STRENGTH
+ * warning says so. Throws a RangeError when there is neither an accepted specimen nor a value.
  *     strengthChain({specimens: [], value: 3e6, method: 'brazilian', rockClass: 'sedimentary',
  *       characteristic: 'mean', thickness: 0.45, span: 6, crossJointSpacing: 8,
  *       fractureFrequency: 3, rqd: null, jointCondition: 20, ucs: 40e6, mi: 7, disturbance: 0})
@@ -115,8 +116,8 @@ export function strengthChain(input: StrengthChainInput): StrengthChain {
   const { specimens, value, method, rockClass, characteristic: rule } = input;
   const { thickness, span, crossJointSpacing, fractureFrequency, jointCondition, ucs, mi, disturbance } = input;
   if (!Array.isArray(specimens)) throw new RangeError('tensile.specimens must be an array');
-  if (value !== null && (!(value > 0) || !Number.isFinite(value))) {
-    throw new RangeError(`tensile value must be null or a finite number > 0 Pa, got ${value}`);
+  if (value !== null && (!(value >= 0) || !Number.isFinite(value))) {
+    throw new RangeError(`tensile value must be null or a finite number ≥ 0 Pa, got ${value}`);
   }
   if (method !== 'brazilian' && method !== 'direct') {
     throw new RangeError(`tensile method must be "brazilian" or "direct", got ${JSON.stringify(method)}`);
@@ -188,6 +189,13 @@ export function strengthChain(input: StrengthChainInput): StrengthChain {
       });
     }
     labDiameter = DEFAULT_LAB_DIAMETER_MM / 1000;
+    if (value === 0) {
+      warnings.push({
+        code: 'NO_TENSILE_STRENGTH',
+        path: 'tensile.value_MPa',
+        message: 'tensile strength 0 MPa: no tensile strength, so the design strength is 0 and FS tension is 0 wherever the layer is in net tension',
+      });
+    }
   } else {
     throw new RangeError('tensile: no accepted specimen and no value_MPa');
   }

@@ -6,6 +6,7 @@ import { benchVoussoir } from './voussoir.bench';
 import { benchPlate } from './plate.bench';
 import { benchAnalysis } from './analysis.bench';
 import { benchCli } from './cli.bench';
+import { benchWorstCase } from './worst-case.bench';
 import { benchUncertainty } from './uncertainty.bench';
 import { benchSupport } from './support.bench';
 import type { BenchResult } from './types';
@@ -15,6 +16,7 @@ const groups: [string, () => Promise<BenchResult[]>][] = [
   ['plate', benchPlate],
   ['analysis', benchAnalysis],
   ['command line', benchCli],
+  ['worst case (fuzz set)', () => benchWorstCase()],
   ['uncertainty', benchUncertainty],
   ['support needed', benchSupport],
 ];

@@ -45,10 +45,10 @@ describe('app: editing', () => {
     const { page, context } = await openApp(session.browser, session.url);
     await fieldFor(page, 'layers[0].thickness_m').fill('-0.2');
     const msg = page.locator('quantity-input[path="layers[0].thickness_m"] [role="alert"]');
-    await expect.poll(() => msg.textContent()).toContain('layers[0].thickness_m: must be > 0');
+    await expect.poll(() => msg.textContent()).toContain('layers[0].thickness_m: must be a number from 0.001 to 1000 m');
     expect(JSON.parse(await projectJson(page)).layers[0].thickness_m).toBe(0.5);
     // also on the fixed status line at the top, without the file-error box that would shift the sheet
-    expect(await page.locator('lamina-app .status-line').textContent()).toContain('Not applied — layers[0].thickness_m: must be > 0');
+    expect(await page.locator('lamina-app .status-line').textContent()).toContain('Not applied — layers[0].thickness_m: must be a number from 0.001 to 1000 m');
     expect(await page.locator('lamina-app .file-errors').count()).toBe(0);
     // typing the old value back clears the error
     await fieldFor(page, 'layers[0].thickness_m').fill('0.5');

@@ -24,11 +24,21 @@ describe('largestPassingSpan', () => {
     expect(largestPassingSpan(() => 3, { cap: 40 })).toBe(40);
   });
 
-  it('returns 0 when even the smallest grid span fails, and treats NaN as failing', () => {
+  it('returns 0 when it fails even at the 1 mm floor (METHODS §11 v2), and treats NaN as failing', () => {
     expect(largestPassingSpan(() => 0.999)).toBe(0);
     expect(largestPassingSpan(() => NaN)).toBe(0);
-    // Passing only below the smallest grid span (cap/1000 = 0.1 m): still 0.
-    expect(largestPassingSpan((s) => (s < 0.05 ? 2 : 0))).toBe(0);
+    // Passing only below the floor: 0.
+    expect(largestPassingSpan((s) => (s < 0.0009 ? 2 : 0))).toBe(0);
+    // Passing at exactly the floor: the floor.
+    expect(largestPassingSpan((s) => (s <= 0.001 ? 2 : 0))).toBe(0.001);
+  });
+
+  it('continues the bracket below cap/1000 down to 1 mm: a crossing at 0.05 m or 2 mm is found to 0.1 mm (METHODS §11 v2)', () => {
+    for (const edge of [0.05, 0.002]) {
+      const s = largestPassingSpan((x) => (x <= edge ? 2 : 0), { tolerance: 1e-4 });
+      expect(s).toBeLessThanOrEqual(edge);
+      expect(edge - s).toBeLessThanOrEqual(1e-4);
+    }
   });
 
   it('non-monotone ratio with a dip: passes below 3 m, fails 3–5 m, passes 5–8 m, fails above → 8 m (hand-built)', () => {

@@ -13,7 +13,7 @@ export const specimenArb = (usable: boolean) =>
       {
         id: fc.string({ maxLength: 8 }),
         diameter_mm: num(30, 120),
-        thickness_mm: num(0, 1, { min: true }),
+        thickness_mm: num(0.04, 1), // × diameter ≥ 30 mm: at least the 1 mm floor
         peakLoad_kN: num(0.1, 30),
         valid: usable ? fc.constant(true) : fc.boolean(),
       },

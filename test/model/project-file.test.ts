@@ -77,7 +77,7 @@ describe('readProjectText', () => {
 
   it('valid JSON that is not a valid project is refused with field paths', () => {
     const text = writeProjectText(defaultProject()).replace('"span_m": 6', '"span_m": -6');
-    expect(refusal(text).message).toBe('opening.span_m: must be > 0 m, got -6');
+    expect(refusal(text).message).toBe('opening.span_m: must be a number from 0.01 to 1000 m, got -6');
   });
 });
 
