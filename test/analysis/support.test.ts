@@ -166,3 +166,35 @@ describe('trace of the support numbers', () => {
     }
   });
 });
+
+describe('every accepted bolt pattern analyses with finite numbers', () => {
+  it('property: patterns within the hard bounds over two to four random layers never throw or give NaN/Infinity', async () => {
+    const fc = (await import('fast-check')).default;
+    fc.assert(fc.property(
+      fc.array(fc.record({ t: fc.double({ min: 0.05, max: 3, noNaN: true }), E: fc.double({ min: 0.5, max: 60, noNaN: true }), joints: fc.option(fc.double({ min: 0.05, max: 10, noNaN: true })) }), { minLength: 2, maxLength: 4 }),
+      fc.double({ min: 0, max: 1, noNaN: true }), fc.double({ min: 0.01, max: 0.9, noNaN: true }),
+      fc.double({ min: 0.1, max: 10, noNaN: true }), fc.double({ min: 0.1, max: 10, noNaN: true }),
+      fc.double({ min: 1e-3, max: 5000, noNaN: true }), fc.constantFrom('suspension', 'beamBuilding'), fc.double({ min: 0, max: 1, noNaN: true }),
+      fc.double({ min: 1, max: 30, noNaN: true }), fc.constantFrom(0, 50, 500),
+      (beds, lf, af, sx, sy, cap, action, pf, span, standing) => {
+        const strata = beds.reduce((s, b) => s + b.t, 0);
+        const length = Math.max(0.1, Math.min(20, lf * strata));
+        if (length > strata) return;
+        const p = project((q) => {
+          q.opening.span_m = span;
+          q.layers = beds.map((b, i) => layer({ name: `L${i + 1}`, thickness_m: b.t, youngModulus_GPa: b.E, jointing: { ...q.layers[0].jointing, crossJointSpacing_m: b.joints } }));
+          q.support = { standing_kPa: standing, bolts: { length_m: length, anchorage_m: Math.max(1e-3, af * length), capacity_kN: cap, spacingAcross_m: sx, spacingAlong_m: sy, action, pretension_kN: pf * cap } };
+        });
+        // JSON.stringify would turn NaN into null, so walk the report and test every number.
+        const bad: string[] = [];
+        const walk = (v: unknown, path: string): void => {
+          if (typeof v === 'number') { if (!Number.isFinite(v)) bad.push(path); }
+          else if (Array.isArray(v)) v.forEach((x, i) => walk(x, `${path}[${i}]`));
+          else if (v && typeof v === 'object') for (const [k, x] of Object.entries(v)) walk(x, `${path}.${k}`);
+        };
+        walk(analyse(p).report, 'report');
+        expect(bad).toEqual([]);
+      },
+    ), { numRuns: 60 });
+  }, 120_000);
+});
