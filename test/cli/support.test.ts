@@ -71,3 +71,18 @@ describe('lamina support', () => {
     expect(f.err()).toContain('support.bolts.spacingAcross_m');
   });
 });
+
+describe('report support section', () => {
+  it('--markdown has a Support section with the bolt rows and the load per bolt; a preset without support has none', async () => {
+    const f = fakeIo({ 'b.lamina.json': bolted });
+    await run(['check', 'b.lamina.json', '--markdown'], f.io);
+    const md = f.out();
+    expect(md).toMatch(/Support/);
+    expect(md).toContain('bolt load (suspension)');
+    expect(md).toContain('Load per bolt');
+    expect(md).not.toMatch(/NaN|Infinity/);
+    const g = fakeIo({});
+    await run(['check', presetFiles().find((x) => x.includes('coal-room'))!, '--markdown'], g.io);
+    expect(g.out()).not.toContain('Load per bolt');
+  }, 60_000);
+});
