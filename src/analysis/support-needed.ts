@@ -8,7 +8,7 @@
  *     (from the anchorage + 0.1 m up to the strata thickness);
  * (d) the largest span with the support as given (to 1 mm, cap 100 m).
  * Strength chains are held at the current-span values through every search (as the span
- * finder does, METHODS §11). The span search samples 32 spans (not 64) and bisects to 1 cm;
+ * finder does, METHODS §11). The span search samples 16 spans (not 64) and bisects to 1 cm;
  * the spacing is found to 5 mm (bolt patterns are set out to the centimetre).
  * "Passes" means: no counted row of the check table is below its target (`allCountedMeet`).
  * Where the unsupported roof (no bolts, no standing support) already passes, nothing is
@@ -98,7 +98,7 @@ export function supportNeeded(project: Project): SupportNeeded {
 
   // (d) the largest span with the support as given.
   const cap = SPAN_CAP_M;
-  const span = largestPassingSpan((s) => (supportPasses(withSpan(project, s), chains) ? 1 : 0), { cap, tolerance: 1e-2, samples: 32 });
+  const span = largestPassingSpan((s) => (supportPasses(withSpan(project, s), chains) ? 1 : 0), { cap, tolerance: 1e-2, samples: 16 });
   return {
     needed: { standing_kPa: pa === null ? null : pa / 1e3, boltSpacing_m: spacing, boltLength_m: length, maxSpan_m: span > 0 ? span : null, reasons },
     reason: null,
