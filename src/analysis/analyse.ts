@@ -14,6 +14,9 @@ import { maxSpans, spanFsFunction, SPAN_CAP_M, SPAN_FLOOR_M } from './span-finde
 import { SOURCES, TraceBuilder } from './trace';
 import { beamCoefficients } from '../mechanics/beam';
 import { specimenOutcomes } from '../strength/specimens';
+import { empiricalReport, supportReport } from './support-report';
+import { suspensionOf } from './support';
+import { supportNeeded } from './support-needed';
 
 const MPa = 1e-6;
 const kPa = 1e-3;
@@ -145,10 +148,24 @@ export function analyse(project: Project): Analysis {
     checks,
     governing,
     maxSpan_m: maxSpan,
+    // The support needed is a separate search (`withSupportNeeded`): the plain analysis stays one pass.
+    support: supportReport(project, p, state, trace, warnings, { needed: null, reason: null }),
+    empirical: empiricalReport(project, p, state, trace),
     warnings,
     trace: trace.entries,
   };
   return { report, layers: details, groups, separations };
+}
+
+/**
+ * The analysis with `report.support.needed` filled by the searches of `support-needed.ts`
+ * (METHODS §12): for the CLI's support command and the report's support section.
+ */
+export function analyseWithSupportNeeded(project: Project): Analysis {
+  const a = analyse(project);
+  const n = supportNeeded(project);
+  const support = a.report.support ?? { bolts: null, needed: null, neededReason: null };
+  return { ...a, report: { ...a.report, support: { ...support, needed: n.needed, neededReason: n.reason } } };
 }
 
 export function analyseProject(project: Project): Report {
@@ -186,7 +203,10 @@ function layerResults(p: ProjectSI, state: State, i: number, ls: LayerState, tra
 
   // Load.
   const g = state.shared.groups[ls.group];
-  if (g.first === g.last) {
+  if (suspensionOf(p)?.suspended.includes(i)) {
+    trace.add(`${base}.load_kPa`, `Load carried by ${layer.name} over the opening (suspended)`, '0 kPa', {}, 0, 'kPa', 'Suspension principle (Obert & Duvall 1967); statics',
+      'This layer hangs from the bolts: its weight goes to the bolts and from them to the anchor layer’s group; over the opening it carries nothing (its skin between bolts is checked instead).');
+  } else if (g.first === g.last) {
     trace.add(`${base}.load_kPa`, `Load carried by ${layer.name}`, 'gamma * t + p_x', { gamma: [layer.unitWeight * kPa, 'kN/m^3'], t: [layer.thickness, 'm'], p_x: [g.extra * kPa, 'kPa'] },
       ls.load * kPa, 'kPa', SOURCES.obertDuvall, extraNote(p, state, ls.group, state.shared.groups.length));
   } else {
@@ -194,7 +214,7 @@ function layerResults(p: ProjectSI, state: State, i: number, ls: LayerState, tra
       { Ei: [ls.modulusBeam * GPa, 'GPa'], t: [layer.thickness, 'm'], W: [g.weight * kPa, 'kPa'], p_x: [g.extra * kPa, 'kPa'], S: [g.stiffness * GPa, 'GPa m^3'] },
       ls.load * kPa, 'kPa', SOURCES.obertDuvall, `Layers ${g.first + 1}–${g.last + 1} bend together and share the load in proportion to E t³. ${extraNote(p, state, ls.group, state.shared.groups.length)}`);
   }
-  if (!(ls.load > 0) && !(state.shared.supportExcess > 0)) {
+  if (!(ls.load > 0) && !(state.shared.supportExcess > 0) && !suspensionOf(p)?.suspended.includes(i)) {
     warnings.push({ code: 'NO_NET_LOAD', path: `${base}`, message: `${layer.name}: no net load on this layer (q = ${round(ls.load * kPa)} kPa); bending and voussoir checks show no demand.` });
   }
   const slenderness = state.span / layer.thickness;

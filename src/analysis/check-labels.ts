@@ -5,7 +5,7 @@
  *
  *     STATUS_TEXT.below // "below ✗"
  */
-import type { CheckStatusKind, Mode } from '../model/types';
+import type { CheckMode, CheckStatusKind, Mode } from '../model/types';
 
 /** Table order of the modes. */
 export const MODES: readonly Mode[] = ['tension', 'crushing', 'sliding', 'deflection', 'snapThrough'];
@@ -14,30 +14,42 @@ export const MODES: readonly Mode[] = ['tension', 'crushing', 'sliding', 'deflec
 export const VOUSSOIR_MODES: readonly Mode[] = ['crushing', 'sliding', 'deflection', 'snapThrough'];
 
 /** Row labels in a check table. */
-export const MODE_LABEL: Record<Mode, string> = {
+export const MODE_LABEL: Record<CheckMode, string> = {
   tension: 'tension (intact beam)',
   crushing: 'crushing (voussoir arch)',
   sliding: 'abutment sliding (voussoir arch)',
   deflection: 'midspan deflection δ/t (voussoir arch)',
   snapThrough: 'snap-through (voussoir arch)',
+  bolt: 'bolt load (suspension)',
+  skin: 'skin between bolts',
+  interlayerShear: 'interlayer shear (beam building)',
 };
 
+/** Table order of the support modes (after the layer modes). */
+export const SUPPORT_MODES: readonly CheckMode[] = ['bolt', 'skin', 'interlayerShear'];
+
 /** Names inside a sentence ("… governs: crushing of the arch in layer 1"). */
-export const MODE_NAME: Record<Mode, string> = {
+export const MODE_NAME: Record<CheckMode, string> = {
   tension: 'tension',
   crushing: 'crushing of the arch',
   sliding: 'sliding at the abutments',
   deflection: 'midspan deflection',
   snapThrough: 'snap-through',
+  bolt: 'the bolt load',
+  skin: 'the skin between bolts',
+  interlayerShear: 'the interlayer shear of the bolted beam',
 };
 
 /** Short names for chart labels and legends. */
-export const MODE_SHORT: Record<Mode, string> = {
+export const MODE_SHORT: Record<CheckMode, string> = {
   tension: 'tension',
   crushing: 'crushing',
   sliding: 'sliding',
   deflection: 'deflection',
   snapThrough: 'snap-through',
+  bolt: 'bolt',
+  skin: 'skin',
+  interlayerShear: 'interlayer shear',
 };
 
 export const STATUS_WORD: Record<CheckStatusKind, string> = { meets: 'meets', below: 'below', info: 'info', na: 'n/a' };

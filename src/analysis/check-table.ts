@@ -13,13 +13,14 @@
  * - Voussoir rows never count for a block, s/t < 2 (METHODS §3a).
  * FS conventions: tension = design strength / net max tension; crushing = σc / (fc + σh);
  * sliding = fc·n·tanφ/(γ′s); deflection = limit/(δ/t) against 1; snap-through = 1 (stands)
- * or 0 (snaps) against 1. Governing: of the counted rows, the smallest FS/target (a standing
+ * or 0 (snaps) against 1. Bolt rows (`support.ts`) follow the layer rows. Governing: of the counted rows, the smallest FS/target (a standing
  * arch's snap-through row never governs); ties go to the lower layer.
  */
 import type { CheckRow, CheckStatusKind, Design, Governing, Mode } from '../model/types';
 import { MODES } from './check-labels';
 import type { LayerState, State } from './evaluate';
 import type { ProjectSI } from './inputs';
+import { applySupportRows } from './support';
 
 const MPa = 1e-6;
 
@@ -109,10 +110,12 @@ export function checkTable(p: ProjectSI, state: State): CheckRow[] {
   const rows: CheckRow[] = [];
   const cantilever = state.ends === 'cantilever';
   const limit = p.design.deflectionLimitRatio;
+  const tensionCounted: boolean[] = [];
   state.layers.forEach((ls, i) => {
     const input = p.layers[i];
     const cond = layerCondition(p, ls, state.span, input.thickness, cantilever);
     const counted = countedModes(cond);
+    tensionCounted.push(counted.tension);
     const v = ls.voussoir;
     const unloaded = !(ls.load > 0);
     const push = (mode: Mode, fs: number | null, demand: number | null, capacity: number | null, unit: CheckRow['unit'], why: string | null, note: string) => {
@@ -157,7 +160,8 @@ export function checkTable(p: ProjectSI, state: State): CheckRow[] {
     push('snapThrough', v === null ? null : snapped ? 0 : 1, null, null, null, archWhy,
       snapped ? 'the beam snaps through: no compression arch can carry it' : 'an arch forms: FS shown as 1 (stands), target 1');
   });
-  return rows;
+  // Support (METHODS §12): suspended layers stop counting, bonded tension, bolt/skin/shear rows.
+  return applySupportRows(p, state.support, state.layers, rows, tensionCounted);
 }
 
 /** The counted row with the smallest FS/target (ties: the lower layer); a standing arch's snap-through row never governs. */
@@ -189,6 +193,6 @@ export function allCountedMeet(rows: readonly CheckRow[]): boolean {
 /** The modes counted in at least one layer. */
 export function modesCounted(rows: readonly CheckRow[]): Record<Mode, boolean> {
   const out = Object.fromEntries(MODES.map((m) => [m, false])) as Record<Mode, boolean>;
-  for (const r of rows) if (r.counts) out[r.mode] = true;
+  for (const r of rows) if (r.counts && (MODES as readonly string[]).includes(r.mode)) out[r.mode as Mode] = true;
   return out;
 }

@@ -10,6 +10,8 @@ import { solveVoussoir, type VoussoirResult } from '../mechanics/voussoir';
 import { rockMassModulus } from '../strength/rock-mass-modulus';
 import { strengthChain, type StrengthChain } from '../strength/chain';
 import type { LayerSI, ProjectSI } from './inputs';
+import { suspendedLoads } from '../mechanics/suspension';
+import { supportState, suspensionOf, type SupportState } from './support';
 
 export interface PlateState {
   coefficients: PlateCoefficients;
@@ -51,6 +53,8 @@ export interface State {
   ends: BeamEnds;
   shared: SharedLoads & { groupOf: number[] };
   layers: LayerState[];
+  /** The bolt pattern applied (METHODS §12); null without bolts. */
+  support: SupportState | null;
 }
 
 export function beamEnds(p: ProjectSI): BeamEnds {
@@ -152,14 +156,39 @@ export function evaluate(p: ProjectSI, options: EvaluateOptions = {}): State {
     const wantVoussoir = options.voussoirOnly === undefined || options.voussoirOnly === i;
     return layerState(p, layer, span, chains[i], moduli[i], shared.groupOf[i], shared.loads[i], wantVoussoir);
   });
-  return { span, ends, shared, layers };
+  return { span, ends, shared, layers, support: supportState(p, span, ends, layers) };
 }
 
 /** Groups and shared loads (they depend on thickness, unit weight and modulus, not on the span). */
 export function layerLoads(p: ProjectSI, moduli: readonly { beam: number }[]): SharedLoads & { groupOf: number[] } {
   const beds = p.layers.map((layer, i) => ({ unitWeight: layer.unitWeight, thickness: layer.thickness, modulus: moduli[i].beam }));
+  const hang = suspensionOf(p);
+  if (hang) return suspendedShare(p, beds, hang.anchorLayer);
   const groupOf = groupLayers(beds);
   return { ...shareLoads(beds, groupOf, p.surcharge, p.support), groupOf };
+}
+
+/**
+ * Loads when the layers below `anchorLayer` hang from the bolts (METHODS §12): each hanging
+ * layer is a group of its own whose `extra` is −γt (it carries nothing over the opening); the
+ * layers from the anchor up are regrouped by §2 with the hanging pressure (less the standing
+ * support, which relieves it first) on the anchor's group.
+ */
+function suspendedShare(p: ProjectSI, beds: { unitWeight: number; thickness: number; modulus: number }[], anchorLayer: number): SharedLoads & { groupOf: number[] } {
+  const r = suspendedLoads({ beds, anchorLayer, surcharge: p.surcharge, standingSupport: p.support });
+  const hanging = beds.slice(0, anchorLayer).map((b, i) => ({
+    first: i, last: i, weight: b.unitWeight * b.thickness, stiffness: b.modulus * b.thickness ** 3, extra: -b.unitWeight * b.thickness,
+  }));
+  const hangingWeight = hanging.reduce((w, g) => w + g.weight, 0);
+  const groups = [...hanging, ...r.spanning.groups.map((g) => ({ ...g, first: g.first + anchorLayer, last: g.last + anchorLayer }))];
+  const groupOf = r.groups.map((g, i) => (g === null ? i : g + anchorLayer));
+  return {
+    loads: r.loads,
+    groups,
+    supportApplied: Math.min(p.support, hangingWeight) + r.spanning.supportApplied,
+    supportExcess: r.spanning.supportExcess,
+    groupOf,
+  };
 }
 
 /** One layer's elastic, plate, FS-tension and voussoir state at a span, given its chain, moduli and load. */

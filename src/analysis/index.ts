@@ -1,5 +1,6 @@
 /** The analysis layer: orchestrates the kernels into the report, the check table, the verdict, traces and chart data. */
-export { analyse, analyseProject, meetsTargets } from './analyse';
+export { analyse, analyseProject, analyseWithSupportNeeded, meetsTargets } from './analyse';
+export { supportNeeded, supportPasses, NO_SUPPORT_NEEDED } from './support-needed';
 export { spanCurve } from './span-curve';
 export { beamProfile } from './profile';
 export { designChart } from './design-chart';

@@ -5,6 +5,7 @@
 import type { Design, EndCondition, Layer, OpeningType, Project } from '../model/types';
 import type { PlateCoefficients, PlateInput } from '../mechanics/plate';
 import type { SpecimenSI } from '../strength/specimens';
+import type { BoltsSI } from './support';
 
 export interface LayerSI {
   name: string;
@@ -44,6 +45,8 @@ export interface ProjectSI {
   /** Standing support, Pa (capped at the load it relieves in the layering). */
   support: number;
   horizontalStress: number;
+  /** Rock bolts in SI (m, N), or null. */
+  bolts: BoltsSI | null;
   layers: LayerSI[];
   design: Design;
   /**
@@ -51,6 +54,14 @@ export interface ProjectSI {
    * uncertainty run's interpolation over aspect ratio and Poisson's ratio (sample-plates.ts).
    */
   plateSource?: (aspect: number, poisson: number) => PlateCoefficients;
+}
+
+export function boltsToSI(b: Project['support']['bolts']): BoltsSI | null {
+  if (!b) return null;
+  return {
+    length: b.length_m, capacity: b.capacity_kN * 1e3, spacingAcross: b.spacingAcross_m, spacingAlong: b.spacingAlong_m,
+    anchorage: b.anchorage_m, action: b.action, shearCapacity: b.shearCapacity_kN * 1e3, pretension: b.pretension_kN * 1e3,
+  };
 }
 
 export function layerToSI(layer: Layer): LayerSI {
@@ -105,6 +116,7 @@ export function projectToSI(project: Project): ProjectSI {
     surcharge: project.loads.surcharge_kPa * 1e3,
     support: project.support.standing_kPa * 1e3,
     horizontalStress: project.loads.horizontalStress_MPa * 1e6,
+    bolts: boltsToSI(project.support.bolts),
     layers: project.layers.map(layerToSI),
     design: project.design,
   };

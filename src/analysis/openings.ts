@@ -8,7 +8,7 @@
  *     // { ok: true, result: { row: 2, name: 'Room 1', status: 'below', governing: {…}, maxSpan_m: 4.2, … } }
  */
 import type { OpeningInput } from '../model/openings-csv';
-import type { Loads, Mode, Opening, Project, Support } from '../model/types';
+import type { CheckMode, Loads, Opening, Project, Support } from '../model/types';
 import { parseProject, ProjectError, type FieldIssue } from '../model/validate';
 import { analyse, meetsTargets } from './analyse';
 
@@ -20,7 +20,7 @@ export interface OpeningResult {
   support: Support;
   /** "meets" every target, "below" one, or "n/a" when no check applies (no net load). */
   status: 'meets' | 'below' | 'n/a';
-  governing: { layerIndex: number; layer: string; mode: Mode; fs: number; target: number } | null;
+  governing: { layerIndex: number; layer: string; mode: CheckMode; fs: number; target: number } | null;
   /** Largest span meeting every target (m), all else fixed; null where none is found. */
   maxSpan_m: number | null;
   /** Warnings of this opening's analysis and of its opening and loads fields. */
@@ -44,7 +44,7 @@ export function openingProject(strata: Project, input: OpeningInput): Project {
       surcharge_kPa: input.surcharge_kPa ?? strata.loads.surcharge_kPa,
       horizontalStress_MPa: input.horizontalStress_MPa ?? strata.loads.horizontalStress_MPa,
     },
-    support: { standing_kPa: input.support_kPa ?? strata.support.standing_kPa },
+    support: { standing_kPa: input.support_kPa ?? strata.support.standing_kPa, bolts: strata.support.bolts },
   };
 }
 

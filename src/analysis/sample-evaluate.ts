@@ -130,7 +130,8 @@ export function sampleEvaluator(project: Project, fields: readonly SampledField[
   const writers = fields.map((f) => writerFor(f.path, base));
   const plates = samplingPlates(base, fields);
   if (plates) work.plateSource = plates.coefficients;
-  const modeIndex = new Map<Mode, number>(MODES.map((m, k) => [m, k]));
+  // Per-mode figures cover the span modes; support rows (bolt, skin, interlayer shear) count in the governing FS.
+  const modeIndex = new Map<string, number>(MODES.map((m, k) => [m, k]));
   const modeFs: (number | null)[] = MODES.map(() => null);
   const out: SampleFs = { modeFs, governingFs: Infinity, targetRatio: Infinity };
   return {
@@ -146,9 +147,11 @@ export function sampleEvaluator(project: Project, fields: readonly SampledField[
       let ratio = Infinity;
       for (const r of rows) {
         if (!r.counts || r.fs === null) continue;
-        const k = modeIndex.get(r.mode) as number;
-        const cur = modeFs[k];
-        if (cur === null || r.fs < cur) modeFs[k] = r.fs;
+        const k = modeIndex.get(r.mode);
+        if (k !== undefined) {
+          const cur = modeFs[k];
+          if (cur === null || r.fs < cur) modeFs[k] = r.fs;
+        }
         if (r.fs < governing) governing = r.fs;
         const q = r.fs / r.target;
         if (q < ratio) ratio = q;

@@ -97,7 +97,7 @@ function crackedSentence(project: Project, report: Report): string {
   if (project.opening.type === 'cantilever') {
     return 'As a cracked overhang: an overhang cannot form a compression arch, so it has no post-cracking reserve; the tension check decides.';
   }
-  const rows = report.checks.filter((r) => VOUSSOIR_MODES.includes(r.mode));
+  const rows = report.checks.filter((r) => (VOUSSOIR_MODES as readonly string[]).includes(r.mode));
   const snapped = rows.filter((r) => r.mode === 'snapThrough' && r.fs === 0);
   const note = countNote(rows.filter((r) => r.fs !== null));
   if (snapped.length > 0) {

@@ -4,7 +4,7 @@
  * still run; the exit code is the worst over the files and a summary line goes to stderr.
  */
 import { version } from '../../package.json';
-import { analyse, meetsTargets } from '../analysis/analyse';
+import { analyse, analyseWithSupportNeeded, meetsTargets } from '../analysis/analyse';
 import { spanCurve } from '../analysis/span-curve';
 import { minimumThickness } from '../analysis/thickness';
 import type { Analysis } from '../analysis/types';
@@ -17,7 +17,7 @@ import { InputError, onePath, parseProjectText, printWarnings, unitsFlag } from 
 import { expandInputs, readSource, type InputSource } from './inputs';
 import type { Io } from './io';
 import { writeOutput } from './output';
-import { caution, checkText, spanLines } from './text-report';
+import { caution, checkText, spanLines, supportLines } from './text-report';
 import { samplingFlags, uncertaintyFor, uncertaintyLines, type SamplingFlags } from './uncertainty';
 import { ProjectError } from '../model/validate';
 
@@ -189,4 +189,36 @@ function insertBeforeCaution(text: string, lines: string[]): string {
   const tail = `${caution()}\n`;
   const at = text.lastIndexOf(tail);
   return at < 0 ? `${text}${lines.join('\n')}\n` : `${text.slice(0, at)}${lines.join('\n')}\n\n${text.slice(at)}`;
+}
+
+/**
+ * `lamina support FILE [--json] [--units SI|US]`: the support results and the support needed
+ * (METHODS §12) — smallest standing support, largest square bolt spacing, shortest bolt length,
+ * largest span with the support as given — or "no support needed". Exit code as `check` for
+ * the project as given.
+ */
+export async function runSupport(args: ParsedArgs, io: Io): Promise<ExitCode> {
+  const path = onePath(args, 'project file');
+  const units = unitsFlag(args);
+  const [source] = expandInputs([path]);
+  const { project, warnings } = parseProjectText(path, readSource(source, io));
+  printWarnings(io.err, path, warnings);
+  const analysis = analyseWithSupportNeeded(project);
+  const r = analysis.report;
+  if (args.flags['--json']) {
+    io.out(JSON.stringify({ schema: 'lamina-support/1', span_m: project.opening.span_m, governing: r.governing, support: r.support, empirical: r.empirical }, null, 2) + '\n');
+  } else {
+    const lines = supportLines(project, r, units);
+    io.out([
+      `Lamina support — ${project.title}`,
+      caution(),
+      '',
+      `Span: ${formatQuantity(project.opening.span_m, 'length', units)}`,
+      ...(lines.length ? lines : ['No support given and none searched.']),
+      '',
+      caution(),
+      '',
+    ].join('\n'));
+  }
+  return meetsTargets(project, r) ? EXIT_MEETS : EXIT_BELOW;
 }

@@ -11,6 +11,10 @@ Usage:
       ("presets/*.lamina.json", expanded by lamina itself) or - for standard input.
   lamina span FILE [--json] [--units SI|US] [--layer N]
       Largest span per mode, and the minimum thickness of layer N (1 = immediate roof).
+  lamina support FILE [--json] [--units SI|US]
+      The support results (bolt load and FS, suspended and bonded layers) and the support
+      needed: smallest standing support, largest square bolt spacing, shortest bolt length,
+      largest span with the support as given — or "no support needed".
   lamina lab SPECIMENS.csv [--rock sedimentary|igneous|metamorphic] [--json]
       Brazilian test reduction of a specimen table (columns id, diameter_mm,
       thickness_mm, peakLoad_kN, valid).

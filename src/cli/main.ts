@@ -1,5 +1,5 @@
 /**
- * The Lamina command line: `check`, `span`, `lab`, `openings`. Exit codes (src/cli/exit-codes.ts,
+ * The Lamina command line: `check`, `span`, `support`, `lab`, `openings`. Exit codes (src/cli/exit-codes.ts,
  * DESIGN.md): 0 all checks meet their targets; 1 at least one is below; 2 the input was refused
  * or an output could not be written (stderr names the field, option or path); 3 an internal
  * error (a bug). Each command's module is imported when it runs, so `--help` loads almost
@@ -21,12 +21,14 @@ async function dispatch(command: string, args: ReturnType<typeof parseArgs>, io:
       return (await import('./check')).runCheck(args, io);
     case 'span':
       return (await import('./check')).runSpan(args, io);
+    case 'support':
+      return (await import('./check')).runSupport(args, io);
     case 'lab':
       return (await import('./lab')).runLab(args, io);
     case 'openings':
       return (await import('./openings')).runOpenings(args, io);
     default:
-      throw new UsageError(`unknown command "${command}" (expected check, span, lab, openings or help)`);
+      throw new UsageError(`unknown command "${command}" (expected check, span, support, lab, openings or help)`);
   }
 }
 

@@ -1,6 +1,6 @@
 /** The human-readable `check` and `span` output: every number with its unit. */
 import type { Analysis } from '../analysis/types';
-import type { MaxSpanReport, Project } from '../model/types';
+import type { MaxSpanReport, Project, Report } from '../model/types';
 import { CAUTION } from '../model/caution';
 import { formatQuantity, type UnitSystem } from '../model/units';
 import { MODE_LABEL, STATUS_TEXT } from '../analysis/check-labels';
@@ -29,6 +29,52 @@ export function spanLines(maxSpan: MaxSpanReport | null, units: UnitSystem, word
     `  deflection    ${q(maxSpan.deflection)}`,
     `  governing     ${q(maxSpan.governing)}`,
   ];
+}
+
+/** The support results and the empirical cross-check, as the report holds them (nothing re-derived). */
+export function supportLines(project: Project, report: Report, units: UnitSystem): string[] {
+  const lines: string[] = [];
+  const s = report.support;
+  const b = project.support.bolts;
+  if (s && b) {
+    const layerName = (i: number) => `${i + 1} ${project.layers[i].name}`;
+    lines.push(
+      `Bolts: ${formatQuantity(b.length_m, 'length', units)} long, ${formatQuantity(b.capacity_kN, 'force', units)} each at ${formatQuantity(b.spacingAcross_m, 'length', units)} × ${formatQuantity(b.spacingAlong_m, 'length', units)}, anchorage ${formatQuantity(b.anchorage_m, 'length', units)}, ${b.action === 'suspension' ? 'suspension' : 'beam building'}`,
+    );
+    const r = s.bolts;
+    if (r) {
+      lines.push(`  anchor layer: ${r.anchorLayer === null ? 'none credited (the anchorage zone crosses an interface)' : layerName(r.anchorLayer)}`);
+      if (r.suspended.length) {
+        lines.push(`  suspended: ${r.suspended.map(layerName).join(', ')}; load per bolt ${formatQuantity(r.load_kN, 'force', units)}, FS per bolt ${fs(r.fsBolt)} (target ${numberText(project.design.fsTarget.bolt, 3)})`);
+      }
+      if (r.composite) {
+        lines.push(`  composite beam: ${r.composite.credited ? 'credited (bonded tension counts)' : 'not credited (unbonded tension counts)'}; least interlayer shear FS ${fs(r.composite.fsShear)} (target ${numberText(project.design.fsTarget.bolt, 3)})`);
+      }
+    }
+  } else if (s && project.support.standing_kPa > 0) {
+    lines.push(`Standing support: ${formatQuantity(project.support.standing_kPa, 'pressure', units)}`);
+  }
+  if (s?.neededReason) lines.push(`Support needed: ${s.neededReason}.`);
+  if (s?.needed) {
+    const n = s.needed;
+    const q = (v: number | null, kind: 'length' | 'pressure') => (v === null ? 'none found' : formatQuantity(v, kind, units));
+    lines.push(
+      'Support needed (every other input held; every counted check meets its target):',
+      `  smallest standing support       ${q(n.standing_kPa, 'pressure')}`,
+      `  largest square bolt spacing     ${q(n.boltSpacing_m, 'length')}`,
+      `  shortest bolt length            ${q(n.boltLength_m, 'length')}`,
+      `  largest span with this support  ${q(n.maxSpan_m, 'length')}`,
+      ...n.reasons.map((x) => `  ${x}`),
+    );
+  }
+  const e = report.empirical;
+  if (e) {
+    lines.push(
+      `Empirical cross-check (Q system, not counted): Q ${numberText(e.q, 3)}; largest unsupported span ${formatQuantity(e.unsupportedSpan_m, 'length', units)}; bolt length ${formatQuantity(e.boltLength_m, 'length', units)}.`,
+      `  ${e.note}`,
+    );
+  }
+  return lines;
 }
 
 export function checkText(project: Project, analysis: Analysis, units: UnitSystem): string {
@@ -82,6 +128,8 @@ export function checkText(project: Project, analysis: Analysis, units: UnitSyste
   lines.push('Verdict:');
   for (const s of verdict.sentences) lines.push(`  ${s.text}`);
   lines.push('', ...spanLines(r.maxSpan_m, units, verdict.spanWord));
+  const support = supportLines(project, r, units);
+  if (support.length) lines.push('', ...support);
   if (r.warnings.length) {
     lines.push('', 'Warnings:');
     for (const w of r.warnings) lines.push(`  ${w.level === 'error' ? '!!' : ' -'} [${w.code}] ${w.path ? `${w.path}: ` : ''}${w.message}`);

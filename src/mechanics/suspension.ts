@@ -18,7 +18,7 @@
  *                      spacingAcross: 1.2, spacingAlong: 1.2, capacity: 100e3 })
  *     // { pressure: 12_500, load: 18_000, fs: 5.556 }
  */
-import { groupLayers, shareLoads, type BedStiffness } from './layering';
+import { groupLayers, shareLoads, type BedStiffness, type SharedLoads } from './layering';
 
 export interface SuspendedLayer {
   unitWeight: number;
@@ -107,6 +107,8 @@ export interface SuspendedLoads {
   groups: (number | null)[];
   /** The pressure moved onto the anchor layer's group: Σγt below the anchor − standing, Pa. */
   transferred: number;
+  /** §2 sharing of the layers from the anchor up (indices relative to the anchor), the hanging pressure in group 0's `extra`. */
+  spanning: SharedLoads;
 }
 
 /**
@@ -135,11 +137,20 @@ export function suspendedLoads(input: SuspendedLoadsInput): SuspendedLoads {
   const transferred = layerWeight(hanging, 'beds') - standingSupport;
   const spanning = beds.slice(anchorLayer);
   const groups = groupLayers(spanning);
-  // shareLoads subtracts its `support` argument from group 0, the anchor's group.
-  const shared = shareLoads(spanning, groups, surcharge, -transferred, { capSupport: false });
+  // Standing support relieves the hanging weight first; what is left of it pushes on the
+  // anchor's group (shareLoads caps it at the load it can relieve). The hanging pressure that
+  // remains is added to the anchor's group, the lowest of the regrouped stack.
+  const shared = shareLoads(spanning, groups, surcharge, Math.max(0, -transferred));
+  const added = Math.max(0, transferred);
+  const summary = shared.groups.map((g, k) => (k === 0 ? { ...g, extra: g.extra + added } : g));
+  const loads = spanning.map((b, i) => {
+    const g = summary[groups[i]];
+    return Math.max(0, (b.modulus * b.thickness ** 3 * (g.weight + g.extra)) / g.stiffness);
+  });
   return {
-    loads: [...hanging.map(() => 0), ...shared.loads],
+    loads: [...hanging.map(() => 0), ...loads],
     groups: [...hanging.map(() => null), ...groups],
     transferred,
+    spanning: { loads, groups: summary, supportApplied: shared.supportApplied, supportExcess: shared.supportExcess },
   };
 }

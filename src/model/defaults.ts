@@ -28,6 +28,11 @@
  *   loads.surcharge_kPa            0
  *   loads.horizontalStress_MPa     0
  *   support.standing_kPa           0 (lamina/1: loads.support_kPa)
+ *   support.bolts                  null (no bolts); when given: length_m, capacity_kN,
+ *                                  spacingAcross_m, spacingAlong_m required; anchorage_m 0.3
+ *                                  (common practice), action "suspension", shearCapacity_kN
+ *                                  0.6 × capacity_kN (von Mises fy/√3, rounded), pretension_kN 0
+ *   empirical.q                    null (no Q cross-check); when given: jn, jr, ja, jw, srf, esr
  *   layers[i].name                 "Layer 1", "Layer 2", … (1-based position)
  *   layers[i].modulusBasis         "mass"
  *   layers[i].poisson              0.25
@@ -43,7 +48,7 @@
  *   layers[i].hoekBrown.mi         by rock class *: sedimentary 7, igneous 25, metamorphic 12
  *   layers[i].hoekBrown.disturbance 0 (undisturbed, e.g. machine-cut or careful blasting)
  *   design.fsTarget                { tension: 2 on the "rockMass" basis, 4 on "lab";
- *                                    crushing: 2, sliding: 1.5 } (METHODS §10)
+ *                                    crushing: 2, sliding: 1.5, bolt: 1.5 } (METHODS §10, §12)
  *   design.deflectionLimitRatio    0.1 (Diederichs & Kaiser 1999)
  *   design.characteristic          "mean" ("lower5", "cautiousMean", "lower5Log": METHODS §6, §15)
  *   design.basis                   "intact"
@@ -59,7 +64,7 @@
  *   from memory). Lamina scales the measured tensile strength by s·mi/mb, in which mi cancels,
  *   so mi matters only for the rock-mass compressive strength.
  */
-import type { Design, Jointing, Layer, Loads, Project, RockClass, Support, Tensile, TensileBasis } from './types';
+import type { Design, Empirical, Jointing, Layer, Loads, Project, RockClass, Support, Tensile, TensileBasis } from './types';
 
 export const DEFAULT_TITLE = 'Untitled project';
 
@@ -77,7 +82,7 @@ export const DEFAULT_LOADS: Readonly<Loads> = Object.freeze({
 export const DEFAULT_TENSION_TARGET: Readonly<Record<TensileBasis, number>> = Object.freeze({ rockMass: 2, lab: 4 });
 
 /** Targets other than tension (METHODS §10). */
-export const DEFAULT_FS_TARGET = Object.freeze({ tension: DEFAULT_TENSION_TARGET.rockMass, crushing: 2, sliding: 1.5 });
+export const DEFAULT_FS_TARGET = Object.freeze({ tension: DEFAULT_TENSION_TARGET.rockMass, crushing: 2, sliding: 1.5, bolt: 1.5 });
 export const DEFAULT_DEFLECTION_LIMIT_RATIO = 0.1;
 export const DEFAULT_POISSON = 0.25;
 export const DEFAULT_JOINT_CONDITION = 20;
@@ -114,7 +119,16 @@ export function defaultLoads(): Loads {
 }
 
 export function defaultSupport(): Support {
-  return { standing_kPa: 0 };
+  return { standing_kPa: 0, bolts: null };
+}
+
+/** Anchorage length of a bolt when the file gives none, m (common practice). */
+export const DEFAULT_BOLT_ANCHORAGE_M = 0.3;
+/** Shear capacity of a bolt as a fraction of its tensile capacity (von Mises: 1/√3 ≈ 0.58, rounded). */
+export const DEFAULT_BOLT_SHEAR_FRACTION = 0.6;
+
+export function defaultEmpirical(): Empirical {
+  return { q: null };
 }
 
 export function defaultJointing(): Jointing {
@@ -159,6 +173,7 @@ export function defaultProject(): Project {
     opening: { type: 'beam', span_m: 6, length_m: null, ends: 'clamped', edges: null },
     loads: defaultLoads(),
     support: defaultSupport(),
+    empirical: defaultEmpirical(),
     layers: [defaultLayer()],
     design: defaultDesign(),
   };

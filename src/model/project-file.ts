@@ -176,13 +176,23 @@ function orderedProject(p: Project): Record<string, unknown> {
     surcharge_kPa: p.loads.surcharge_kPa,
     horizontalStress_MPa: p.loads.horizontalStress_MPa,
   };
-  out.support = { standing_kPa: p.support.standing_kPa };
+  const b = p.support.bolts;
+  out.support = {
+    standing_kPa: p.support.standing_kPa,
+    bolts: b === null ? null : {
+      length_m: b.length_m, capacity_kN: b.capacity_kN, spacingAcross_m: b.spacingAcross_m, spacingAlong_m: b.spacingAlong_m,
+      anchorage_m: b.anchorage_m, action: b.action, shearCapacity_kN: b.shearCapacity_kN, pretension_kN: b.pretension_kN,
+    },
+  };
+  const q = p.empirical.q;
+  out.empirical = { q: q === null ? null : { jn: q.jn, jr: q.jr, ja: q.ja, jw: q.jw, srf: q.srf, esr: q.esr } };
   out.layers = p.layers.map(orderedLayer);
   out.design = {
     fsTarget: {
       tension: p.design.fsTarget.tension,
       crushing: p.design.fsTarget.crushing,
       sliding: p.design.fsTarget.sliding,
+      bolt: p.design.fsTarget.bolt,
     },
     deflectionLimitRatio: p.design.deflectionLimitRatio,
     characteristic: p.design.characteristic,

@@ -47,10 +47,48 @@ export interface Loads {
   horizontalStress_MPa: number;
 }
 
+/** How a bolt pattern is credited (METHODS §12). */
+export type BoltAction = 'suspension' | 'beamBuilding';
+
+/** A square or rectangular pattern of rock bolts (METHODS §12). */
+export interface BoltPattern {
+  /** Bolt length above the roof line, m; the tip is at this height. */
+  length_m: number;
+  /** Tensile capacity of one bolt, kN. */
+  capacity_kN: number;
+  spacingAcross_m: number;
+  spacingAlong_m: number;
+  /** Anchorage length at the tip, m (default 0.3, common practice). */
+  anchorage_m: number;
+  action: BoltAction;
+  /** Shear capacity of one bolt, kN (default 0.6 × capacity: steel shears at fy/√3). */
+  shearCapacity_kN: number;
+  /** Pretension of one bolt, kN (default 0). */
+  pretension_kN: number;
+}
+
 /** Support installed in the opening (METHODS §12). */
 export interface Support {
   /** Standing support (props, cribs) pushing up on the immediate roof; capped at the load it relieves. */
   standing_kPa: number;
+  /** Rock bolts, or null for none. */
+  bolts: BoltPattern | null;
+}
+
+/** The Q-system ratings of the empirical cross-check (Barton, Lien & Lunde 1974); RQD from the immediate roof. */
+export interface QRatings {
+  jn: number;
+  jr: number;
+  ja: number;
+  jw: number;
+  srf: number;
+  /** Excavation support ratio. */
+  esr: number;
+}
+
+/** Optional empirical cross-check (never counted; METHODS §12). */
+export interface Empirical {
+  q: QRatings | null;
 }
 
 export interface Specimen {
@@ -102,6 +140,8 @@ export interface FsTargets {
   tension: number;
   crushing: number;
   sliding: number;
+  /** Bolts: FS per bolt and FS of the interlayer shear (default 1.5, common practice). */
+  bolt: number;
 }
 
 export interface Design {
@@ -156,6 +196,8 @@ export interface Project {
   opening: Opening;
   loads: Loads;
   support: Support;
+  /** Empirical cross-check inputs (never counted). */
+  empirical: Empirical;
   /** layers[0] is the immediate roof; then upward. */
   layers: Layer[];
   design: Design;
@@ -230,6 +272,12 @@ export interface LayerReport {
 
 export type Mode = 'tension' | 'crushing' | 'sliding' | 'snapThrough' | 'deflection';
 
+/** Modes of the support rows (METHODS §12): FS per bolt, a hanging layer between bolts, an interface of a bonded set. */
+export type SupportMode = 'bolt' | 'skin' | 'interlayerShear';
+
+/** Every mode a check-table row can have. */
+export type CheckMode = Mode | SupportMode;
+
 /** How a check stands: meets/below its target (counted), info (computed, not counted), n/a. */
 export type CheckStatusKind = 'meets' | 'below' | 'info' | 'na';
 
@@ -240,11 +288,11 @@ export type CheckStatusKind = 'meets' | 'below' | 'info' | 'na';
 export interface CheckRow {
   layerIndex: number;
   layer: string;
-  mode: Mode;
-  /** MPa for tension and crushing, δ/t for deflection; null where the check has no demand figure. */
+  mode: CheckMode;
+  /** MPa for tension and crushing, δ/t for deflection, kN per bolt, kPa interlayer shear; null where the check has no demand figure. */
   demand: number | null;
   capacity: number | null;
-  unit: 'MPa' | 'ratio' | null;
+  unit: 'MPa' | 'ratio' | 'kN' | 'kPa' | null;
   /** null where the check does not apply. Snap-through: 1 stands, 0 snaps. Deflection: limit/(δ/t). */
   fs: number | null;
   target: number;
@@ -259,7 +307,7 @@ export interface CheckRow {
 export interface Governing {
   layerIndex: number;
   layer: string;
-  mode: Mode;
+  mode: CheckMode;
   fs: number;
   target: number;
 }
@@ -297,6 +345,49 @@ export interface TraceEntry {
   note?: string;
 }
 
+/** The bolt pattern's results (METHODS §12; DESIGN "Contract changes in v2"). */
+export interface BoltsReport {
+  /** Load per bolt, kN (suspension; 0 when nothing hangs or no anchorage is credited). */
+  load_kN: number;
+  /** Capacity / load; null when no load hangs from the bolts. */
+  fsBolt: number | null;
+  /** The layer holding the anchorage zone; null when the zone straddles an interface. */
+  anchorLayer: number | null;
+  /** The layers hanging from the bolts (suspension). */
+  suspended: number[];
+  /** Beam building: whether the bonded bound is credited and the least interface FS; null otherwise. */
+  composite: { credited: boolean; fsShear: number | null } | null;
+}
+
+/** The support that would make every counted check meet its target (METHODS §12). */
+export interface SupportNeededReport {
+  /** Smallest standing support pressure, kPa; null when none suffices. */
+  standing_kPa: number | null;
+  /** Largest square bolt spacing (given length, capacity and action), m; null when none suffices. */
+  boltSpacing_m: number | null;
+  /** Shortest bolt length (given spacing, capacity and action), m; null when none suffices. */
+  boltLength_m: number | null;
+  /** Largest span with the support as given, m (entered span units). */
+  maxSpan_m: number | null;
+  /** Why a search found nothing (one sentence), or why none is needed. */
+  reasons: string[];
+}
+
+export interface SupportReport {
+  bolts: BoltsReport | null;
+  /** null with `neededReason` "no support needed" where the roof already meets every target. */
+  needed: SupportNeededReport | null;
+  neededReason: string | null;
+}
+
+/** The Q-system cross-check (never counted). */
+export interface EmpiricalReport {
+  q: number;
+  unsupportedSpan_m: number;
+  boltLength_m: number;
+  note: string;
+}
+
 export interface Report {
   schema: 'lamina-report/2';
   opening: OpeningReport;
@@ -305,6 +396,10 @@ export interface Report {
   checks: CheckRow[];
   governing: Governing | null;
   maxSpan_m: MaxSpanReport | null;
+  /** Support results; null where the project has no bolts and no standing support. */
+  support: SupportReport | null;
+  /** Empirical cross-check; null without `empirical.q`. */
+  empirical: EmpiricalReport | null;
   warnings: Warning[];
   trace: TraceEntry[];
   /** The uncertainty run (METHODS §16), when the file asks for one and the caller ran it. */

@@ -17,7 +17,8 @@
  * specimen diameter and thickness 1–1000 mm, peak load 0.001–10 000 kN; cross-joint spacing
  * 0.001–10 000 m or null; fracture frequency 0–1000 /m; JCond89 0–30; RQD 0–100; joint
  * friction 0 ≤ φ < 90°; mi 1–100; disturbance 0–1; FS targets 0.1–100; deflection limit ratio
- * 0.001–1; at most 100 layers and 1000 specimens per layer. The contract: every project
+ * 0.001–1; at most 100 layers and 1000 specimens per layer; bolts and Q ratings within
+ * BOLT_BOUNDS and Q_BOUNDS below (a bolt no longer than the strata, anchorage < length). The contract: every project
  * accepted here analyses without throwing and with finite numbers (`npm run fuzz` checks it).
  * Keys `__proto__`, `constructor` and `prototype` are refused anywhere in the input.
  * Numbers must be JSON numbers (no numeric strings) and finite.
@@ -26,6 +27,8 @@
  */
 import { numberText } from './number-format';
 import {
+  DEFAULT_BOLT_ANCHORAGE_M,
+  DEFAULT_BOLT_SHEAR_FRACTION,
   DEFAULT_DEFLECTION_LIMIT_RATIO,
   DEFAULT_DISTURBANCE,
   DEFAULT_FS_TARGET,
@@ -41,7 +44,10 @@ import {
 import { migrateV1 } from './migrate';
 import { ELIGIBLE_FIELDS, eligibleField } from './uncertain-fields';
 import type {
+  BoltAction,
+  BoltPattern,
   CharacteristicRule,
+  QRatings,
   CrushingStrength,
   DesignBasis,
   EdgeCondition,
@@ -94,11 +100,14 @@ export function parseProject(input: unknown): { project: Project; warnings: Fiel
 
 /** Keys the schema knows, per object (also the order the file is written in). */
 export const SCHEMA_KEYS = {
-  project: ['schema', 'title', 'description', 'opening', 'loads', 'support', 'layers', 'design', 'uncertainty'],
+  project: ['schema', 'title', 'description', 'opening', 'loads', 'support', 'empirical', 'layers', 'design', 'uncertainty'],
   opening: ['type', 'span_m', 'length_m', 'ends', 'edges'],
   edges: ['short', 'long'],
   loads: ['surcharge_kPa', 'horizontalStress_MPa'],
-  support: ['standing_kPa'],
+  support: ['standing_kPa', 'bolts'],
+  bolts: ['length_m', 'capacity_kN', 'spacingAcross_m', 'spacingAlong_m', 'anchorage_m', 'action', 'shearCapacity_kN', 'pretension_kN'],
+  empirical: ['q'],
+  q: ['jn', 'jr', 'ja', 'jw', 'srf', 'esr'],
   layer: [
     'name', 'thickness_m', 'unitWeight_kNm3', 'youngModulus_GPa', 'modulusBasis', 'poisson',
     'ucs_MPa', 'rockClass', 'tensile', 'jointing', 'hoekBrown',
@@ -108,7 +117,7 @@ export const SCHEMA_KEYS = {
   jointing: ['crossJointSpacing_m', 'fractureFrequency_per_m', 'rqd', 'jointCondition', 'jointFriction_deg'],
   hoekBrown: ['mi', 'disturbance'],
   design: ['fsTarget', 'deflectionLimitRatio', 'characteristic', 'basis', 'tensileBasis', 'crushingStrength', 'planeStrainModulus'],
-  fsTarget: ['tension', 'crushing', 'sliding'],
+  fsTarget: ['tension', 'crushing', 'sliding', 'bolt'],
   uncertainty: ['samples', 'seed', 'method', 'acceptablePf', 'variables'],
   variable: ['path', 'distribution', 'mean', 'cov', 'sd', 'min', 'max', 'mode'],
 } as const;
@@ -119,6 +128,35 @@ export const VARIABLE_DISTRIBUTIONS: readonly VariableDistributionName[] = ['nor
 export const MIN_SAMPLES = 100;
 export const MAX_SAMPLES = 1_000_000;
 export const MAX_VARIABLES = 100;
+
+export const BOLT_ACTIONS: readonly BoltAction[] = ['suspension', 'beamBuilding'];
+
+/**
+ * Hard bounds of a bolt pattern (generous; outside them the input is refused so that every
+ * accepted pattern analyses without NaN): length 0.1–20 m, capacity and shear capacity
+ * 0–5000 kN (exclusive of 0), spacings 0.1–10 m, anchorage > 0 and < length, pretension
+ * 0 ≤ T₀ ≤ capacity. The bolt may not be longer than the strata (its tip would be in no layer).
+ */
+export const BOLT_BOUNDS = {
+  length: { unit: ' m', min: 0.1, max: 20 },
+  capacity: { unit: ' kN', min: 0, minOpen: true, max: 5000 },
+  spacing: { unit: ' m', min: 0.1, max: 10 },
+  anchorage: { unit: ' m', min: 0, minOpen: true, max: 20 },
+  pretension: { unit: ' kN', min: 0, max: 5000 },
+} as const satisfies Record<string, NumberRule>;
+
+/**
+ * Ranges of the Q ratings and of ESR, as in the published tables (Barton, Lien & Lunde 1974;
+ * from memory): Jn 0.5–20, Jr 0.5–4, Ja 0.75–20, Jw 0.05–1, SRF 0.5–400, ESR 0.5–5.
+ */
+export const Q_BOUNDS = {
+  jn: { unit: '', min: 0.5, max: 20 },
+  jr: { unit: '', min: 0.5, max: 4 },
+  ja: { unit: '', min: 0.75, max: 20 },
+  jw: { unit: '', min: 0.05, max: 1 },
+  srf: { unit: '', min: 0.5, max: 400 },
+  esr: { unit: '', min: 0.5, max: 5 },
+} as const satisfies Record<string, NumberRule>;
 
 export const OPENING_TYPES: readonly OpeningType[] = ['beam', 'slab', 'cantilever', 'intersection'];
 export const END_CONDITIONS: readonly EndCondition[] = ['clamped', 'simple'];
@@ -453,14 +491,16 @@ function finish(r: Reader, input: Raw, migratedFrom: 'lamina/1' | undefined): Va
   const opening = readOpening(r, input);
   const loads = readLoads(r, input);
   const support = readSupport(r, input);
+  const empirical = readEmpirical(r, input);
   const layers = readLayers(r, input);
   const design = readDesign(r, input);
   const uncertainty = readUncertainty(r, input, layers);
+  if (support?.bolts && layers) checkBoltAgainstStrata(r, support.bolts, layers);
 
-  if (r.errors.length > 0 || uncertainty === undefined || !opening || !loads || !support || !layers || !design || title === undefined || description === undefined) {
+  if (r.errors.length > 0 || uncertainty === undefined || !opening || !loads || !support || !empirical || !layers || !design || title === undefined || description === undefined) {
     return { ok: false, errors: r.errors, warnings: r.warnings };
   }
-  const project: Project = { schema: 'lamina/2', title, opening, loads, support, layers, design };
+  const project: Project = { schema: 'lamina/2', title, opening, loads, support, empirical, layers, design };
   if (own(input, 'uncertainty') !== undefined) project.uncertainty = uncertainty;
   const extra = migratedFrom ? { migratedFrom } : {};
   if (own(input, 'description') !== undefined) {
@@ -552,8 +592,68 @@ function readSupport(r: Reader, input: Raw): Project['support'] | undefined {
   r.unknownKeys(o, SCHEMA_KEYS.support, path);
   const standing = r.number(o, 'standing_kPa', path, NUMBERS.pressure, { default: 0 });
   r.plausible(child(path, 'standing_kPa'), standing, ' kPa', null, 500);
-  if (typeof standing !== 'number') return undefined;
-  return { standing_kPa: standing };
+  const bolts = readBolts(r, o, path);
+  if (typeof standing !== 'number' || bolts === undefined) return undefined;
+  return { standing_kPa: standing, bolts };
+}
+
+/** `support.bolts`: null/absent = no bolts; else a pattern (METHODS §12), bounds in BOLT_BOUNDS. */
+function readBolts(r: Reader, support: Raw, supportPath: string): BoltPattern | null | undefined {
+  const path = child(supportPath, 'bolts');
+  const raw = own(support, 'bolts');
+  if (raw === undefined || raw === null) return null;
+  const o = r.object(support, 'bolts', supportPath, false);
+  if (!o) return undefined;
+  r.unknownKeys(o, SCHEMA_KEYS.bolts, path);
+  const length = r.number(o, 'length_m', path, BOLT_BOUNDS.length, { required: true });
+  const capacity = r.number(o, 'capacity_kN', path, BOLT_BOUNDS.capacity, { required: true });
+  const across = r.number(o, 'spacingAcross_m', path, BOLT_BOUNDS.spacing, { required: true });
+  const along = r.number(o, 'spacingAlong_m', path, BOLT_BOUNDS.spacing, { required: true });
+  const anchorage = r.number(o, 'anchorage_m', path, BOLT_BOUNDS.anchorage, { default: DEFAULT_BOLT_ANCHORAGE_M });
+  const action = r.enumeration(o, 'action', path, BOLT_ACTIONS, 'suspension');
+  const shearDefault = typeof capacity === 'number' ? DEFAULT_BOLT_SHEAR_FRACTION * capacity : 1;
+  const shear = r.number(o, 'shearCapacity_kN', path, BOLT_BOUNDS.capacity, { default: shearDefault });
+  const pretension = r.number(o, 'pretension_kN', path, BOLT_BOUNDS.pretension, { default: 0 });
+  if (typeof length === 'number' && typeof anchorage === 'number' && !(anchorage < length)) {
+    r.error(child(path, 'anchorage_m'), `must be less than the bolt length ${length} m${own(o, 'anchorage_m') === undefined ? ` (default ${DEFAULT_BOLT_ANCHORAGE_M} m)` : ''}, got ${anchorage}`, 'RANGE');
+    return undefined;
+  }
+  if (typeof capacity === 'number' && typeof pretension === 'number' && pretension > capacity) {
+    r.error(child(path, 'pretension_kN'), `must not exceed the bolt capacity ${capacity} kN, got ${pretension}`, 'RANGE');
+    return undefined;
+  }
+  if (typeof length !== 'number' || typeof capacity !== 'number' || typeof across !== 'number' || typeof along !== 'number' ||
+    typeof anchorage !== 'number' || action === undefined || typeof shear !== 'number' || typeof pretension !== 'number') {
+    return undefined;
+  }
+  return { length_m: length, capacity_kN: capacity, spacingAcross_m: across, spacingAlong_m: along, anchorage_m: anchorage, action, shearCapacity_kN: shear, pretension_kN: pretension };
+}
+
+/** A bolt whose tip lies above the top of the strata has no layer to anchor in: refused. */
+function checkBoltAgainstStrata(r: Reader, bolts: BoltPattern, layers: readonly Layer[]): void {
+  const strata = layers.reduce((sum, l) => sum + l.thickness_m, 0);
+  if (bolts.length_m > strata + 1e-9) {
+    r.error('support.bolts.length_m', `must not exceed the total thickness of the strata ${+strata.toPrecision(6)} m (the tip would anchor in no layer), got ${bolts.length_m}`, 'RANGE');
+  }
+}
+
+/** `empirical.q`: null/absent = no Q cross-check; else the six ratings within Q_BOUNDS. */
+function readEmpirical(r: Reader, input: Raw): Project['empirical'] | undefined {
+  const o = r.object(input, 'empirical', '', false);
+  if (!o) return undefined;
+  r.unknownKeys(o, SCHEMA_KEYS.empirical, 'empirical');
+  const raw = own(o, 'q');
+  if (raw === undefined || raw === null) return { q: null };
+  const path = 'empirical.q';
+  const q = r.object(o, 'q', 'empirical', false);
+  if (!q) return undefined;
+  r.unknownKeys(q, SCHEMA_KEYS.q, path);
+  const out: Partial<QRatings> = {};
+  for (const key of SCHEMA_KEYS.q) {
+    const v = r.number(q, key, path, Q_BOUNDS[key], { required: true });
+    if (typeof v === 'number') out[key] = v;
+  }
+  return SCHEMA_KEYS.q.every((k) => typeof out[k] === 'number') ? { q: out as QRatings } : undefined;
 }
 
 function readLayers(r: Reader, input: Raw): Layer[] | undefined {
@@ -740,13 +840,14 @@ function readDesign(r: Reader, input: Raw): Project['design'] | undefined {
     const tension = r.number(fs, 'tension', fsPath, NUMBERS.factor, { default: DEFAULT_TENSION_TARGET[tensileBasis ?? 'rockMass'] });
     const crushing = r.number(fs, 'crushing', fsPath, NUMBERS.factor, { default: DEFAULT_FS_TARGET.crushing });
     const sliding = r.number(fs, 'sliding', fsPath, NUMBERS.factor, { default: DEFAULT_FS_TARGET.sliding });
-    for (const [key, value] of [['tension', tension], ['crushing', crushing], ['sliding', sliding]] as const) {
+    const bolt = r.number(fs, 'bolt', fsPath, NUMBERS.factor, { default: DEFAULT_FS_TARGET.bolt });
+    for (const [key, value] of [['tension', tension], ['crushing', crushing], ['sliding', sliding], ['bolt', bolt]] as const) {
       if (typeof value === 'number' && value < 1) {
         r.warn(child(fsPath, key), `${value} is below 1: the target accepts failure`, 'IMPLAUSIBLE');
       }
     }
-    if (typeof tension === 'number' && typeof crushing === 'number' && typeof sliding === 'number') {
-      fsTarget = { tension, crushing, sliding };
+    if (typeof tension === 'number' && typeof crushing === 'number' && typeof sliding === 'number' && typeof bolt === 'number') {
+      fsTarget = { tension, crushing, sliding, bolt };
     }
   }
   const ratio = r.number(o, 'deflectionLimitRatio', path, NUMBERS.ratio, { default: DEFAULT_DEFLECTION_LIMIT_RATIO });

@@ -105,6 +105,7 @@ export type SectionId =
   | 'header'
   | 'verdict'
   | 'inputs'
+  | 'support'
   | 'strength'
   | 'checks'
   | 'trace'

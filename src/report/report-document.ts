@@ -12,7 +12,7 @@ import { buildVerdict } from '../analysis/verdict';
 import { projectHash, writeProjectText } from '../model/project-file';
 import type { Project } from '../model/types';
 import type { UnitSystem } from '../model/units';
-import type { ReportDocument } from './document-types';
+import type { ReportDocument, Section } from './document-types';
 import { assumptionsSection } from './sections/assumptions';
 import { chartsSection } from './sections/charts';
 import { checksSection } from './sections/checks';
@@ -20,6 +20,7 @@ import type { SectionContext } from './sections/context';
 import { closingSection, headerSection } from './sections/header';
 import { inputsSection } from './sections/inputs';
 import { strengthSection } from './sections/strength';
+import { supportSection } from './sections/support';
 import { traceSection } from './sections/trace';
 import { verdictSection } from './sections/verdict';
 import { uncertaintySection } from './sections/uncertainty';
@@ -64,6 +65,8 @@ export function buildReportDocument(input: ReportInput): ReportDocument {
       inputsSection(ctx),
       strengthSection(ctx),
       checksSection(ctx),
+      // Only where the project gives support or Q ratings.
+      ...([supportSection(ctx)].filter((x): x is Section => x !== null)),
       traceSection(ctx),
       assumptionsSection(ctx),
       chartsSection(ctx),

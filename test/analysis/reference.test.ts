@@ -2,7 +2,7 @@ import { describe, it, expect } from 'vitest';
 import { analyseProject } from '../../src/analysis';
 import { reference } from './reference';
 import { designExample, presets, randomProject } from './fixtures';
-import type { Project } from '../../src/model/types';
+import type { Mode, Project } from '../../src/model/types';
 
 // Lamina's report against the independent plain implementation of METHODS.md (v2) in
 // ./reference.ts: strength, elastic and load fields to 0.5 %, voussoir to 1 % with n within 0.02
@@ -57,7 +57,7 @@ function compare(project: Project, label: string): void {
     // which checks count, per layer and mode (METHODS §10)
     for (const row of r.checks) {
       if (row.fs === null) continue;
-      expect(row.counts, `${label} layer ${row.layerIndex} ${row.mode} counts`).toBe(ref.counts[row.layerIndex][row.mode]);
+      expect(row.counts, `${label} layer ${row.layerIndex} ${row.mode} counts`).toBe(ref.counts[row.layerIndex][row.mode as Mode]);
     }
     const g = r.governing;
     const h = ref.governing;

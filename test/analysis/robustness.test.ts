@@ -106,7 +106,7 @@ describe('issue 14 item 3: finite but extreme values', () => {
       const p = tweak(designExample(), (q) => {
         q.opening.span_m = lo ? 0.01 : 1000;
         q.loads = { surcharge_kPa: hi ? 100_000 : 0, horizontalStress_MPa: hi ? 1000 : -1000 };
-        q.support = { standing_kPa: lo ? 100_000 : 0 };
+        q.support = { standing_kPa: lo ? 100_000 : 0, bolts: null };
         const l = q.layers[0];
         l.thickness_m = lo ? 0.001 : 1000;
         l.youngModulus_GPa = lo ? 0.001 : 10_000;

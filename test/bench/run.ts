@@ -9,6 +9,7 @@ import { benchCli } from './cli.bench';
 import { benchWorstCase } from './worst-case.bench';
 import { benchLab } from './lab.bench';
 import { benchUncertainty } from './uncertainty.bench';
+import { benchSupport } from './support.bench';
 import type { BenchResult } from './types';
 
 const groups: [string, () => Promise<BenchResult[]>][] = [
@@ -19,6 +20,7 @@ const groups: [string, () => Promise<BenchResult[]>][] = [
   ['worst case (fuzz set)', () => benchWorstCase()],
   ['lab', benchLab],
   ['uncertainty', benchUncertainty],
+  ['support needed', benchSupport],
 ];
 
 // The browser benchmark (edit → results, bundle size) builds the app and starts chromium.

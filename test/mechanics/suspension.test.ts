@@ -105,7 +105,7 @@ const bedArb = fc.record({
 });
 
 describe('suspension — properties', () => {
-  it('suspended weight is conserved: loads on the spanning layers add up to Σγt + surcharge − standing (statics)', () => {
+  it('suspended weight is conserved: loads on the spanning layers add up to Σγt + surcharge − the standing support applied (statics)', () => {
     fc.assert(
       fc.property(
         fc.array(bedArb, { minLength: 1, maxLength: 7 }),
@@ -118,7 +118,10 @@ describe('suspension — properties', () => {
           const total = beds.reduce((w, b) => w + b.unitWeight * b.thickness, 0);
           const sum = r.loads.reduce((a, b) => a + b, 0);
           const scale = total + surcharge + standing; // round-off is relative to the largest term
-          expect(Math.abs(sum - (total + surcharge - standing))).toBeLessThanOrEqual(1e-12 * scale);
+          // v2 (METHODS §12): standing support beyond the load it can relieve is dropped, never negative.
+          const applied = standing - r.spanning.supportExcess;
+          expect(r.spanning.supportExcess).toBeGreaterThanOrEqual(0);
+          expect(Math.abs(sum - (total + surcharge - applied))).toBeLessThanOrEqual(1e-12 * scale);
           // The hanging layers carry nothing over the opening; the bolts carry their weight.
           for (let i = 0; i < anchorLayer; i++) expect(r.loads[i]).toBe(0);
           const bolts = boltSuspension({ suspended: beds.slice(0, anchorLayer), spacingAcross: 1, spacingAlong: 1, capacity: 1 });

@@ -14,7 +14,7 @@ describe('defaults', () => {
     const p = defaultProject();
     expect(p.layers).toHaveLength(1);
     expect(p.opening).toStrictEqual({ type: 'beam', span_m: 6, length_m: null, ends: 'clamped', edges: null });
-    expect(p.support).toStrictEqual({ standing_kPa: 0 });
+    expect(p.support).toStrictEqual({ standing_kPa: 0, bolts: null });
     const r = validateProject(p);
     expect(r.ok).toBe(true);
     expect(r.warnings).toEqual([]);
@@ -33,8 +33,8 @@ describe('defaults', () => {
 
   it('default FS targets: tension 2 on the rock-mass basis (common practice 1.5–2, METHODS §10, memory), 4 on the lab basis (Obert & Duvall, memory); crushing 2, sliding 1.5', () => {
     expect(DEFAULT_TENSION_TARGET).toStrictEqual({ rockMass: 2, lab: 4 });
-    expect(DEFAULT_FS_TARGET).toStrictEqual({ tension: 2, crushing: 2, sliding: 1.5 });
-    expect(defaultDesign().fsTarget).toStrictEqual({ tension: 2, crushing: 2, sliding: 1.5 });
+    expect(DEFAULT_FS_TARGET).toStrictEqual({ tension: 2, crushing: 2, sliding: 1.5, bolt: 1.5 }); // bolt 1.5: METHODS §12, common practice
+    expect(defaultDesign().fsTarget).toStrictEqual({ tension: 2, crushing: 2, sliding: 1.5, bolt: 1.5 });
     expect(defaultDesign().tensileBasis).toBe('rockMass');
     expect(defaultDesign().crushingStrength).toBe('rockMass');
   });

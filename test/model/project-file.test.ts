@@ -90,10 +90,10 @@ describe('writeProjectText', () => {
     expect(text.endsWith('}\n')).toBe(true);
     expect(text.startsWith('{\n  "schema": "lamina/2",\n  "title": ')).toBe(true);
     const raw = JSON.parse(text);
-    expect(Object.keys(raw)).toEqual(['schema', 'title', 'description', 'opening', 'loads', 'support', 'layers', 'design']);
+    expect(Object.keys(raw)).toEqual(['schema', 'title', 'description', 'opening', 'loads', 'support', 'empirical', 'layers', 'design']);
     expect(Object.keys(raw.opening)).toEqual(['type', 'span_m', 'length_m', 'ends', 'edges']);
     expect(Object.keys(raw.loads)).toEqual(['surcharge_kPa', 'horizontalStress_MPa']);
-    expect(Object.keys(raw.support)).toEqual(['standing_kPa']);
+    expect(Object.keys(raw.support)).toEqual(['standing_kPa', 'bolts']);
     expect(Object.keys(raw.layers[0])).toEqual([
       'name', 'thickness_m', 'unitWeight_kNm3', 'youngModulus_GPa', 'modulusBasis', 'poisson',
       'ucs_MPa', 'rockClass', 'tensile', 'jointing', 'hoekBrown',
@@ -111,7 +111,7 @@ describe('writeProjectText', () => {
 
   it('writes keys in the same order whatever order the object was built in', () => {
     const p = defaultProject();
-    const shuffled = { design: p.design, layers: p.layers, support: p.support, loads: p.loads, opening: p.opening, title: p.title, schema: p.schema };
+    const shuffled = { design: p.design, layers: p.layers, support: p.support, empirical: p.empirical, loads: p.loads, opening: p.opening, title: p.title, schema: p.schema };
     expect(writeProjectText(shuffled)).toBe(writeProjectText(p));
   });
 

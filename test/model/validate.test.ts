@@ -58,9 +58,9 @@ describe('validateProject — accepts and normalises', () => {
     expect('description' in p).toBe(false);
     expect(p.opening).toStrictEqual({ type: 'beam', span_m: 6, length_m: null, ends: 'clamped', edges: null });
     expect(p.loads).toStrictEqual({ surcharge_kPa: 0, horizontalStress_MPa: 0 });
-    expect(p.support).toStrictEqual({ standing_kPa: 0 });
+    expect(p.support).toStrictEqual({ standing_kPa: 0, bolts: null });
     expect(p.design).toStrictEqual({
-      fsTarget: { tension: 2, crushing: 2, sliding: 1.5 }, // METHODS §10 default targets on the rock-mass basis
+      fsTarget: { tension: 2, crushing: 2, sliding: 1.5, bolt: 1.5 }, // METHODS §10 default targets on the rock-mass basis
       deflectionLimitRatio: 0.1, // Diederichs & Kaiser 1999 (METHODS §3)
       characteristic: 'mean',
       basis: 'intact',

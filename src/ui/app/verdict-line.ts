@@ -7,7 +7,7 @@
  * @fires show-trace - the governing factor of safety was clicked
  */
 import { LitElement, html, css, nothing } from 'lit';
-import type { Mode, Project } from '../../model/types';
+import type { CheckMode, Project } from '../../model/types';
 import type { UnitSystem } from '../../model/units';
 import { formatQuantity } from '../../model/units';
 import type { Analysis } from '../../analysis/types';
@@ -18,7 +18,7 @@ import { tokens } from '../styles/tokens';
 import { sheet } from '../styles/sheet';
 import { tracedValue } from '../inputs/traced-value';
 
-const MODE_PATH: Record<Mode, string> = {
+const MODE_PATH: Partial<Record<CheckMode, string>> = {
   tension: 'elastic.fsTension',
   crushing: 'voussoir.fsCrushing',
   sliding: 'voussoir.fsSliding',
@@ -103,7 +103,9 @@ export class VerdictLine extends LitElement {
     const fsPart =
       g.mode === 'snapThrough'
         ? html`no arch can form (counts as FS 0)`
-        : html`FS ${tracedValue(`layers[${g.layerIndex}].${MODE_PATH[g.mode]}`, numberText(g.fs, 3), g.fs)} against a target of ${numberText(g.target, 3)}`;
+        : MODE_PATH[g.mode] === undefined
+          ? html`FS ${numberText(g.fs, 3)} against a target of ${numberText(g.target, 3)}`
+          : html`FS ${tracedValue(`layers[${g.layerIndex}].${MODE_PATH[g.mode]}`, numberText(g.fs, 3), g.fs)} against a target of ${numberText(g.target, 3)}`;
     return html`<p data-mode=${g.mode} data-fs=${String(g.fs)} data-layer=${g.layerIndex}>
       <span class="status ${v.status}" title=${text('governing')}>${STATUS_TEXT[v.status]}</span>
       Governing: ${MODE_NAME[g.mode]} of <strong>${g.layerIndex + 1} ${g.layer}</strong>, ${fsPart}.${tally} ${spanText}${pending}

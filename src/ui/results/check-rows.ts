@@ -4,7 +4,7 @@
  * CLI), with what the app adds — the trace path of each number and its display quantity.
  * No mechanics and no counting rules here.
  */
-import type { CheckRow, Mode, Report } from '../../model/types';
+import type { CheckMode, CheckRow, Report } from '../../model/types';
 import type { Quantity } from '../../model/units';
 
 export interface CheckValue {
@@ -20,7 +20,7 @@ export interface CheckValue {
 export interface CheckRowView {
   row: CheckRow;
   layer: number;
-  mode: Mode;
+  mode: CheckMode;
   /** True for the row `report.governing` names (by layer index and mode). */
   governing: boolean;
   demand: CheckValue | null;
@@ -69,6 +69,14 @@ export function checkRowViews(report: Report): CheckRowView[] {
         if (row.capacity !== null) capacity = { value: row.capacity, quantity: null, path: null, qualifier: 'limit' };
         break;
       case 'snapThrough':
+        break;
+      case 'skin':
+        if (row.demand !== null) demand = { value: row.demand, quantity: 'stress', path: null, qualifier: 'between bolts' };
+        if (row.capacity !== null) capacity = { value: row.capacity, quantity: 'stress', path: null, qualifier: 'strength' };
+        break;
+      case 'bolt':
+      case 'interlayerShear':
+        // kN per bolt and kPa at an interface: shown by the row's note (no unit conversion here yet).
         break;
     }
     const note = row.reason ? `Not counted: ${row.reason}. ${row.note}` : row.note;

@@ -29,9 +29,10 @@ export function project(name0 = 'Shale'): Project {
     title: 'Fixture room',
     opening: { type: 'beam', span_m: 6, length_m: null, ends: 'clamped', edges: null },
     loads: { surcharge_kPa: 10, horizontalStress_MPa: 0 },
-    support: { standing_kPa: 0 },
+    support: { standing_kPa: 0, bolts: null },
+    empirical: { q: null },
     layers: [layer(name0, 0.45, 'sedimentary', 8), layer('Sandstone', 1.8, 'igneous', 20), layer('Mudstone', 0.9, 'metamorphic', 6)],
-    design: { fsTarget: { tension: 4, crushing: 2, sliding: 1.5 }, deflectionLimitRatio: 0.1, characteristic: 'mean', basis: 'intact', tensileBasis: 'rockMass', crushingStrength: 'rockMass', planeStrainModulus: false },
+    design: { fsTarget: { tension: 4, crushing: 2, sliding: 1.5, bolt: 1.5 }, deflectionLimitRatio: 0.1, characteristic: 'mean', basis: 'intact', tensileBasis: 'rockMass', crushingStrength: 'rockMass', planeStrainModulus: false },
   };
 }
 
@@ -58,6 +59,8 @@ export function analysis(p: Project = project()): Analysis {
     checks: [],
     governing: { layerIndex: 0, layer: p.layers[0].name, mode: 'tension', fs: 0.404, target: 4 },
     maxSpan_m: MAX_SPAN,
+    support: null,
+    empirical: null,
     warnings: [],
     trace: [],
   };

@@ -26,6 +26,8 @@ function analyse(p: Project): Analysis {
       checks: [],
       governing: { layerIndex: gi, layer: p.layers[gi].name, mode: 'tension', fs: p.layers[gi].thickness_m, target: 2 },
       maxSpan_m: null,
+      support: null,
+      empirical: null,
       warnings: [],
       trace: [],
     },
