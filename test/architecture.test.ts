@@ -27,6 +27,21 @@ describe('architecture', () => {
   it('finds the source files', () => {
     expect(all.length).toBeGreaterThan(30);
   });
+  it('every folder under src is ranked (a new folder fails until it gets a place in the layers)', () => {
+    const folders = readdirSync(src).filter((name) => statSync(join(src, name)).isDirectory());
+    expect(folders.length).toBeGreaterThan(5);
+    for (const folder of folders) expect(folder in RANK, `src/${folder} has no rank in test/architecture.test.ts`).toBe(true);
+    // files directly in src are entry points only: the browser entry main.ts and the library entry index.ts
+    const loose = readdirSync(src).filter((name) => !statSync(join(src, name)).isDirectory());
+    expect(loose.filter((f) => f.endsWith('.ts')).sort()).toEqual(['index.ts', 'main.ts']);
+  });
+  it('the check rules live in analysis only: no other layer imports the check table internals or re-derives counting', () => {
+    for (const file of all.filter((f) => !['analysis'].includes(layerOf(f)))) {
+      const text = readFileSync(file, 'utf8');
+      expect(/findIndex\(\(l\) => l\.name === /.test(text), `${relative(root, file)} looks up a layer by name`).toBe(false);
+      expect(/design\.basis === 'jointed' && .*tension/.test(text), `${relative(root, file)} re-derives the tension rule`).toBe(false);
+    }
+  });
   it('every import points to the same layer or a lower one (DESIGN.md layers)', () => {
     for (const file of all) {
       const from = layerOf(file);

@@ -8,7 +8,8 @@ import type { LayerReport, Project, Report, VoussoirReport, Warning } from '../m
 import type { Analysis, GroupDetail, LabDetail, LayerDetail, StrengthStep } from './types';
 import { evaluate, plateAspect, type LayerState, type State } from './evaluate';
 import { projectToSI, type LayerSI, type ProjectSI } from './inputs';
-import { governingCheck, layerChecks, targetFor } from './checks';
+import { allCountedMeet, BLOCK_RATIO, checkTable, DEEP_BEAM_RATIO, governingOf } from './check-table';
+import { MODE_SHORT } from './check-labels';
 import { maxSpans, spanFsFunction, SPAN_CAP_M, SPAN_FLOOR_M } from './span-finder';
 import { SOURCES, TraceBuilder } from './trace';
 import { beamCoefficients } from '../mechanics/beam';
@@ -19,7 +20,8 @@ const kPa = 1e-3;
 const GPa = 1e-9;
 const mm = 1e3;
 
-const MODE_WORDS = { tension: 'tension', crushing: 'crushing', sliding: 'sliding', snapThrough: 'snap-through', deflection: 'deflection' } as const;
+/** δ/t beyond which the small-deflection voussoir solution is past its range (METHODS §3a; Sofianos 1996). */
+const LARGE_DEFLECTION_RATIO = 0.1;
 
 export function analyse(project: Project): Analysis {
   const p = projectToSI(project);
@@ -45,22 +47,35 @@ export function analyse(project: Project): Analysis {
 
   groupWarnings(p, state, warnings);
   traceGroups(p, state, groups, trace);
+  supportWarnings(p, state, warnings);
 
-  // Governing check at the current span.
-  const checks = layerChecks(state, p.design);
-  const gov = governingCheck(checks);
-  const governing = gov ? { layer: p.layers[gov.layer].name, mode: gov.mode, fs: gov.fs } : null;
-  if (gov) {
+  // The opening as analysed: an intersection is checked on its diagonal (METHODS §14).
+  const opening = {
+    type: p.type,
+    span_m: p.entrySpan,
+    designSpan_m: p.span,
+    basis: p.type === 'intersection' ? ('diagonal' as const) : ('span' as const),
+  };
+  if (p.type === 'intersection') {
+    trace.add('opening.designSpan_m', 'Design span of the intersection (diagonal)', 'sqrt(w1^2 + w2^2)', { w1: [p.entrySpan, 'm'], w2: [p.entrySpan * Math.sqrt(p.spanScale ** 2 - 1), 'm'] },
+      p.span, 'm', SOURCES.intersection, 'An intersection rests on pillar corners: it is checked as a beam spanning the diagonal of the entry widths.');
+    warnings.push({ code: 'INTERSECTION_DIAGONAL', path: 'opening', message: `Intersection: checked as a beam (${p.ends} ends) spanning the diagonal ${round(p.span)} m of the ${round(p.entrySpan)} m and ${round(p.entrySpan * Math.sqrt(p.spanScale ** 2 - 1))} m entries; the largest spans are entry widths w1 with w2/w1 held.` });
+  }
+
+  // The check table and the governing check at the current span.
+  const checks = checkTable(p, state);
+  const governing = governingOf(checks);
+  if (governing) {
     trace.add(
       'governing.fs',
-      `Governing check: ${MODE_WORDS[gov.mode]} in ${p.layers[gov.layer].name}`,
+      `Governing check: ${MODE_SHORT[governing.mode]} in ${governing.layer} (layer ${governing.layerIndex + 1})`,
       'FS',
-      { FS: [gov.fs, ''] },
-      gov.fs,
+      { FS: [governing.fs, ''] },
+      governing.fs,
       '',
       SOURCES.lamina,
-      `The smallest FS/target of all applicable checks: FS ${round(gov.fs)} against a target of ${round(gov.target)}` +
-        (p.design.basis === 'jointed' && state.ends !== 'cantilever' ? '; tension is excluded because the roof is taken as cracked (basis "jointed").' : '.'),
+      `The smallest FS/target of the checks that count: FS ${round(governing.fs)} against a target of ${round(governing.target)}. ` +
+        'A layer that does not crack counts its tension check; a cracked layer (cross-jointed, or basis "jointed") counts its voussoir checks; a block (s/t < 2) never counts its voussoir.',
     );
   }
 
@@ -71,7 +86,7 @@ export function analyse(project: Project): Analysis {
     if (value === null) continue;
     trace.add(
       `maxSpan_m.${mode}`,
-      `Largest span for ${MODE_WORDS[mode]}`,
+      `Largest ${p.type === 'cantilever' ? 'overhang' : p.type === 'intersection' ? 'entry width' : 'span'} for ${MODE_SHORT[mode]}`,
       's_max',
       { s_max: [value, 'm'] },
       value,
@@ -80,21 +95,29 @@ export function analyse(project: Project): Analysis {
       (value >= SPAN_CAP_M
         ? `The target holds at every span up to the ${SPAN_CAP_M} m search cap.`
         : value === 0
-          ? `The ${MODE_WORDS[mode]} target is not met at any span down to ${SPAN_FLOOR_M * 1e3} mm, the smallest span searched.`
-          : `Largest span with the ${MODE_WORDS[mode]} target met in every layer, by bracketing and bisection to 1 mm; all else fixed.`) +
-        (mode === 'tension' ? ' Strengths held at the current-span values; cross-jointed layers excluded; a layer with cross-joints limits the span to its joint spacing.' : '') +
-        (p.type === 'slab' ? ' Slab: the aspect ratio is held fixed.' : ''),
+          ? `The ${MODE_SHORT[mode]} target is not met at any span down to ${SPAN_FLOOR_M * 1e3} mm, the smallest span searched.`
+          : `Largest span with the ${MODE_SHORT[mode]} target met in every layer in which it counts at the current span, by bracketing and bisection to 1 mm; all else fixed.`) +
+        (mode === 'tension' ? ' Strengths held at the current-span values; a layer with cross-joints is limited to its joint spacing (beyond it the layer is cracked).' : '') +
+        (p.type === 'slab' ? ' Slab: the aspect ratio is held fixed.' : '') +
+        (p.type === 'intersection' ? ' Intersection: the value is the entry width w1, with w2/w1 held and the diagonal analysed.' : ''),
     );
   }
   if (maxSpan.governing !== null) {
-    trace.add('maxSpan_m.governing', 'Largest span meeting every target', 's_max', { s_max: [maxSpan.governing, 'm'] }, maxSpan.governing, 'm', SOURCES.lamina,
-      'The smallest of the per-mode largest spans' + (p.design.basis === 'jointed' && state.ends !== 'cantilever' ? ' (tension excluded: basis "jointed").' : '.'));
+    trace.add('maxSpan_m.governing', 'Largest span meeting every counted target', 's_max', { s_max: [maxSpan.governing, 'm'] }, maxSpan.governing, 'm', SOURCES.lamina,
+      'The smallest of the per-mode largest spans (each over the layers in which the mode counts).');
   }
   if (state.ends !== 'cantilever') {
     warnings.push({
       code: 'SLIDING_SPAN',
       path: 'maxSpan_m.sliding',
       message: 'FS sliding rises with span (fc grows as s²), so sliding never limits the span from above; a sliding shortfall is reported at the current span.',
+    });
+  }
+  if (p.horizontalStress > 0 && state.ends !== 'cantilever') {
+    warnings.push({
+      code: 'HORIZONTAL_STRESS_VOUSSOIR',
+      path: 'loads.horizontalStress_MPa',
+      message: `The voussoir model (Diederichs & Kaiser 1999) has no in-situ horizontal stress. Lamina adds σh = ${round(p.horizontalStress * MPa)} MPa to the arch thrust in the crushing check (demand fc + σh) and gives it no credit in sliding or snap-through, which may relax once the roof cracks (METHODS §3a).`,
     });
   }
   if (p.type === 'slab' && p.length !== null && p.length / p.span > plateAspect(p)) {
@@ -116,8 +139,10 @@ export function analyse(project: Project): Analysis {
   for (let i = 1; i < state.layers.length; i++) if (state.layers[i].group !== state.layers[i - 1].group) separations.push([i - 1, i]);
 
   const report: Report = {
-    schema: 'lamina-report/1',
+    schema: 'lamina-report/2',
+    opening,
     layers,
+    checks,
     governing,
     maxSpan_m: maxSpan,
     warnings,
@@ -130,10 +155,9 @@ export function analyseProject(project: Project): Report {
   return analyse(project).report;
 }
 
-/** True when every applicable check meets its target (CLI exit code 0; 1 otherwise). */
-export function meetsTargets(project: Project, report: Report): boolean {
-  const g = report.governing;
-  return g === null || g.fs >= targetFor(g.mode, project.design) * (1 - 1e-12);
+/** True when every counted check meets its target (CLI exit code 0; 1 otherwise). */
+export function meetsTargets(_project: Project, report: Report): boolean {
+  return allCountedMeet(report.checks);
 }
 
 // ------------------------------------------------------------------ per layer
@@ -164,14 +188,24 @@ function layerResults(p: ProjectSI, state: State, i: number, ls: LayerState, tra
   const g = state.shared.groups[ls.group];
   if (g.first === g.last) {
     trace.add(`${base}.load_kPa`, `Load carried by ${layer.name}`, 'gamma * t + p_x', { gamma: [layer.unitWeight * kPa, 'kN/m^3'], t: [layer.thickness, 'm'], p_x: [g.extra * kPa, 'kPa'] },
-      ls.load * kPa, 'kPa', SOURCES.obertDuvall, extraNote(p, ls.group, state.shared.groups.length));
+      ls.load * kPa, 'kPa', SOURCES.obertDuvall, extraNote(p, state, ls.group, state.shared.groups.length));
   } else {
     trace.add(`${base}.load_kPa`, `Load carried by ${layer.name} (shared in group ${ls.group + 1})`, 'Ei * t^3 * (W + p_x) / S',
       { Ei: [ls.modulusBeam * GPa, 'GPa'], t: [layer.thickness, 'm'], W: [g.weight * kPa, 'kPa'], p_x: [g.extra * kPa, 'kPa'], S: [g.stiffness * GPa, 'GPa m^3'] },
-      ls.load * kPa, 'kPa', SOURCES.obertDuvall, `Layers ${g.first + 1}–${g.last + 1} bend together and share the load in proportion to E t³. ${extraNote(p, ls.group, state.shared.groups.length)}`);
+      ls.load * kPa, 'kPa', SOURCES.obertDuvall, `Layers ${g.first + 1}–${g.last + 1} bend together and share the load in proportion to E t³. ${extraNote(p, state, ls.group, state.shared.groups.length)}`);
   }
-  if (!(ls.load > 0)) {
-    warnings.push({ code: 'NO_NET_LOAD', path: `${base}`, message: `${layer.name}: the support pressure exceeds the load on this layer (q = ${round(ls.load * kPa)} kPa); bending and voussoir checks show no demand.` });
+  if (!(ls.load > 0) && !(state.shared.supportExcess > 0)) {
+    warnings.push({ code: 'NO_NET_LOAD', path: `${base}`, message: `${layer.name}: no net load on this layer (q = ${round(ls.load * kPa)} kPa); bending and voussoir checks show no demand.` });
+  }
+  const slenderness = state.span / layer.thickness;
+  if (slenderness <= DEEP_BEAM_RATIO) {
+    const block = slenderness < BLOCK_RATIO && state.ends !== 'cantilever';
+    warnings.push({
+      code: 'DEEP_BEAM',
+      path: `${base}.thickness_m`,
+      message: `${layer.name}: span/thickness ${round(slenderness)} ≤ ${DEEP_BEAM_RATIO}, a deep beam: beam theory and the voussoir arch assume a slender layer, so its beam${state.ends === 'cantilever' ? '' : ' and voussoir'} results are approximate.` +
+        (block ? ` With s/t < ${BLOCK_RATIO} it is a block rather than a beam: its voussoir checks are shown but not counted. A block cut by joints must be checked as a block (joint geometry, in-situ stress), which Lamina does not model.` : ''),
+    });
   }
 
   const elastic = elasticReport(base, layer, ls, state, p, trace, warnings);
@@ -232,11 +266,27 @@ function layerResults(p: ProjectSI, state: State, i: number, ls: LayerState, tra
   return { report, detail };
 }
 
-function extraNote(p: ProjectSI, group: number, count: number): string {
+function extraNote(p: ProjectSI, state: State, group: number, count: number): string {
   const parts: string[] = [];
   if (group === count - 1 && p.surcharge !== 0) parts.push(`surcharge ${round(p.surcharge * kPa)} kPa on the top group`);
-  if (group === 0 && p.support !== 0) parts.push(`support ${round(p.support * kPa)} kPa on group 1`);
+  if (group === 0 && p.support !== 0) {
+    const applied = state.shared.supportApplied;
+    parts.push(applied < p.support
+      ? `standing support ${round(p.support * kPa)} kPa on group 1, capped at the ${round(applied * kPa)} kPa it can relieve`
+      : `standing support ${round(p.support * kPa)} kPa (upward) on group 1`);
+  }
   return parts.length ? `p_x: ${parts.join(', ')}.` : 'No surcharge or support on this group (p_x = 0).';
+}
+
+/** Standing support beyond the load it relieves is dropped (METHODS §12). */
+function supportWarnings(p: ProjectSI, state: State, warnings: Warning[]): void {
+  const excess = state.shared.supportExcess;
+  if (!(excess > 0)) return;
+  warnings.push({
+    code: 'SUPPORT_EXCEEDS_LOAD',
+    path: 'support.standing_kPa',
+    message: `Standing support ${round(p.support * kPa)} kPa exceeds the ${round(state.shared.supportApplied * kPa)} kPa of load it can relieve on the lowest bending group; the excess ${round(excess * kPa)} kPa is dropped (it would lift the roof). The loads it relieves are taken as 0, never negative.`,
+  });
 }
 
 function labDetail(layer: LayerSI, ls: LayerState, p: ProjectSI): LabDetail {
@@ -298,10 +348,14 @@ function strengthSteps(layer: LayerSI, ls: LayerState, p: ProjectSI): StrengthSt
       label: 'Characteristic',
       value_MPa: c.characteristic * MPa,
       reason:
-        p.design.characteristic === 'lower5' && c.kn !== null
-          ? `5 % fractile m(1 − kn V), kn = ${c.kn}, V = ${round(c.stats?.cov ?? 0)}.`
-          : 'Mean value used.',
-      source: p.design.characteristic === 'lower5' && c.kn !== null ? SOURCES.en1990 : SOURCES.statistics,
+        c.kn === null
+          ? 'Mean value used.'
+          : p.design.characteristic === 'lower5'
+            ? `5 % fractile m(1 − kn V), kn = ${c.kn}, V = ${round(c.stats?.cov ?? 0)}.`
+            : p.design.characteristic === 'cautiousMean'
+              ? `Cautious mean m(1 − t V/√n), t/√n = ${round(c.kn)}, V = ${round(c.stats?.cov ?? 0)}.`
+              : `Lognormal 5 % fractile exp(m_y − kn s_y), kn = ${c.kn}.`,
+      source: c.kn === null ? SOURCES.statistics : p.design.characteristic === 'cautiousMean' ? SOURCES.en1997 : p.design.characteristic === 'lower5Log' ? SOURCES.en1990Log : SOURCES.en1990,
     },
     {
       key: 'block',
@@ -321,7 +375,11 @@ function strengthSteps(layer: LayerSI, ls: LayerState, p: ProjectSI): StrengthSt
       key: 'design',
       label: 'Design',
       value_MPa: c.design * MPa,
-      reason: c.crossJointed ? 'Cross-jointed across the span: no tensile strength across joints.' : 'The smaller of block-scale and rock-mass strength.',
+      reason: c.crossJointed
+        ? 'Cross-jointed across the span: no tensile strength across joints.'
+        : c.tensileBasis === 'lab'
+          ? 'Tensile basis "lab": the block-scale strength.'
+          : 'Tensile basis "rockMass": the smaller of block-scale and rock-mass strength.',
       source: c.crossJointed ? SOURCES.crossJoint : SOURCES.lamina,
     },
   ];
@@ -355,13 +413,21 @@ function traceStrength(base: string, layer: LayerSI, ls: LayerState, p: ProjectS
       trace.add(`detail.${base}.lab.sd_MPa`, `Standard deviation of ${layer.name}`, `sqrt((${dev}) / ${symbols.length - 1})`, { ...values, m: [c.stats.mean * MPa, 'MPa'] }, c.stats.sd * MPa, 'MPa', SOURCES.statistics, 'Sample standard deviation (n − 1).');
       trace.add(`detail.${base}.lab.cov`, `Coefficient of variation of ${layer.name}`, 'sd / m', { sd: [c.stats.sd * MPa, 'MPa'], m: [c.stats.mean * MPa, 'MPa'] }, c.stats.cov, '', SOURCES.statistics);
     }
-    if (p.design.characteristic === 'lower5' && c.kn !== null) {
+    const rule = p.design.characteristic;
+    if (rule === 'lower5' && c.kn !== null) {
       const raw = c.stats.mean * (1 - c.kn * c.stats.cov);
       trace.add(`${base}.strength.characteristic_MPa`, `Characteristic (5 % fractile) of ${layer.name}`, raw >= 0 ? 'm * (1 - kn * V)' : 'max(m * (1 - kn * V), 0 MPa)',
         { m: [c.stats.mean * MPa, 'MPa'], kn: [c.kn, ''], V: [c.stats.cov, ''] }, c.characteristic * MPa, 'MPa', SOURCES.en1990, `kn for n = ${c.stats.n} (table value; the larger kn between tabulated n).`);
+    } else if (rule === 'cautiousMean' && c.kn !== null) {
+      const raw = c.stats.mean * (1 - c.kn * c.stats.cov);
+      trace.add(`${base}.strength.characteristic_MPa`, `Characteristic (cautious mean) of ${layer.name}`, raw >= 0 ? 'm * (1 - k * V)' : 'max(m * (1 - k * V), 0 MPa)',
+        { m: [c.stats.mean * MPa, 'MPa'], k: [c.kn, ''], V: [c.stats.cov, ''] }, c.characteristic * MPa, 'MPa', SOURCES.en1997, `k = t(0.95, n − 1)/√n for n = ${c.stats.n}: the cautious estimate of the mean for a failure involving a large volume of ground.`);
+    } else if (rule === 'lower5Log' && c.kn !== null && c.logStats) {
+      trace.add(`${base}.strength.characteristic_MPa`, `Characteristic (lognormal 5 % fractile) of ${layer.name}`, 'exp(m_y - kn * s_y) * 1 MPa',
+        { m_y: [c.logStats.mean - Math.log(1e6), ''], kn: [c.kn, ''], s_y: [c.logStats.sd, ''] }, c.characteristic * MPa, 'MPa', SOURCES.en1990Log, `y = ln(strength in MPa); kn for n = ${c.stats.n} (Table D1, V unknown).`);
     } else {
       trace.add(`${base}.strength.characteristic_MPa`, `Characteristic strength of ${layer.name}`, 'm', { m: [c.characteristic * MPa, 'MPa'] }, c.characteristic * MPa, 'MPa', SOURCES.statistics,
-        p.design.characteristic === 'lower5' ? 'Fewer than 3 accepted specimens: the mean is used.' : 'Rule "mean": the mean direct strength.');
+        rule !== 'mean' ? `Too few accepted specimens for rule "${rule}": the mean is used.` : 'Rule "mean": the mean direct strength.');
     }
   } else {
     trace.add(`${base}.strength.characteristic_MPa`, `Characteristic strength of ${layer.name}`, 'sigma_direct', { sigma_direct: [c.direct * MPa, 'MPa'] }, c.characteristic * MPa, 'MPa', 'Project input',
@@ -384,15 +450,21 @@ function traceStrength(base: string, layer: LayerSI, ls: LayerState, p: ProjectS
   trace.add(`detail.${base}.hoekBrown.mb`, `Hoek–Brown mb of ${layer.name}`, 'mi * exp((GSI - 100) / (28 - 14 * D))', { mi: [layer.mi, ''], GSI: [c.gsi, ''], D: [layer.disturbance, ''] }, c.mb, '', SOURCES.hoekBrown);
   trace.add(`detail.${base}.hoekBrown.s`, `Hoek–Brown s of ${layer.name}`, 'exp((GSI - 100) / (9 - 3 * D))', { GSI: [c.gsi, ''], D: [layer.disturbance, ''] }, c.s, '', SOURCES.hoekBrown);
   trace.add(`detail.${base}.hoekBrown.a`, `Hoek–Brown a of ${layer.name}`, '1 / 2 + (exp(-GSI / 15) - exp(-20 / 3)) / 6', { GSI: [c.gsi, ''] }, c.a, '', SOURCES.hoekBrown);
-  trace.add(`detail.${base}.hoekBrown.massUcs_MPa`, `Rock-mass UCS of ${layer.name}`, 'sigma_ci * s^a', { sigma_ci: [layer.ucs * MPa, 'MPa'], s: [c.s, ''], a: [c.a, ''] }, c.massUcs * MPa, 'MPa', SOURCES.hoekBrown);
+  trace.add(`detail.${base}.hoekBrown.massUcs_MPa`, `Rock-mass UCS of ${layer.name}`, 'sigma_ci * s^a', { sigma_ci: [layer.ucs * MPa, 'MPa'], s: [c.s, ''], a: [c.a, ''] }, c.massUcs * MPa, 'MPa', SOURCES.hoekBrown,
+    p.design.crushingStrength === 'rockMass' ? 'Used as the crushing strength of the voussoir (crushingStrength "rockMass").' : undefined);
   trace.add(`${base}.strength.mass_MPa`, `Rock-mass tensile strength of ${layer.name}`, 'sigma_k * s * mi / mb', { sigma_k: [c.characteristic * MPa, 'MPa'], s: [c.s, ''], mi: [layer.mi, ''], mb: [c.mb, ''] },
     c.mass * MPa, 'MPa', SOURCES.hoekBrown, 'The measured tensile strength scaled by the Hoek–Brown ratio of rock-mass to intact tensile strength, (s σci/mb)/(σci/mi).');
   if (c.crossJointed) {
     trace.add(`${base}.strength.design_MPa`, `Design tensile strength of ${layer.name}`, '0 MPa', {}, 0, 'MPa', SOURCES.crossJoint,
       `Cross-joint spacing ${round(layer.crossJointSpacing ?? 0)} m < span ${round(p.span)} m: no tensile strength across the joints.`);
   } else {
-    trace.add(`${base}.strength.design_MPa`, `Design tensile strength of ${layer.name}`, 'min(sigma_block, sigma_mass)', { sigma_block: [c.block * MPa, 'MPa'], sigma_mass: [c.mass * MPa, 'MPa'] },
-      c.design * MPa, 'MPa', SOURCES.lamina);
+    if (p.design.tensileBasis === 'lab') {
+      trace.add(`${base}.strength.design_MPa`, `Design tensile strength of ${layer.name}`, 'sigma_block', { sigma_block: [c.block * MPa, 'MPa'] },
+        c.design * MPa, 'MPa', SOURCES.lamina, 'Tensile basis "lab": the characteristic direct strength with the size effect, the basis on which Obert & Duvall’s tension factors of 4–8 were set.');
+    } else {
+      trace.add(`${base}.strength.design_MPa`, `Design tensile strength of ${layer.name}`, 'min(sigma_block, sigma_mass)', { sigma_block: [c.block * MPa, 'MPa'], sigma_mass: [c.mass * MPa, 'MPa'] },
+        c.design * MPa, 'MPa', SOURCES.lamina, 'Tensile basis "rockMass": the lab strength scaled to the rock mass.');
+    }
   }
 }
 
@@ -471,8 +543,16 @@ function voussoirReport(base: string, layer: LayerSI, ls: LayerState, state: Sta
   trace.add(`${base}.voussoir.deflection_mm`, `Voussoir midspan deflection, ${layer.name}`, 'z0 - z', { z0: [v.initialLeverArm, 'm'], z: [v.leverArm, 'm'] }, v.deflection * mm, 'mm', SOURCES.voussoir);
   trace.add(`${base}.voussoir.deflectionRatio`, `Deflection ratio δ/t, ${layer.name}`, 'delta / t', { delta: [v.deflection * mm, 'mm'], t }, v.deflectionRatio, '', SOURCES.voussoir,
     `Limit ${p.design.deflectionLimitRatio}: δ/t ≈ 0.1 marks the onset of non-linear response, ≈ 0.25 is ultimate.`);
-  trace.add(`${base}.voussoir.fsCrushing`, `FS crushing, ${layer.name}`, 'sigma_c / fc', { sigma_c: [layer.ucs * MPa, 'MPa'], fc: [v.maxCompression * MPa, 'MPa'] }, v.fsCrushing ?? 0, '', SOURCES.voussoir,
-    'σc is the layer UCS as given (intact); no reduction is applied.');
+  if (v.deflectionRatio > LARGE_DEFLECTION_RATIO) {
+    warnings.push({ code: 'LARGE_DEFLECTION', path: `${base}.voussoir.deflectionRatio`,
+      message: `${layer.name}: voussoir δ/t = ${round(v.deflectionRatio)} > ${LARGE_DEFLECTION_RATIO}: the small-deflection solution is past its range (Sofianos 1996; Brady & Brown §8.5), so the other voussoir numbers of this layer are no longer reliable.` });
+  }
+  const shUsed = Math.max(0, p.horizontalStress);
+  trace.add(`${base}.voussoir.fsCrushing`, `FS crushing, ${layer.name}`, 'sigma_c / (fc + sigma_h)',
+    { sigma_c: [ls.crushingStrength * MPa, 'MPa'], fc: [v.maxCompression * MPa, 'MPa'], sigma_h: [shUsed * MPa, 'MPa'] }, v.fsCrushing ?? 0, '', SOURCES.voussoirCrushing,
+    (p.design.crushingStrength === 'lab' ? 'σc: the layer UCS as given (crushingStrength "lab").' : 'σc: the rock-mass UCS σci·s^a (crushingStrength "rockMass").') +
+      ' The in-situ horizontal stress is added to the arch thrust (the voussoir model has none; conservative)' +
+      (p.horizontalStress < 0 ? '; a tensile σh is taken as 0.' : '.') + ' Sliding and snap-through take no credit for σh.');
   trace.add(`${base}.voussoir.fsSliding`, `FS sliding at the abutment, ${layer.name}`, 'fc * n * tan(phi) / (gamma_e * s)', { fc: [v.maxCompression * MPa, 'MPa'], n, phi: [layer.jointFriction, 'deg'], gamma_e: [ls.effectiveUnitWeight * kPa, 'kN/m^3'], s },
     v.fsSliding ?? 0, '', SOURCES.voussoir);
   return {

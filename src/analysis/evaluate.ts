@@ -21,6 +21,8 @@ export interface PlateState {
 
 export interface LayerState {
   chain: StrengthChain;
+  /** Compressive strength of the voussoir crushing check, Pa: rock-mass σci·s^a or the UCS as given. */
+  crushingStrength: number;
   /** Modulus after the modulus basis (rock-mass modulus when the input is intact). */
   modulusMass: number;
   /** Modulus in the elastic beam: modulusMass, or modulusMass/(1 − ν²) with the plane-strain option. */
@@ -47,7 +49,7 @@ export interface LayerState {
 export interface State {
   span: number;
   ends: BeamEnds;
-  shared: SharedLoads;
+  shared: SharedLoads & { groupOf: number[] };
   layers: LayerState[];
 }
 
@@ -62,6 +64,7 @@ export function chainFor(layer: LayerSI, span: number, p: ProjectSI): StrengthCh
     method: layer.tensileMethod,
     rockClass: layer.rockClass,
     characteristic: p.design.characteristic,
+    tensileBasis: p.design.tensileBasis,
     thickness: layer.thickness,
     span,
     crossJointSpacing: layer.crossJointSpacing,
@@ -99,7 +102,7 @@ export function plateAspect(p: ProjectSI): number {
 /** β, α for a slab at `plateAspect` (the aspect ratio is held fixed when the span varies). */
 export function plateFor(p: ProjectSI, poisson: number): PlateCoefficients | null {
   if (p.type !== 'slab' || p.length === null) return null;
-  return plateCoefficients({ aspect: plateAspect(p), edges: p.ends, poisson });
+  return plateCoefficients({ aspect: plateAspect(p), edges: p.plateEdges, poisson });
 }
 
 export interface EvaluateOptions {
@@ -111,15 +114,30 @@ export interface EvaluateOptions {
   voussoirOnly?: number;
 }
 
-export function voussoirFor(layer: LayerSI, span: number, thickness: number, effectiveUnitWeight: number, modulus: number): VoussoirResult | null {
+/** Crushing strength of the voussoir (METHODS §3a): "rockMass" σci·s^a (default) or "lab" (UCS as given). */
+export function crushingStrengthFor(layer: LayerSI, chain: StrengthChain, p: ProjectSI): number {
+  return p.design.crushingStrength === 'lab' ? layer.ucs : chain.massUcs;
+}
+
+/** The voussoir of one layer; σh enters its crushing demand only (METHODS §3a). null when unloaded. */
+export function voussoirFor(
+  layer: LayerSI,
+  span: number,
+  thickness: number,
+  effectiveUnitWeight: number,
+  modulus: number,
+  crushingStrength: number,
+  horizontalStress: number,
+): VoussoirResult | null {
   if (!(effectiveUnitWeight > 0)) return null;
   return solveVoussoir({
     span,
     thickness,
     unitWeight: effectiveUnitWeight,
     modulus,
-    ucs: layer.ucs,
+    ucs: crushingStrength,
     frictionDeg: layer.jointFriction,
+    horizontalStress,
   });
 }
 
@@ -181,9 +199,14 @@ export function layerState(
     fsTension = chain.design / maxTension;
   }
   const effectiveUnitWeight = load / t;
-  const voussoir = wantVoussoir && ends !== 'cantilever' ? voussoirFor(layer, span, t, effectiveUnitWeight, moduli.mass) : null;
+  const crushingStrength = crushingStrengthFor(layer, chain, p);
+  const voussoir =
+    wantVoussoir && ends !== 'cantilever'
+      ? voussoirFor(layer, span, t, effectiveUnitWeight, moduli.mass, crushingStrength, p.horizontalStress)
+      : null;
   return {
     chain,
+    crushingStrength,
     modulusMass: moduli.mass,
     modulusBeam: moduli.beam,
     group,

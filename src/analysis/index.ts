@@ -1,8 +1,11 @@
-/** The analysis layer: orchestrates the kernels into the report, traces and chart data. */
+/** The analysis layer: orchestrates the kernels into the report, the check table, the verdict, traces and chart data. */
 export { analyse, analyseProject, meetsTargets } from './analyse';
 export { spanCurve } from './span-curve';
 export { beamProfile } from './profile';
 export { designChart } from './design-chart';
 export { slabField } from './slab-field';
 export { minimumThickness } from './thickness';
+export { buildVerdict, layerPhrase, spanWordOf, type Verdict, type VerdictSentence } from './verdict';
+export { MODES, VOUSSOIR_MODES, MODE_LABEL, MODE_NAME, MODE_SHORT, STATUS_TEXT, STATUS_WORD, STATUS_SYMBOL, STATUS_LEGEND, statusDescription } from './check-labels';
+export { targetFor, REASONS } from './check-table';
 export type * from './types';

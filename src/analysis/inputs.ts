@@ -3,6 +3,7 @@
  * practical units in its key names; this is the one place they are converted for analysis.
  */
 import type { Design, EndCondition, Layer, OpeningType, Project } from '../model/types';
+import type { PlateInput } from '../mechanics/plate';
 import type { SpecimenSI } from '../strength/specimens';
 
 export interface LayerSI {
@@ -28,11 +29,19 @@ export interface LayerSI {
 
 export interface ProjectSI {
   type: OpeningType;
+  /** Design span, m: the clear span; for an intersection the diagonal √(w1² + w2²) (METHODS §14). */
   span: number;
+  /** The span as entered (opening.span_m): the entry width w1 for an intersection. */
+  entrySpan: number;
+  /** span / entrySpan: 1, or √(1 + (w2/w1)²) for an intersection (held fixed in the span search). */
+  spanScale: number;
   /** Slab long side, m; null unless a slab. */
   length: number | null;
   ends: EndCondition;
+  /** Plate edge supports (slab): `opening.edges` as short/long pairs, or `ends` on every edge. */
+  plateEdges: PlateInput['edges'];
   surcharge: number;
+  /** Standing support, Pa (capped at the load it relieves in the layering). */
   support: number;
   horizontalStress: number;
   layers: LayerSI[];
@@ -68,14 +77,28 @@ export function layerToSI(layer: Layer): LayerSI {
   };
 }
 
+/**
+ * Design span of an intersection: the diagonal √(w1² + w2²) of the entry widths (METHODS §14;
+ * memory). 6 × 6 m → 8.485 m; 8 × 10 m → 12.806 m.
+ */
+export function intersectionDiagonal(w1: number, w2: number): number {
+  return Math.hypot(w1, w2);
+}
+
 export function projectToSI(project: Project): ProjectSI {
+  const o = project.opening;
+  const entrySpan = o.span_m;
+  const span = o.type === 'intersection' ? intersectionDiagonal(o.span_m, o.length_m ?? o.span_m) : o.span_m;
   return {
-    type: project.opening.type,
-    span: project.opening.span_m,
-    length: project.opening.type === 'slab' ? project.opening.length_m : null,
-    ends: project.opening.ends,
+    type: o.type,
+    span,
+    entrySpan,
+    spanScale: span / entrySpan,
+    length: o.type === 'slab' ? o.length_m : null,
+    ends: o.ends,
+    plateEdges: o.type === 'slab' && o.edges ? { shortEdges: o.edges.short, longEdges: o.edges.long } : o.ends,
     surcharge: project.loads.surcharge_kPa * 1e3,
-    support: project.loads.support_kPa * 1e3,
+    support: project.support.standing_kPa * 1e3,
     horizontalStress: project.loads.horizontalStress_MPa * 1e6,
     layers: project.layers.map(layerToSI),
     design: project.design,

@@ -8,19 +8,19 @@
  *     // { ok: true, result: { row: 2, name: 'Room 1', status: 'below', governing: {…}, maxSpan_m: 4.2, … } }
  */
 import type { OpeningInput } from '../model/openings-csv';
-import type { Loads, Mode, Opening, Project } from '../model/types';
+import type { Loads, Mode, Opening, Project, Support } from '../model/types';
 import { parseProject, ProjectError, type FieldIssue } from '../model/validate';
 import { analyse, meetsTargets } from './analyse';
-import { targetFor } from './checks';
 
 export interface OpeningResult {
   row: number;
   name: string;
   opening: Opening;
   loads: Loads;
+  support: Support;
   /** "meets" every target, "below" one, or "n/a" when no check applies (no net load). */
   status: 'meets' | 'below' | 'n/a';
-  governing: { layer: string; mode: Mode; fs: number; target: number } | null;
+  governing: { layerIndex: number; layer: string; mode: Mode; fs: number; target: number } | null;
   /** Largest span meeting every target (m), all else fixed; null where none is found. */
   maxSpan_m: number | null;
   /** Warnings of this opening's analysis and of its opening and loads fields. */
@@ -36,18 +36,19 @@ export function openingProject(strata: Project, input: OpeningInput): Project {
     opening: {
       type: input.type,
       span_m: input.span_m,
-      length_m: input.type === 'slab' ? input.length_m : null,
-      ends: input.ends ?? strata.opening.ends,
+      length_m: input.type === 'slab' || input.type === 'intersection' ? input.length_m : null,
+      ends: input.ends ?? (input.type === 'intersection' ? 'simple' : strata.opening.ends),
+      edges: null,
     },
     loads: {
       surcharge_kPa: input.surcharge_kPa ?? strata.loads.surcharge_kPa,
-      support_kPa: input.support_kPa ?? strata.loads.support_kPa,
       horizontalStress_MPa: input.horizontalStress_MPa ?? strata.loads.horizontalStress_MPa,
     },
+    support: { standing_kPa: input.support_kPa ?? strata.support.standing_kPa },
   };
 }
 
-const ROW_FIELDS = /^(opening|loads)(\.|$)/;
+const ROW_FIELDS = /^(opening|loads|support)(\.|$)/;
 
 /** Validate and analyse one opening. Refusals keep the validator's field paths. */
 export function checkOpening(strata: Project, input: OpeningInput): OpeningCheck {
@@ -62,7 +63,7 @@ export function checkOpening(strata: Project, input: OpeningInput): OpeningCheck
   const analysis = analyse(project);
   const report = analysis.report;
   const g = report.governing;
-  const governing = g === null ? null : { layer: g.layer, mode: g.mode, fs: g.fs, target: targetFor(g.mode, project.design) };
+  const governing = g === null ? null : { layerIndex: g.layerIndex, layer: g.layer, mode: g.mode, fs: g.fs, target: g.target };
   return {
     ok: true,
     result: {
@@ -70,6 +71,7 @@ export function checkOpening(strata: Project, input: OpeningInput): OpeningCheck
       name: input.name,
       opening: project.opening,
       loads: project.loads,
+      support: project.support,
       status: g === null ? 'n/a' : meetsTargets(project, report) ? 'meets' : 'below',
       governing,
       maxSpan_m: report.maxSpan_m?.governing ?? null,

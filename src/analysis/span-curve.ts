@@ -1,30 +1,42 @@
 /**
- * FS versus span for each mode (governing over the layers), for the app's and the report's
- * chart: the same function the span finder searches, sampled on a grid.
+ * FS versus span for each mode, for the app's and the report's chart: the same function the
+ * span finder searches, sampled on a grid of entered spans (entry widths for an intersection).
+ * A mode counted in some layer at the current span is drawn over those layers (`counts` true);
+ * a mode counted nowhere (e.g. the voussoir reserve of an uncracked roof) is drawn over every
+ * layer where it applies, with `counts` false, so the chart can say it does not count.
  */
 import type { Mode, Project } from '../model/types';
-import { targetFor } from './checks';
+import { MODES } from './check-labels';
+import { countedModesAt, layerCondition, targetFor } from './check-table';
 import { evaluate } from './evaluate';
 import { projectToSI } from './inputs';
-import { spanFsFunction, SPAN_CAP_M } from './span-finder';
+import { spanFsFunction, SPAN_CAP_M, type SpanInclude } from './span-finder';
 import type { SpanCurve } from './types';
 
 export function spanCurve(project: Project, options: { samples?: number; maxSpan_m?: number } = {}): SpanCurve {
   const p = projectToSI(project);
   const state = evaluate(p);
-  const fsAt = spanFsFunction(p, state);
+  const counted = countedModesAt(p, state);
+  const counts = Object.fromEntries(MODES.map((m) => [m, counted.some((c) => c[m])])) as Record<Mode, boolean>;
+  const cantilever = state.ends === 'cantilever';
+  const include: SpanInclude = (i, mode) => {
+    if (counts[mode]) return counted[i][mode];
+    if (mode === 'tension') return cantilever || !layerCondition(p, state.layers[i], state.span, p.layers[i].thickness, cantilever).cracked;
+    return !cantilever;
+  };
+  const fsAt = spanFsFunction(p, state, include);
   const samples = Math.max(2, Math.min(1000, Math.round(options.samples ?? 80)));
-  const top = Math.min(SPAN_CAP_M, Math.max(options.maxSpan_m ?? 2.5 * p.span, p.span * 1.05));
-  const modes: Mode[] = ['tension', 'crushing', 'sliding', 'snapThrough', 'deflection'];
+  const entry = p.entrySpan;
+  const top = Math.min(SPAN_CAP_M, Math.max(options.maxSpan_m ?? 2.5 * entry, entry * 1.05));
   const spans: number[] = [];
-  const fs = Object.fromEntries(modes.map((m) => [m, [] as (number | null)[]])) as SpanCurve['fs'];
+  const fs = Object.fromEntries(MODES.map((m) => [m, [] as (number | null)[]])) as SpanCurve['fs'];
   const clampFs = (v: number | null) => (v === null ? null : Math.min(v, 1e6));
   for (let k = 1; k <= samples; k++) {
     const s = (top * k) / samples;
     spans.push(s);
-    const at = fsAt(s);
-    for (const m of modes) fs[m].push(clampFs(at[m]));
+    const at = fsAt(s * p.spanScale);
+    for (const m of MODES) fs[m].push(clampFs(at[m]));
   }
-  const targets = Object.fromEntries(modes.map((m) => [m, targetFor(m, p.design)])) as SpanCurve['targets'];
-  return { spans_m: spans, fs, targets, currentSpan_m: p.span };
+  const targets = Object.fromEntries(MODES.map((m) => [m, targetFor(m, p.design)])) as SpanCurve['targets'];
+  return { spans_m: spans, fs, targets, counts, currentSpan_m: entry };
 }

@@ -1,20 +1,20 @@
 /**
- * Largest span per mode (METHODS §11 v2): the largest s in [1 mm, 100 m] with FS(s) ≥ target in
- * every layer, all else fixed, found by bracketing and bisection to 1 mm; the bracket continues
- * down to 1 mm, so a mode that holds only at very short spans reports that span, and 0 only
- * when it fails even at 1 mm. Every value is therefore in [0, 100] or null (mode not
- * applicable). Tension: only layers not cross-jointed at the current span take part (every
- * layer of a cantilever), with their strengths held at the current-span values; a layer with
- * cross-joints limits its tension span to its joint spacing (beyond it the layer is cracked),
- * and a cross-jointed overhang has its uncracked strength min(block, mass) up to its spacing.
- * Snap-through: the largest s with a voussoir solution in every layer. Deflection: δ/t ≤
- * limit. Sliding never limits the span from above (null). For a slab the aspect ratio is held
- * fixed. governing = the smallest non-null value (tension excluded when the basis is
- * "jointed", except for a cantilever).
+ * Largest span per mode (METHODS §11 v2): the largest s in [1 mm, 100 m] with FS(s) ≥ target
+ * in every layer in which that mode counts at the current span (the check table's rule, §10),
+ * all else fixed, found by bracketing and bisection to 1 mm; the bracket continues down to
+ * 1 mm, so a mode that holds only at very short spans reports that span, and 0 only when it
+ * fails even at 1 mm. Every value is therefore in [0, 100] or null (the mode counts in no
+ * layer). Tension: strengths are held at the current-span values, and a layer with
+ * cross-joints limits its tension span to its joint spacing (beyond it the layer is cracked);
+ * a cross-jointed overhang has its uncracked strength up to its spacing. Snap-through: the
+ * largest s with a voussoir solution. Deflection: δ/t ≤ limit. Sliding never limits the span
+ * from above (null). For a slab the aspect ratio is held fixed; for an intersection the ratio
+ * of the entry widths, and every value is an entry width w1 (the design span is the diagonal).
+ * governing = the smallest non-null value.
  */
 import type { MaxSpanReport, Mode } from '../model/types';
 import { largestPassingSpan } from '../mechanics/span-search';
-import { deflectionFs, targetFor } from './checks';
+import { countedModesAt, deflectionFs, targetFor } from './check-table';
 import type { State } from './evaluate';
 import { elasticBeam } from '../mechanics/beam';
 import { solveVoussoir, type VoussoirResult } from '../mechanics/voussoir';
@@ -29,7 +29,17 @@ const PASS = 1e12;
 
 export type SpanFs = Record<Mode, number | null>;
 
+/** Which layers take part in each mode: include(layerIndex, mode). */
+export type SpanInclude = (layer: number, mode: Mode) => boolean;
+
+/** The layers and modes counted at the current span (the check table's rule). */
+export function countedInclude(p: ProjectSI, current: State): SpanInclude {
+  const counted = countedModesAt(p, current);
+  return (i, mode) => counted[i][mode];
+}
+
 type VoussoirMode = 'crushing' | 'sliding' | 'snapThrough' | 'deflection';
+const VOUSSOIR: readonly VoussoirMode[] = ['crushing', 'sliding', 'snapThrough', 'deflection'];
 
 /** FS of one layer in one voussoir mode (PASS where the value is null: no demand). */
 function voussoirModeFs(v: VoussoirResult, mode: VoussoirMode, limit: number): number {
@@ -45,20 +55,27 @@ function voussoirModeFs(v: VoussoirResult, mode: VoussoirMode, limit: number): n
 /**
  * The span-dependent part of every layer, with the loads, moduli, strengths and plate
  * coefficients taken from the current state once (they do not depend on the span). Each
- * layer's voussoir solution is kept per span, so the modes share it.
+ * layer's voussoir solution is kept per span, so the modes share it. Spans here are DESIGN
+ * spans (the diagonal for an intersection).
  */
-function spanBeds(p: ProjectSI, current: State) {
+function spanBeds(p: ProjectSI, current: State, include: SpanInclude) {
   const cantilever = current.ends === 'cantilever';
   return current.layers.map((layer, i) => {
     const input = p.layers[i];
     const beta = layer.plate ? layer.plate.coefficients.beta : null;
-    const voussoirInput = !cantilever && layer.effectiveUnitWeight > 0 ? { thickness: input.thickness, unitWeight: layer.effectiveUnitWeight, modulus: layer.modulusMass, ucs: input.ucs, frictionDeg: input.jointFriction } : null;
+    const voussoirInput =
+      !cantilever && layer.effectiveUnitWeight > 0
+        ? { thickness: input.thickness, unitWeight: layer.effectiveUnitWeight, modulus: layer.modulusMass, ucs: layer.crushingStrength, frictionDeg: input.jointFriction, horizontalStress: p.horizontalStress }
+        : null;
     const solved = new Map<number, VoussoirResult>();
+    const modes = VOUSSOIR.filter((m) => include(i, m));
     return {
-      eligible: !layer.chain.crossJointed || cantilever,
+      tensionIncluded: include(i, 'tension'),
+      voussoirIncluded: (mode: VoussoirMode) => voussoirInput !== null && modes.includes(mode),
       // beyond its joint spacing a layer is cracked: no tension capacity (METHODS §11)
       spacing: input.crossJointSpacing ?? Infinity,
-      design: layer.chain.crossJointed ? Math.min(layer.chain.block, layer.chain.mass) : layer.chain.design,
+      // a layer cross-jointed at the current span is tested with the strength it has below its spacing
+      design: layer.chain.crossJointed ? layer.chain.designUncracked : layer.chain.design,
       /** FS tension at a span (PASS where there is no net tension). */
       tension(span: number): number {
         if (span > this.spacing) return 0;
@@ -69,7 +86,6 @@ function spanBeds(p: ProjectSI, current: State) {
             : elasticBeam({ ends: current.ends, span, thickness: t, load: layer.load, modulus: layer.modulusBeam, horizontalStress: p.horizontalStress }).maxTension;
         return net > 0 ? this.design / net : PASS;
       },
-      hasVoussoir: voussoirInput !== null,
       voussoir(span: number): VoussoirResult {
         let v = solved.get(span);
         if (!v) {
@@ -83,14 +99,13 @@ function spanBeds(p: ProjectSI, current: State) {
 }
 
 /**
- * Governing FS per mode at a span, strengths and cross-jointing held at the current-span state.
- * null: the mode does not apply. snapThrough: 1 stands, 0 snaps. Loads, moduli and plate
- * coefficients do not depend on the span, so they are taken from the current state once and
- * only the span-dependent kernels run per call (this is the span search's hot path).
+ * Least FS per mode over the included layers at a DESIGN span (the diagonal for an
+ * intersection), strengths held at the current-span state. null: no included layer has the
+ * mode. snapThrough: 1 stands, 0 snaps.
  */
-export function spanFsFunction(p: ProjectSI, current: State): (span: number) => SpanFs {
+export function spanFsFunction(p: ProjectSI, current: State, include: SpanInclude = countedInclude(p, current)): (span: number) => SpanFs {
   const limit = p.design.deflectionLimitRatio;
-  const beds = spanBeds(p, current);
+  const beds = spanBeds(p, current, include);
   const cache = new Map<number, SpanFs>();
   return (span: number): SpanFs => {
     const hit = cache.get(span);
@@ -101,10 +116,8 @@ export function spanFsFunction(p: ProjectSI, current: State): (span: number) => 
       out[mode] = prev === null ? value : Math.min(prev, value);
     };
     for (const b of beds) {
-      if (b.eligible) least('tension', b.tension(span));
-      if (!b.hasVoussoir) continue;
-      const v = b.voussoir(span);
-      for (const mode of ['crushing', 'sliding', 'snapThrough', 'deflection'] as const) least(mode, voussoirModeFs(v, mode, limit));
+      if (b.tensionIncluded) least('tension', b.tension(span));
+      for (const mode of VOUSSOIR) if (b.voussoirIncluded(mode)) least(mode, voussoirModeFs(b.voussoir(span), mode, limit));
     }
     cache.set(span, out);
     return out;
@@ -112,13 +125,13 @@ export function spanFsFunction(p: ProjectSI, current: State): (span: number) => 
 }
 
 /**
- * Pass/fail of one mode at a span for the search: the same minimum over the layers as
- * `spanFsFunction`, but it stops at the first layer that fails, starting from the layer that
- * failed last (above the largest span most layers fail, so most samples cost one layer).
+ * Pass/fail of one mode at a design span for the search: the same minimum over the included
+ * layers as `spanFsFunction`, but it stops at the first layer that fails, starting from the
+ * layer that failed last (above the largest span most layers fail, so most samples cost one layer).
  */
-function modePasses(p: ProjectSI, current: State): (mode: Exclude<Mode, 'sliding'>, span: number) => boolean {
+function modePasses(p: ProjectSI, current: State, include: SpanInclude): (mode: Exclude<Mode, 'sliding'>, span: number) => boolean {
   const limit = p.design.deflectionLimitRatio;
-  const beds = spanBeds(p, current);
+  const beds = spanBeds(p, current, include);
   const lastFail: Partial<Record<Mode, number>> = {};
   return (mode, span) => {
     const target = targetFor(mode, p.design);
@@ -129,10 +142,10 @@ function modePasses(p: ProjectSI, current: State): (mode: Exclude<Mode, 'sliding
       const b = beds[i];
       let fs: number;
       if (mode === 'tension') {
-        if (!b.eligible) continue;
+        if (!b.tensionIncluded) continue;
         fs = b.tension(span);
       } else {
-        if (!b.hasVoussoir) continue;
+        if (!b.voussoirIncluded(mode)) continue;
         fs = voussoirModeFs(b.voussoir(span), mode, limit);
       }
       if (!(fs / target >= 1)) {
@@ -144,19 +157,22 @@ function modePasses(p: ProjectSI, current: State): (mode: Exclude<Mode, 'sliding
   };
 }
 
+/**
+ * Largest span per mode, as the entered span (entry width w1 for an intersection, with w2/w1
+ * held); `fsAt` takes the design span. Modes counted in no layer are null.
+ */
 export function maxSpans(p: ProjectSI, current: State, fsAt: (span: number) => SpanFs = spanFsFunction(p, current)): MaxSpanReport {
   const here = fsAt(current.span);
-  const passes = modePasses(p, current);
+  const passes = modePasses(p, current, countedInclude(p, current));
   const find = (mode: Exclude<Mode, 'sliding'>): number | null => {
     if (here[mode] === null) return null;
-    return largestPassingSpan((s) => (passes(mode, s) ? 1 : 0), { cap: SPAN_CAP_M, tolerance: SPAN_TOLERANCE_M / 10, floor: SPAN_FLOOR_M });
+    return largestPassingSpan((w) => (passes(mode, w * p.spanScale) ? 1 : 0), { cap: SPAN_CAP_M, tolerance: SPAN_TOLERANCE_M / 10, floor: SPAN_FLOOR_M });
   };
   const tension = find('tension');
   const crushing = find('crushing');
   const snapThrough = find('snapThrough');
   const deflection = find('deflection');
-  const tensionCounts = p.design.basis === 'intact' || current.ends === 'cantilever';
-  const candidates = [tensionCounts ? tension : null, crushing, snapThrough, deflection].filter((v): v is number => v !== null);
+  const candidates = [tension, crushing, snapThrough, deflection].filter((v): v is number => v !== null);
   return {
     tension,
     crushing,

@@ -34,7 +34,7 @@ export interface LabDetail {
   cov: number | null;
   kn: number | null;
   characteristic_MPa: number;
-  rule: 'mean' | 'lower5';
+  rule: 'mean' | 'lower5' | 'cautiousMean' | 'lower5Log';
 }
 
 /** One step of the strength chain, for the step chart and the report. */
@@ -71,7 +71,7 @@ export interface GroupDetail {
   weight_kPa: number;
   /** Σ E t³ of the group's layers. */
   stiffness_GPam3: number;
-  /** Surcharge (top group) minus support (group 0) applied to the group. */
+  /** Surcharge (top group) minus the standing support applied (group 0, capped at the load it relieves). */
   extra_kPa: number;
 }
 
@@ -90,6 +90,9 @@ export interface SpanCurve {
   fs: Record<Mode, (number | null)[]>;
   /** Targets on the same scale as `fs` (deflection and snapThrough: 1). */
   targets: Record<Mode, number>;
+  /** Whether the mode counts (in some layer) at the current span, from the check table. */
+  counts: Record<Mode, boolean>;
+  /** The entered span (entry width w1 for an intersection; `spans_m` are on the same scale). */
   currentSpan_m: number;
 }
 
@@ -112,6 +115,8 @@ export interface DesignChart {
   /** fs[mode][thicknessIndex][spanIndex]; null where the mode does not apply. */
   fs: Record<Mode, (number | null)[][]>;
   targets: Record<Mode, number>;
+  /** Whether the mode counts for this layer at the project's span and thickness (check table). */
+  counts: Record<Mode, boolean>;
 }
 
 /** Bending-stress field over a slab (for contour plots). */

@@ -15,15 +15,15 @@ Usage:
       thickness_mm, peakLoad_kN, valid).
   lamina openings FILE OPENINGS.csv [--csv OUT.csv] [--json | --jsonl] [--units SI|US]
       Checks every opening of the table under the strata, loads and targets of FILE and
-      writes one results row per opening. Columns: name, type (beam|slab|cantilever),
-      span_m, and optionally length_m (slabs), ends (clamped|simple), surcharge_kPa,
-      support_kPa, horizontalStress_MPa (or span_ft, length_ft, surcharge_psf,
+      writes one results row per opening. Columns: name, type (beam|slab|cantilever|intersection),
+      span_m, and optionally length_m (slab long side, intersection w2), ends (clamped|simple), surcharge_kPa,
+      support_kPa (standing support), horizontalStress_MPa (or span_ft, length_ft, surcharge_psf,
       support_psf, horizontalStress_psi); a blank cell takes the value in FILE.
   lamina help
   (From a clone without the command installed: npm run lamina -- check FILE …)
 
 Options:
-  --json           check: the lamina-report/1 JSON of one file; with several files an
+  --json           check: the lamina-report/2 JSON of one file; with several files an
                    array of {file, status, exit, report | errors}; openings: an array
   --jsonl          as --json, one JSON document per line (per file, or per opening)
   --markdown       print the calculation report as Markdown

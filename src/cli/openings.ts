@@ -10,7 +10,7 @@ import { csvFormatRows } from 'd3-dsv';
 import { checkOpening, type OpeningResult } from '../analysis/openings';
 import { parseOpeningsCsv, type OpeningField, type OpeningsCsv } from '../model/openings-csv';
 import { displayUnit, fileUnit, formatQuantity, toDisplay, unitLabel, type Quantity, type UnitSystem } from '../model/units';
-import { MODE_NAME } from '../report/check-rows';
+import { MODE_NAME } from '../analysis/check-labels';
 import { numberText } from '../report/number-text';
 import { UsageError, type ParsedArgs } from './args';
 import { neutraliseCsvText as safeCsvText } from '../report/csv-cell';
@@ -28,7 +28,7 @@ const FIELD_OF_PATH: Record<string, OpeningField> = {
   'opening.length_m': 'length_m',
   'opening.ends': 'ends',
   'loads.surcharge_kPa': 'surcharge_kPa',
-  'loads.support_kPa': 'support_kPa',
+  'support.standing_kPa': 'support_kPa',
   'loads.horizontalStress_MPa': 'horizontalStress_MPa',
 };
 
@@ -67,7 +67,7 @@ export function openingsCsv(results: readonly OpeningResult[], units: UnitSystem
   const rows = results.map((r) => [
     r.row, safeCsvText(r.name), r.opening.type, q(r.opening.span_m, 'length', units), q(r.opening.length_m, 'length', units),
     r.opening.type === 'cantilever' ? '' : r.opening.ends,
-    q(r.loads.surcharge_kPa, 'pressure', units), q(r.loads.support_kPa, 'pressure', units), q(r.loads.horizontalStress_MPa, 'stress', units),
+    q(r.loads.surcharge_kPa, 'pressure', units), q(r.support.standing_kPa, 'pressure', units), q(r.loads.horizontalStress_MPa, 'stress', units),
     r.status, r.governing ? safeCsvText(r.governing.layer) : '', r.governing?.mode ?? '', r.governing?.fs ?? '', r.governing?.target ?? '',
     q(r.maxSpan_m, 'length', units), safeCsvText(r.warnings.join('; ')),
   ]);

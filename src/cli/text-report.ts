@@ -3,7 +3,8 @@ import type { Analysis } from '../analysis/types';
 import type { MaxSpanReport, Project } from '../model/types';
 import { CAUTION } from '../model/caution';
 import { formatQuantity, type UnitSystem } from '../model/units';
-import { checkRows, MODE_NAME } from '../report/check-rows';
+import { MODE_LABEL, STATUS_TEXT } from '../analysis/check-labels';
+import { buildVerdict } from '../analysis/verdict';
 import { numberText } from '../report/number-text';
 
 const fs = (x: number | null) => (x === null ? '—' : numberText(x, 3));
@@ -16,11 +17,11 @@ export function caution(): string {
   return `CAUTION: ${CAUTION}`;
 }
 
-export function spanLines(maxSpan: MaxSpanReport | null, units: UnitSystem): string[] {
-  if (!maxSpan) return ['Largest span: not computed.'];
+export function spanLines(maxSpan: MaxSpanReport | null, units: UnitSystem, word = 'span'): string[] {
+  if (!maxSpan) return [`Largest ${word}: not computed.`];
   const q = (v: number | null) => (v === null ? 'n/a' : formatQuantity(v, 'length', units));
   return [
-    'Largest span meeting the targets (all else fixed, to 1 mm; search cap 100 m):',
+    `Largest ${word} meeting the targets (modes counted at the current ${word}; all else fixed, to 1 mm; search cap 100 m):`,
     `  tension       ${q(maxSpan.tension)}`,
     `  crushing      ${q(maxSpan.crushing)}`,
     `  sliding       ${q(maxSpan.sliding)}${maxSpan.sliding === null ? ' (FS sliding rises with span: never limits it)' : ''}`,
@@ -39,12 +40,15 @@ export function checkText(project: Project, analysis: Analysis, units: UnitSyste
   const lines: string[] = [];
   lines.push(`Lamina check — ${project.title}`, caution(), '');
   lines.push(
-    `Opening: ${o.type}, span ${L(o.span_m)}${o.type === 'slab' && o.length_m !== null ? ` × length ${L(o.length_m)}` : ''}${o.type === 'cantilever' ? '' : `, ${o.ends} ${o.type === 'slab' ? 'edges' : 'ends'}`}`,
-    `Loads: surcharge ${P(project.loads.surcharge_kPa)}, support ${P(project.loads.support_kPa)}, horizontal stress ${S(project.loads.horizontalStress_MPa)}`,
-    `Design basis: ${project.design.basis}; characteristic value: ${project.design.characteristic}`,
+    o.type === 'intersection'
+      ? `Opening: intersection, entries ${L(o.span_m)} × ${L(o.length_m ?? o.span_m)}, checked as a beam on the diagonal ${L(r.opening.designSpan_m)}, ${o.ends} ends`
+      : `Opening: ${o.type}, ${o.type === 'cantilever' ? 'overhang' : 'span'} ${L(o.span_m)}${o.type === 'slab' && o.length_m !== null ? ` × length ${L(o.length_m)}` : ''}${o.type === 'cantilever' ? '' : `, ${o.ends} ${o.type === 'slab' ? 'edges' : 'ends'}`}${o.type === 'slab' && o.edges ? ` (short edges ${o.edges.short}, long edges ${o.edges.long})` : ''}`,
+    `Loads: surcharge ${P(project.loads.surcharge_kPa)}, standing support ${P(project.support.standing_kPa)}, horizontal stress ${S(project.loads.horizontalStress_MPa)}`,
+    `Design basis: ${project.design.basis}; tensile basis: ${project.design.tensileBasis}; crushing strength: ${project.design.crushingStrength}; characteristic value: ${project.design.characteristic}`,
     '',
   );
-  const rows = checkRows(project, r);
+  const verdict = buildVerdict(project, r, units);
+  const g = r.governing;
   r.layers.forEach((layer, i) => {
     const st = layer.strength;
     lines.push(`Layer ${i + 1}: ${layer.name} — thickness ${L(layer.thickness_m)}, bending group ${layer.group + 1}, load ${P(layer.load_kPa)}`);
@@ -68,19 +72,16 @@ export function checkText(project: Project, analysis: Analysis, units: UnitSyste
         `  Voussoir: n ${numberText(v.n, 3)}, lever arm ${L(v.leverArm_m ?? 0)}, fc ${S(v.maxCompression_MPa)}, deflection ${formatQuantity(v.deflection_mm, 'deflection', units)} (δ/t ${numberText(v.deflectionRatio, 3)})`,
       );
     lines.push(`  ${pad('check', 42)}${pad('FS', 9)}${pad('target', 8)}status`);
-    for (const row of rows.filter((x) => x.layerIndex === i)) {
-      lines.push(`  ${pad(row.label, 42)}${pad(fs(row.fs), 9)}${pad(numberText(row.target, 3), 8)}${row.status.text}${row.governing ? '  ← governing' : ''}`);
+    for (const row of r.checks.filter((x) => x.layerIndex === i)) {
+      const governs = g !== null && g.layerIndex === row.layerIndex && g.mode === row.mode;
+      const why = row.reason ? `  (${row.reason})` : '';
+      lines.push(`  ${pad(MODE_LABEL[row.mode], 42)}${pad(fs(row.fs), 9)}${pad(numberText(row.target, 3), 8)}${STATUS_TEXT[row.status]}${governs ? '  ← governing' : why}`);
     }
     lines.push('');
   });
-  if (r.governing) {
-    const target = rows.find((x) => x.governing)?.target ?? 1;
-    const ok = r.governing.fs >= target;
-    lines.push(`Governing: ${MODE_NAME[r.governing.mode]} in ${r.governing.layer}, FS ${fs(r.governing.fs)} against a target of ${numberText(target, 3)} — ${ok ? 'meets the target ✓' : 'BELOW the target ✗'}.`);
-  } else {
-    lines.push('Governing: no check applies (no layer carries a net load).');
-  }
-  lines.push('', ...spanLines(r.maxSpan_m, units));
+  lines.push('Verdict:');
+  for (const s of verdict.sentences) lines.push(`  ${s.text}`);
+  lines.push('', ...spanLines(r.maxSpan_m, units, verdict.spanWord));
   if (r.warnings.length) {
     lines.push('', 'Warnings:');
     for (const w of r.warnings) lines.push(`  ${w.level === 'error' ? '!!' : ' -'} [${w.code}] ${w.path ? `${w.path}: ` : ''}${w.message}`);

@@ -54,13 +54,33 @@ export interface SharedLoads {
   loads: number[];
   /** Per group: Σγt (self-weight), ΣEt³, and the extra pressure (surcharge − support) applied. */
   groups: { first: number; last: number; weight: number; stiffness: number; extra: number }[];
+  /** Standing support actually applied, Pa: min(support, load on group 0) (METHODS §12). */
+  supportApplied: number;
+  /** Support beyond the load it can relieve, dropped, Pa (≥ 0). */
+  supportExcess: number;
 }
 
-/** Loads per bed after sharing within groups; surcharge on the top group, support on group 0. */
-export function shareLoads(beds: readonly BedStiffness[], groups: readonly number[], surcharge: number, support: number): SharedLoads {
+/**
+ * Loads per bed after sharing within groups; surcharge on the top group, standing support on
+ * group 0. Support can only relieve load that is there (METHODS §12): it is capped at group 0's
+ * weight (plus the surcharge when group 0 is also the top group), so no bed carries a negative
+ * load; the excess is returned in `supportExcess`.
+ * Check: one 0.6 m bed, 25 kN/m³ (15 kPa), 400 kPa support → load 0, excess 385 kPa.
+ * `capSupport: false` applies `support` as given (a caller that nets loads itself, e.g. bolt
+ * suspension passing a transferred weight, and clips later).
+ */
+export function shareLoads(
+  beds: readonly BedStiffness[],
+  groups: readonly number[],
+  surcharge: number,
+  support: number,
+  options: { capSupport?: boolean } = {},
+): SharedLoads {
+  const cap = options.capSupport ?? true;
   if (groups.length !== beds.length) throw new RangeError('groups must give one index per bed');
   const count = beds.length === 0 ? 0 : groups[groups.length - 1] + 1;
   const summary: SharedLoads['groups'] = [];
+  let supportApplied = 0;
   for (let g = 0; g < count; g++) {
     const first = groups.indexOf(g);
     const last = groups.lastIndexOf(g);
@@ -70,12 +90,16 @@ export function shareLoads(beds: readonly BedStiffness[], groups: readonly numbe
       weight += beds[i].unitWeight * beds[i].thickness;
       stiffness += beds[i].modulus * beds[i].thickness ** 3;
     }
-    const extra = (g === count - 1 ? surcharge : 0) - (g === 0 ? support : 0);
+    const top = g === count - 1 ? surcharge : 0;
+    // A negative `support` is an extra downward load on group 0 (bolt suspension passes one): never capped.
+    if (g === 0) supportApplied = cap && support > 0 ? Math.max(0, Math.min(support, weight + top)) : support;
+    const extra = top - (g === 0 ? supportApplied : 0);
     summary.push({ first, last, weight, stiffness, extra });
   }
   const loads = beds.map((b, i) => {
     const g = summary[groups[i]];
-    return (b.modulus * b.thickness ** 3 * (g.weight + g.extra)) / g.stiffness;
+    const q = (b.modulus * b.thickness ** 3 * (g.weight + g.extra)) / g.stiffness;
+    return cap ? Math.max(0, q) : q;
   });
-  return { loads, groups: summary };
+  return { loads, groups: summary, supportApplied, supportExcess: Math.max(0, support - supportApplied) };
 }

@@ -136,7 +136,7 @@ export function suspendedLoads(input: SuspendedLoadsInput): SuspendedLoads {
   const spanning = beds.slice(anchorLayer);
   const groups = groupLayers(spanning);
   // shareLoads subtracts its `support` argument from group 0, the anchor's group.
-  const shared = shareLoads(spanning, groups, surcharge, -transferred);
+  const shared = shareLoads(spanning, groups, surcharge, -transferred, { capSupport: false });
   return {
     loads: [...hanging.map(() => 0), ...shared.loads],
     groups: [...hanging.map(() => null), ...groups],

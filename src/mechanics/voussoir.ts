@@ -35,6 +35,13 @@ export interface VoussoirInput {
   ucs: number;
   /** Friction angle of the cross-joints at the abutment, degrees (0..90). */
   frictionDeg: number;
+  /**
+   * In-situ horizontal stress, Pa, compression positive (default 0). It enters the crushing
+   * check only, as demand fc + σh (METHODS §3a: superposed on the arch thrust at the
+   * compression zones); n, z, fc, sliding and snap-through ignore it (no credit for clamping
+   * that may relax once the roof cracks). A tensile σh (< 0) is taken as 0 (no credit).
+   */
+  horizontalStress?: number;
 }
 
 export interface VoussoirResult {
@@ -57,7 +64,9 @@ export interface VoussoirResult {
   deflection: number | null;
   /** δ/t. */
   deflectionRatio: number | null;
-  /** σc/fc (0 when σc = 0). */
+  /** Crushing demand fc + max(σh, 0), Pa. */
+  crushingDemand: number | null;
+  /** σc/(fc + σh) (0 when σc = 0). */
   fsCrushing: number | null;
   /** fc·n·tanφ/(γ's) at the abutment (= s·tanφ/(4z)). */
   fsSliding: number | null;
@@ -88,6 +97,8 @@ export function validateVoussoirInput(input: VoussoirInput): void {
   if (!(ucs >= 0 && ucs < Infinity)) throw new RangeError(`ucs must be ≥ 0 Pa, got ${ucs}`);
   if (!(frictionDeg >= 0 && frictionDeg <= 90))
     throw new RangeError(`frictionDeg must be in [0, 90] degrees, got ${frictionDeg}`);
+  const sh = input.horizontalStress;
+  if (sh !== undefined && !Number.isFinite(sh)) throw new RangeError(`horizontalStress must be a finite number of Pa, got ${sh}`);
 }
 
 /** The result after snap-through: every numeric field null. */
@@ -103,6 +114,7 @@ export function snapThroughResult(iterations: number): VoussoirResult {
     shortening: null,
     deflection: null,
     deflectionRatio: null,
+    crushingDemand: null,
     fsCrushing: null,
     fsSliding: null,
     iterations,
@@ -128,6 +140,7 @@ export function voussoirResultAt(
   const K = ((3 * s) / 8) * dL * z; // = (3s/8)·L·((2/3+n)/3)·γ's²/(4nE)
   const deflection = K / (z * (z0 + z)); // z0 − z at the root of z³ − z0²z + K = 0
   const tanPhi = Math.tan((frictionDeg * Math.PI) / 180);
+  const crushingDemand = fc + Math.max(0, input.horizontalStress ?? 0);
   const result: VoussoirResult = {
     snapThrough: false,
     n,
@@ -139,7 +152,8 @@ export function voussoirResultAt(
     shortening: dL,
     deflection,
     deflectionRatio: deflection / t,
-    fsCrushing: ucs / fc,
+    crushingDemand,
+    fsCrushing: ucs / crushingDemand,
     fsSliding: frictionDeg === 0 ? 0 : (fc * n * tanPhi) / (g * s),
     iterations,
   };
@@ -182,7 +196,7 @@ export function leverArmAt(input: VoussoirInput, n: number): number | null {
  * feasible window and −∞ at its right edge, so the window always holds the root. Where no scan
  * point is feasible, the least h = K/Kc is found the same way (root of d ln h/dn): h ≤ 1 there
  * means a narrow feasible window; h > 1 means snap-through (no n in (0,1) has a lever arm).
- * SI: m, N/m³, Pa → m, Pa. FS crushing = σc/fc; FS sliding = fc·n·tanφ/(γ's).
+ * SI: m, N/m³, Pa → m, Pa. FS crushing = σc/(fc + σh) (σh ≥ 0; METHODS §3a); FS sliding = fc·n·tanφ/(γ's).
  * Sources: Diederichs & Kaiser (1999); Brady & Brown (2004) §8.4.
  *     solveVoussoir({ span: 6, thickness: 0.45, unitWeight: 25e3, modulus: 8e9,
  *                     ucs: 40e6, frictionDeg: 35 })

@@ -1,15 +1,17 @@
 /**
- * Default values for the project file (`*.lamina.json`, schema "lamina/1") and a sensible
+ * Default values for the project file (`*.lamina.json`, schema "lamina/2") and a sensible
  * starting project. Together with `validate.ts` this is the one source of truth for the schema.
  *
  * REQUIRED (refused when missing — nothing important is guessed; every bound, with its reason,
  * is in `NUMBERS` in validate.ts):
- *   schema                         "lamina/1"
- *   opening.type                   "beam" | "slab" | "cantilever"
- *   opening.span_m                 0.01–1000 m
- *   opening.length_m               slab only, ≥ span_m, ≤ 100 000 m (ignored with a warning otherwise)
+ *   schema                         "lamina/2" ("lamina/1" is migrated first: `migrate.ts`)
+ *   opening.type                   "beam" | "slab" | "cantilever" | "intersection"
+ *   opening.span_m                 0.01–1000 m (intersection: the narrower entry width w1)
+ *   opening.length_m               slab: long side ≥ span_m; intersection: the wider entry
+ *                                  width w2 ≥ span_m; ≤ 100 000 m (ignored with a warning otherwise)
  *   opening.ends                   "clamped" | "simple" for a beam or a slab (for a cantilever it
- *                                  is ignored and defaults to "clamped")
+ *                                  is ignored and defaults to "clamped"; for an intersection it
+ *                                  defaults to "simple": pillar corners give little fixity)
  *   layers                         non-empty array, layers[0] = immediate roof
  *   layers[i].thickness_m          0.001–1000 m
  *   layers[i].unitWeight_kNm3      5..60 kN/m³
@@ -21,9 +23,11 @@
  * OPTIONAL (value used when the key is omitted):
  *   title                          "Untitled project"
  *   description                    omitted (stays absent)
+ *   opening.edges                  slab only: null (every edge as `ends`), or
+ *                                  { short, long }, each "clamped" | "simple" | "free"
  *   loads.surcharge_kPa            0
- *   loads.support_kPa              0
  *   loads.horizontalStress_MPa     0
+ *   support.standing_kPa           0 (lamina/1: loads.support_kPa)
  *   layers[i].name                 "Layer 1", "Layer 2", … (1-based position)
  *   layers[i].modulusBasis         "mass"
  *   layers[i].poisson              0.25
@@ -38,10 +42,13 @@
  *                                  jointCondition 20 *, jointFriction_deg 30 *
  *   layers[i].hoekBrown.mi         by rock class *: sedimentary 7, igneous 25, metamorphic 12
  *   layers[i].hoekBrown.disturbance 0 (undisturbed, e.g. machine-cut or careful blasting)
- *   design.fsTarget                { tension: 4, crushing: 2, sliding: 1.5 } (METHODS §10)
+ *   design.fsTarget                { tension: 2 on the "rockMass" basis, 4 on "lab";
+ *                                    crushing: 2, sliding: 1.5 } (METHODS §10)
  *   design.deflectionLimitRatio    0.1 (Diederichs & Kaiser 1999)
- *   design.characteristic          "mean"
+ *   design.characteristic          "mean" ("lower5", "cautiousMean", "lower5Log": METHODS §6, §15)
  *   design.basis                   "intact"
+ *   design.tensileBasis            "rockMass"
+ *   design.crushingStrength        "rockMass" (Hoek–Brown σci·s^a; "lab": the UCS as given)
  *   design.planeStrainModulus      false
  *
  * * These defaults carry judgement, so the validator adds an "ASSUMED" warning whenever one is
@@ -52,17 +59,25 @@
  *   from memory). Lamina scales the measured tensile strength by s·mi/mb, in which mi cancels,
  *   so mi matters only for the rock-mass compressive strength.
  */
-import type { Design, Jointing, Layer, Loads, Project, RockClass, Tensile } from './types';
+import type { Design, Jointing, Layer, Loads, Project, RockClass, Support, Tensile, TensileBasis } from './types';
 
 export const DEFAULT_TITLE = 'Untitled project';
 
 export const DEFAULT_LOADS: Readonly<Loads> = Object.freeze({
   surcharge_kPa: 0,
-  support_kPa: 0,
   horizontalStress_MPa: 0,
 });
 
-export const DEFAULT_FS_TARGET = Object.freeze({ tension: 4, crushing: 2, sliding: 1.5 });
+/**
+ * Tension target matched to the tensile basis (METHODS §10): 2 on a rock-mass strength (common
+ * practice for rock-mass strengths in mine openings is 1.5–2; memory), 4 on the lab basis
+ * (Obert & Duvall 1967, memory). FS 4 on a strength already scaled by Hoek–Brown would count
+ * the lab-to-field gap twice.
+ */
+export const DEFAULT_TENSION_TARGET: Readonly<Record<TensileBasis, number>> = Object.freeze({ rockMass: 2, lab: 4 });
+
+/** Targets other than tension (METHODS §10). */
+export const DEFAULT_FS_TARGET = Object.freeze({ tension: DEFAULT_TENSION_TARGET.rockMass, crushing: 2, sliding: 1.5 });
 export const DEFAULT_DEFLECTION_LIMIT_RATIO = 0.1;
 export const DEFAULT_POISSON = 0.25;
 export const DEFAULT_JOINT_CONDITION = 20;
@@ -88,12 +103,18 @@ export function defaultDesign(): Design {
     deflectionLimitRatio: DEFAULT_DEFLECTION_LIMIT_RATIO,
     characteristic: 'mean',
     basis: 'intact',
+    tensileBasis: 'rockMass',
+    crushingStrength: 'rockMass',
     planeStrainModulus: false,
   };
 }
 
 export function defaultLoads(): Loads {
   return { ...DEFAULT_LOADS };
+}
+
+export function defaultSupport(): Support {
+  return { standing_kPa: 0 };
 }
 
 export function defaultJointing(): Jointing {
@@ -133,10 +154,11 @@ export function defaultLayer(): Layer {
 /** A complete, valid one-layer project: a long opening (beam) of 6 m span with clamped ends. */
 export function defaultProject(): Project {
   return {
-    schema: 'lamina/1',
+    schema: 'lamina/2',
     title: DEFAULT_TITLE,
-    opening: { type: 'beam', span_m: 6, length_m: null, ends: 'clamped' },
+    opening: { type: 'beam', span_m: 6, length_m: null, ends: 'clamped', edges: null },
     loads: defaultLoads(),
+    support: defaultSupport(),
     layers: [defaultLayer()],
     design: defaultDesign(),
   };

@@ -6,7 +6,7 @@
 import coalRoom from '../../presets/coal-room-shale.lamina.json';
 import driftLimestone from '../../presets/drift-limestone.lamina.json';
 import quarryBench from '../../presets/quarry-bench-overhang.lamina.json';
-import intersectionSlab from '../../presets/intersection-slab.lamina.json';
+import intersectionRoof from '../../presets/intersection-limestone.lamina.json';
 
 export interface DemoPreset {
   id: string;
@@ -19,5 +19,5 @@ export const DEMO_PRESETS: readonly DemoPreset[] = [
   { id: 'coal-room-shale', label: 'Coal room, laminated shale roof (beam, 3 layers)', data: coalRoom },
   { id: 'drift-limestone', label: 'Drift in thin-bedded limestone', data: driftLimestone },
   { id: 'quarry-bench-overhang', label: 'Sandstone quarry bench overhang (cantilever)', data: quarryBench },
-  { id: 'intersection-slab', label: 'Intersection roof slab in limestone (slab, 8 × 10 m)', data: intersectionSlab },
+  { id: 'intersection-limestone', label: 'Four-way intersection in limestone (6 × 6 m entries, diagonal span)', data: intersectionRoof },
 ];

@@ -5,4 +5,5 @@ export * from './validate';
 export * from './project-file';
 export * from './units';
 export * from './caution';
+export * from './migrate';
 export * from './specimens-csv';

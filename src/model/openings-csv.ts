@@ -4,9 +4,9 @@
  *
  * Columns (headers case-insensitive, any order; the unit is part of the name, SI or US):
  *   name                                  text, required
- *   type                                  beam | slab | cantilever, required
+ *   type                                  beam | slab | cantilever | intersection, required
  *   span_m | span_ft                      clear span (short side of a slab; overhang), required
- *   length_m | length_ft                  long side of a slab (used for slabs only)
+ *   length_m | length_ft                  long side of a slab, or the wider entry width w2 of an intersection
  *   ends                                  clamped | simple (blank: the project's)
  *   surcharge_kPa | surcharge_psf         (blank: the project's)
  *   support_kPa | support_psf             standing support pressure (blank: the project's)

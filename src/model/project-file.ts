@@ -13,7 +13,7 @@ import { ProjectError, parseProject, type FieldIssue } from './validate';
  * Parse and validate the text of a project file. A JSON syntax error becomes a `ProjectError`
  * with path "" giving the line and column; a leading byte-order mark is ignored.
  */
-export function readProjectText(text: string): { project: Project; warnings: FieldIssue[] } {
+export function readProjectText(text: string): { project: Project; warnings: FieldIssue[]; migratedFrom?: 'lamina/1' } {
   if (typeof text !== 'string') {
     throw new ProjectError([{ path: '', message: `a project file must be text, got a ${typeof text}`, code: 'JSON' }]);
   }
@@ -157,7 +157,7 @@ export function locateJsonError(text: string): { position: number; reason: strin
 
 /**
  * Serialise a normalised project with the key order of DESIGN.md, 2-space indent and a
- * trailing newline. `length_m` is written for a slab only (validation sets it to `null` otherwise), so
+ * trailing newline. `length_m` is written for a slab or an intersection only (validation sets it to `null` otherwise), so
  * `readProjectText(writeProjectText(p)).project` deep-equals a validated `p`.
  */
 export function writeProjectText(project: Project): string {
@@ -168,14 +168,15 @@ function orderedProject(p: Project): Record<string, unknown> {
   const out: Record<string, unknown> = { schema: p.schema, title: p.title };
   if (p.description !== undefined) out.description = p.description;
   const opening: Record<string, unknown> = { type: p.opening.type, span_m: p.opening.span_m };
-  if (p.opening.type === 'slab' && p.opening.length_m !== null) opening.length_m = p.opening.length_m;
+  if ((p.opening.type === 'slab' || p.opening.type === 'intersection') && p.opening.length_m !== null) opening.length_m = p.opening.length_m;
   opening.ends = p.opening.ends;
+  if (p.opening.type === 'slab' && p.opening.edges !== null) opening.edges = { short: p.opening.edges.short, long: p.opening.edges.long };
   out.opening = opening;
   out.loads = {
     surcharge_kPa: p.loads.surcharge_kPa,
-    support_kPa: p.loads.support_kPa,
     horizontalStress_MPa: p.loads.horizontalStress_MPa,
   };
+  out.support = { standing_kPa: p.support.standing_kPa };
   out.layers = p.layers.map(orderedLayer);
   out.design = {
     fsTarget: {
@@ -186,6 +187,8 @@ function orderedProject(p: Project): Record<string, unknown> {
     deflectionLimitRatio: p.design.deflectionLimitRatio,
     characteristic: p.design.characteristic,
     basis: p.design.basis,
+    tensileBasis: p.design.tensileBasis,
+    crushingStrength: p.design.crushingStrength,
     planeStrainModulus: p.design.planeStrainModulus,
   };
   return out;

@@ -1,33 +1,56 @@
 /**
- * The project file (`*.lamina.json`, schema "lamina/1") and the analysis report
- * ("lamina-report/1"): the public contract set out in DESIGN.md. Units are in the key names
+ * The project file (`*.lamina.json`, schema "lamina/2"; "lamina/1" files are migrated on load,
+ * see `migrate.ts`) and the analysis report ("lamina-report/2"): the public contract set out in
+ * DESIGN.md. Units are in the key names
  * (practical SI: m, kPa, MPa, GPa, kN/m³, mm, kN). Kernels work in SI base units; conversion
  * happens in `src/model` and `src/analysis` only.
  */
 
-export type OpeningType = 'beam' | 'slab' | 'cantilever';
+export type OpeningType = 'beam' | 'slab' | 'cantilever' | 'intersection';
 export type EndCondition = 'clamped' | 'simple';
+/** Support of one pair of slab edges (METHODS §14). */
+export type EdgeCondition = 'clamped' | 'simple' | 'free';
 export type ModulusBasis = 'mass' | 'intact';
 export type RockClass = 'sedimentary' | 'igneous' | 'metamorphic';
 export type TensileMethod = 'brazilian' | 'direct';
-export type CharacteristicRule = 'mean' | 'lower5';
+export type CharacteristicRule = 'mean' | 'lower5' | 'cautiousMean' | 'lower5Log';
 export type DesignBasis = 'intact' | 'jointed';
+/** Tensile strength the tension check uses (METHODS §10): the rock mass, or the lab value with the size effect. */
+export type TensileBasis = 'rockMass' | 'lab';
+/** Compressive strength of the voussoir crushing check (METHODS §3a). */
+export type CrushingStrength = 'rockMass' | 'lab';
+
+/** Slab edge pairs: `short` = the two short edges, `long` = the two long edges. */
+export interface SlabEdges {
+  short: EdgeCondition;
+  long: EdgeCondition;
+}
 
 export interface Opening {
   type: OpeningType;
-  /** Clear span; short side for a slab; overhang length for a cantilever. */
+  /**
+   * Clear span; short side for a slab; overhang length for a cantilever; the narrower entry
+   * width w1 for an intersection.
+   */
   span_m: number;
-  /** Slab only: the long side (≥ span_m). `null` otherwise. */
+  /** Slab: the long side (≥ span_m). Intersection: the wider entry width w2 (≥ span_m). `null` otherwise. */
   length_m: number | null;
-  /** Beam ends / slab edges; ignored for a cantilever. */
+  /** Beam ends / slab edges; ignored for a cantilever; default "simple" for an intersection. */
   ends: EndCondition;
+  /** Slab only, optional: the support of each edge pair; `null` = every edge as `ends`. */
+  edges: SlabEdges | null;
 }
 
 export interface Loads {
   surcharge_kPa: number;
-  support_kPa: number;
   /** In-situ horizontal stress along the span, compression positive. */
   horizontalStress_MPa: number;
+}
+
+/** Support installed in the opening (METHODS §12). */
+export interface Support {
+  /** Standing support (props, cribs) pushing up on the immediate roof; capped at the load it relieves. */
+  standing_kPa: number;
 }
 
 export interface Specimen {
@@ -87,6 +110,8 @@ export interface Design {
   deflectionLimitRatio: number;
   characteristic: CharacteristicRule;
   basis: DesignBasis;
+  tensileBasis: TensileBasis;
+  crushingStrength: CrushingStrength;
   /**
    * Labelled option (Obert & Duvall): use the plane-strain modulus E/(1−ν²) in the beam
    * deflection and Euler stress. Off by default.
@@ -95,11 +120,12 @@ export interface Design {
 }
 
 export interface Project {
-  schema: 'lamina/1';
+  schema: 'lamina/2';
   title: string;
   description?: string;
   opening: Opening;
   loads: Loads;
+  support: Support;
   /** layers[0] is the immediate roof; then upward. */
   layers: Layer[];
   design: Design;
@@ -172,10 +198,46 @@ export interface LayerReport {
 
 export type Mode = 'tension' | 'crushing' | 'sliding' | 'snapThrough' | 'deflection';
 
+/** How a check stands: meets/below its target (counted), info (computed, not counted), n/a. */
+export type CheckStatusKind = 'meets' | 'below' | 'info' | 'na';
+
+/**
+ * One row of the check table (METHODS §10, DESIGN "Contract changes in v2"): every check of
+ * every layer. `counts` says whether it takes part in the verdict; `reason` says why not.
+ */
+export interface CheckRow {
+  layerIndex: number;
+  layer: string;
+  mode: Mode;
+  /** MPa for tension and crushing, δ/t for deflection; null where the check has no demand figure. */
+  demand: number | null;
+  capacity: number | null;
+  unit: 'MPa' | 'ratio' | null;
+  /** null where the check does not apply. Snap-through: 1 stands, 0 snaps. Deflection: limit/(δ/t). */
+  fs: number | null;
+  target: number;
+  counts: boolean;
+  /** Why the row does not count (a short phrase); null when it counts. */
+  reason: string | null;
+  status: CheckStatusKind;
+  /** How to read the numbers (what the demand and capacity are). */
+  note: string;
+}
+
 export interface Governing {
+  layerIndex: number;
   layer: string;
   mode: Mode;
   fs: number;
+  target: number;
+}
+
+/** The opening as analysed (v2): for an intersection the design span is the diagonal (METHODS §14). */
+export interface OpeningReport {
+  type: OpeningType;
+  span_m: number;
+  designSpan_m: number;
+  basis: 'span' | 'diagonal';
 }
 
 export interface MaxSpanReport {
@@ -204,8 +266,11 @@ export interface TraceEntry {
 }
 
 export interface Report {
-  schema: 'lamina-report/1';
+  schema: 'lamina-report/2';
+  opening: OpeningReport;
   layers: LayerReport[];
+  /** The one check table: every check of every layer. */
+  checks: CheckRow[];
   governing: Governing | null;
   maxSpan_m: MaxSpanReport | null;
   warnings: Warning[];

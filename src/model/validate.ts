@@ -1,5 +1,6 @@
 /**
- * Validation of a project (`*.lamina.json`, schema "lamina/1") into the normalised in-memory
+ * Validation of a project (`*.lamina.json`, schema "lamina/2"; a "lamina/1" project is first
+ * migrated by `migrate.ts` and gets a MIGRATED warning with the one-time notice) into the normalised in-memory
  * `Project` (every optional field filled; see `defaults.ts` for what is required and what
  * defaults). Every problem is collected, not just the first.
  *
@@ -8,11 +9,11 @@
  * flag unknown keys (ignored), implausible but legal values, and judgement defaults.
  *
  * Limits (refused outside; the reasons are in the doc block of `NUMBERS` below): span
- * 0.01–1000 m; slab length 0.01–100 000 m and ≥ span (a slab longer than 20 spans is analysed
- * as its plane-strain strip); thickness 0.001–1000 m; unit weight 5–60 kN/m³; E 0.001–10 000
+ * 0.01–1000 m; slab length and intersection entry width w2 0.01–100 000 m and ≥ span (a slab
+ * longer than 20 spans is analysed as its plane-strain strip); slab edges not free on both pairs; thickness 0.001–1000 m; unit weight 5–60 kN/m³; E 0.001–10 000
  * GPa; Poisson 0 ≤ ν < 0.5; UCS 0.01–1000 MPa; tensile value 0–100 MPa (0 = no tensile
  * strength, e.g. a fractured mass: FS tension 0 wherever the layer is in net tension);
- * surcharge, support 0–100 000 kPa; horizontal stress −1000…1000 MPa (compression positive);
+ * surcharge, standing support 0–100 000 kPa; horizontal stress −1000…1000 MPa (compression positive);
  * specimen diameter and thickness 1–1000 mm, peak load 0.001–10 000 kN; cross-joint spacing
  * 0.001–10 000 m or null; fracture frequency 0–1000 /m; JCond89 0–30; RQD 0–100; joint
  * friction 0 ≤ φ < 90°; mi 1–100; disturbance 0–1; FS targets 0.1–100; deflection limit ratio
@@ -28,6 +29,7 @@ import {
   DEFAULT_DEFLECTION_LIMIT_RATIO,
   DEFAULT_DISTURBANCE,
   DEFAULT_FS_TARGET,
+  DEFAULT_TENSION_TARGET,
   DEFAULT_JOINT_CONDITION,
   DEFAULT_JOINT_FRICTION_DEG,
   DEFAULT_MI,
@@ -36,10 +38,14 @@ import {
   defaultLayerName,
   defaultSpecimenId,
 } from './defaults';
+import { migrateV1 } from './migrate';
 import type {
   CharacteristicRule,
+  CrushingStrength,
   DesignBasis,
+  EdgeCondition,
   EndCondition,
+  TensileBasis,
   Layer,
   ModulusBasis,
   OpeningType,
@@ -58,8 +64,11 @@ export interface FieldIssue {
 }
 
 export type ValidationResult =
-  | { ok: true; project: Project; warnings: FieldIssue[] }
+  | { ok: true; project: Project; warnings: FieldIssue[]; migratedFrom?: 'lamina/1' }
   | { ok: false; errors: FieldIssue[]; warnings: FieldIssue[] };
+
+/** Warning code of the one-time notice given when a lamina/1 project is migrated. */
+export const MIGRATED_CODE = 'MIGRATED';
 
 /** A refused project. `message` lists every issue, one per line. */
 export class ProjectError extends Error {
@@ -72,17 +81,19 @@ export class ProjectError extends Error {
 }
 
 /** Validate and normalise; throws a `ProjectError` listing every error. */
-export function parseProject(input: unknown): { project: Project; warnings: FieldIssue[] } {
+export function parseProject(input: unknown): { project: Project; warnings: FieldIssue[]; migratedFrom?: 'lamina/1' } {
   const result = validateProject(input);
   if (!result.ok) throw new ProjectError(result.errors);
-  return { project: result.project, warnings: result.warnings };
+  return result.migratedFrom ? { project: result.project, warnings: result.warnings, migratedFrom: result.migratedFrom } : { project: result.project, warnings: result.warnings };
 }
 
 /** Keys the schema knows, per object (also the order the file is written in). */
 export const SCHEMA_KEYS = {
-  project: ['schema', 'title', 'description', 'opening', 'loads', 'layers', 'design'],
-  opening: ['type', 'span_m', 'length_m', 'ends'],
-  loads: ['surcharge_kPa', 'support_kPa', 'horizontalStress_MPa'],
+  project: ['schema', 'title', 'description', 'opening', 'loads', 'support', 'layers', 'design'],
+  opening: ['type', 'span_m', 'length_m', 'ends', 'edges'],
+  edges: ['short', 'long'],
+  loads: ['surcharge_kPa', 'horizontalStress_MPa'],
+  support: ['standing_kPa'],
   layer: [
     'name', 'thickness_m', 'unitWeight_kNm3', 'youngModulus_GPa', 'modulusBasis', 'poisson',
     'ucs_MPa', 'rockClass', 'tensile', 'jointing', 'hoekBrown',
@@ -91,16 +102,19 @@ export const SCHEMA_KEYS = {
   specimen: ['id', 'diameter_mm', 'thickness_mm', 'peakLoad_kN', 'valid'],
   jointing: ['crossJointSpacing_m', 'fractureFrequency_per_m', 'rqd', 'jointCondition', 'jointFriction_deg'],
   hoekBrown: ['mi', 'disturbance'],
-  design: ['fsTarget', 'deflectionLimitRatio', 'characteristic', 'basis', 'planeStrainModulus'],
+  design: ['fsTarget', 'deflectionLimitRatio', 'characteristic', 'basis', 'tensileBasis', 'crushingStrength', 'planeStrainModulus'],
   fsTarget: ['tension', 'crushing', 'sliding'],
 } as const;
 
-export const OPENING_TYPES: readonly OpeningType[] = ['beam', 'slab', 'cantilever'];
+export const OPENING_TYPES: readonly OpeningType[] = ['beam', 'slab', 'cantilever', 'intersection'];
 export const END_CONDITIONS: readonly EndCondition[] = ['clamped', 'simple'];
+export const EDGE_CONDITIONS: readonly EdgeCondition[] = ['clamped', 'simple', 'free'];
+export const TENSILE_BASES: readonly TensileBasis[] = ['rockMass', 'lab'];
+export const CRUSHING_STRENGTHS: readonly CrushingStrength[] = ['rockMass', 'lab'];
 export const MODULUS_BASES: readonly ModulusBasis[] = ['mass', 'intact'];
 export const ROCK_CLASSES: readonly RockClass[] = ['sedimentary', 'igneous', 'metamorphic'];
 export const TENSILE_METHODS: readonly TensileMethod[] = ['brazilian', 'direct'];
-export const CHARACTERISTIC_RULES: readonly CharacteristicRule[] = ['mean', 'lower5'];
+export const CHARACTERISTIC_RULES: readonly CharacteristicRule[] = ['mean', 'lower5', 'cautiousMean', 'lower5Log'];
 export const DESIGN_BASES: readonly DesignBasis[] = ['intact', 'jointed'];
 
 export const MAX_LAYERS = 100;
@@ -402,29 +416,43 @@ export function validateProject(input: unknown): ValidationResult {
     return { ok: false, errors: r.errors, warnings: r.warnings };
   }
   scanForbidden(input, r);
+  let migratedFrom: 'lamina/1' | undefined;
+  if (own(input, 'schema') === 'lamina/1') {
+    const migration = migrateV1(input);
+    input = migration.project;
+    migratedFrom = 'lamina/1';
+    r.warn('schema', migration.notice, MIGRATED_CODE);
+  }
+  const raw = input as Raw;
+  return finish(r, raw, migratedFrom);
+}
+
+function finish(r: Reader, input: Raw, migratedFrom: 'lamina/1' | undefined): ValidationResult {
   r.unknownKeys(input, SCHEMA_KEYS.project, '');
 
   const schema = own(input, 'schema');
-  if (schema === undefined) r.error('schema', 'required, must be "lamina/1"', 'REQUIRED');
-  else if (schema !== 'lamina/1') r.error('schema', `must be "lamina/1", got ${describeValue(schema)}`, 'SCHEMA');
+  if (schema === undefined) r.error('schema', 'required, must be "lamina/2" (or "lamina/1", migrated on load)', 'REQUIRED');
+  else if (schema !== 'lamina/2') r.error('schema', `must be "lamina/2" (or "lamina/1", migrated on load), got ${describeValue(schema)}`, 'SCHEMA');
 
   const title = r.string(input, 'title', '', DEFAULT_TITLE);
   const description = r.string(input, 'description', '', '');
   const opening = readOpening(r, input);
   const loads = readLoads(r, input);
+  const support = readSupport(r, input);
   const layers = readLayers(r, input);
   const design = readDesign(r, input);
 
-  if (r.errors.length > 0 || !opening || !loads || !layers || !design || title === undefined || description === undefined) {
+  if (r.errors.length > 0 || !opening || !loads || !support || !layers || !design || title === undefined || description === undefined) {
     return { ok: false, errors: r.errors, warnings: r.warnings };
   }
-  const project: Project = { schema: 'lamina/1', title, opening, loads, layers, design };
+  const project: Project = { schema: 'lamina/2', title, opening, loads, support, layers, design };
+  const extra = migratedFrom ? { migratedFrom } : {};
   if (own(input, 'description') !== undefined) {
     // keep key order: description follows title
     const { schema: s, title: t, ...rest } = project;
-    return { ok: true, project: { schema: s, title: t, description, ...rest }, warnings: r.warnings };
+    return { ok: true, project: { schema: s, title: t, description, ...rest }, warnings: r.warnings, ...extra };
   }
-  return { ok: true, project, warnings: r.warnings };
+  return { ok: true, project, warnings: r.warnings, ...extra };
 }
 
 function readOpening(r: Reader, input: Raw): Project['opening'] | undefined {
@@ -434,13 +462,15 @@ function readOpening(r: Reader, input: Raw): Project['opening'] | undefined {
   r.unknownKeys(o, SCHEMA_KEYS.opening, path);
   const type = r.enumeration(o, 'type', path, OPENING_TYPES, undefined);
   const span = r.number(o, 'span_m', path, NUMBERS.span, { required: true });
-  const ends = r.enumeration(o, 'ends', path, END_CONDITIONS, type === 'cantilever' ? 'clamped' : undefined);
+  const endsDefault = type === 'cantilever' ? 'clamped' : type === 'intersection' ? 'simple' : undefined;
+  const ends = r.enumeration(o, 'ends', path, END_CONDITIONS, endsDefault);
   r.plausible(child(path, 'span_m'), span, ' m', null, 60);
   let length: number | null | undefined = null;
-  if (type === 'slab') {
+  if (type === 'slab' || type === 'intersection') {
     length = r.number(o, 'length_m', path, NUMBERS.length, { required: true });
+    const what = type === 'slab' ? 'a slab' : 'an intersection (entry widths w1 ≤ w2)';
     if (typeof length === 'number' && typeof span === 'number' && length < span) {
-      r.error(child(path, 'length_m'), `must be ≥ span_m (${span} m) for a slab, got ${length}`, 'RANGE');
+      r.error(child(path, 'length_m'), `must be ≥ span_m (${span} m) for ${what}, got ${length}`, 'RANGE');
       length = undefined;
     }
   } else {
@@ -448,12 +478,35 @@ function readOpening(r: Reader, input: Raw): Project['opening'] | undefined {
     if (given !== undefined && given !== null) {
       const checked = r.number(o, 'length_m', path, NUMBERS.length, { nullable: true });
       if (checked !== undefined && type !== undefined) {
-        r.warn(child(path, 'length_m'), `ignored for opening type "${type}" (used for a slab only)`, 'IGNORED');
+        r.warn(child(path, 'length_m'), `ignored for opening type "${type}" (used for a slab or an intersection only)`, 'IGNORED');
       }
     }
   }
-  if (type === undefined || typeof span !== 'number' || ends === undefined || length === undefined) return undefined;
-  return { type, span_m: span, length_m: length, ends };
+  const edges = readEdges(r, o, path, type);
+  if (type === undefined || typeof span !== 'number' || ends === undefined || length === undefined || edges === undefined) return undefined;
+  return { type, span_m: span, length_m: type === 'slab' || type === 'intersection' ? length : null, ends, edges };
+}
+
+/** `opening.edges` (slab only): { short, long }, each clamped | simple | free; not free on both. */
+function readEdges(r: Reader, opening: Raw, path: string, type: OpeningType | undefined): Project['opening']['edges'] | undefined {
+  const given = own(opening, 'edges');
+  if (given === undefined || given === null) return null;
+  const p = child(path, 'edges');
+  if (type !== 'slab') {
+    if (type !== undefined) r.warn(p, `ignored for opening type "${type}" (used for a slab only)`, 'IGNORED');
+    return null;
+  }
+  const o = r.object(opening, 'edges', path, false);
+  if (!o) return undefined;
+  r.unknownKeys(o, SCHEMA_KEYS.edges, p);
+  const short = r.enumeration(o, 'short', p, EDGE_CONDITIONS, undefined);
+  const long = r.enumeration(o, 'long', p, EDGE_CONDITIONS, undefined);
+  if (short === undefined || long === undefined) return undefined;
+  if (short === 'free' && long === 'free') {
+    r.error(p, 'must support at least one edge pair (a slab free on all four edges has nothing to rest on), got short "free", long "free"', 'RANGE');
+    return undefined;
+  }
+  return { short, long };
 }
 
 function readLoads(r: Reader, input: Raw): Project['loads'] | undefined {
@@ -461,18 +514,30 @@ function readLoads(r: Reader, input: Raw): Project['loads'] | undefined {
   const o = r.object(input, 'loads', '', false);
   if (!o) return undefined;
   r.unknownKeys(o, SCHEMA_KEYS.loads, path);
+  if (own(o, 'support_kPa') !== undefined) {
+    r.warn(child(path, 'support_kPa'), 'not part of lamina/2, ignored: standing support is support.standing_kPa', 'MOVED');
+  }
   const surcharge = r.number(o, 'surcharge_kPa', path, NUMBERS.pressure, { default: 0 });
-  const support = r.number(o, 'support_kPa', path, NUMBERS.pressure, { default: 0 });
   const sh = r.number(o, 'horizontalStress_MPa', path, NUMBERS.horizontalStress, { default: 0 });
   r.plausible(child(path, 'surcharge_kPa'), surcharge, ' kPa', null, 5000);
-  r.plausible(child(path, 'support_kPa'), support, ' kPa', null, 500);
   if (typeof sh === 'number' && sh < 0) {
     r.warn(child(path, 'horizontalStress_MPa'),
       `${sh} MPa is a tensile in-situ horizontal stress (compression is positive); check the sign`, 'IMPLAUSIBLE');
   }
   r.plausible(child(path, 'horizontalStress_MPa'), sh, ' MPa', null, 100);
-  if (typeof surcharge !== 'number' || typeof support !== 'number' || typeof sh !== 'number') return undefined;
-  return { surcharge_kPa: surcharge, support_kPa: support, horizontalStress_MPa: sh };
+  if (typeof surcharge !== 'number' || typeof sh !== 'number') return undefined;
+  return { surcharge_kPa: surcharge, horizontalStress_MPa: sh };
+}
+
+function readSupport(r: Reader, input: Raw): Project['support'] | undefined {
+  const path = 'support';
+  const o = r.object(input, 'support', '', false);
+  if (!o) return undefined;
+  r.unknownKeys(o, SCHEMA_KEYS.support, path);
+  const standing = r.number(o, 'standing_kPa', path, NUMBERS.pressure, { default: 0 });
+  r.plausible(child(path, 'standing_kPa'), standing, ' kPa', null, 500);
+  if (typeof standing !== 'number') return undefined;
+  return { standing_kPa: standing };
 }
 
 function readLayers(r: Reader, input: Raw): Layer[] | undefined {
@@ -648,12 +713,15 @@ function readDesign(r: Reader, input: Raw): Project['design'] | undefined {
   const o = r.object(input, 'design', '', false);
   if (!o) return undefined;
   r.unknownKeys(o, SCHEMA_KEYS.design, path);
+  const tensileBasis = r.enumeration(o, 'tensileBasis', path, TENSILE_BASES, 'rockMass');
+  const crushingStrength = r.enumeration(o, 'crushingStrength', path, CRUSHING_STRENGTHS, 'rockMass');
   const fsPath = child(path, 'fsTarget');
   const fs = r.object(o, 'fsTarget', path, false);
   let fsTarget: Project['design']['fsTarget'] | undefined;
   if (fs) {
     r.unknownKeys(fs, SCHEMA_KEYS.fsTarget, fsPath);
-    const tension = r.number(fs, 'tension', fsPath, NUMBERS.factor, { default: DEFAULT_FS_TARGET.tension });
+    // A file that omits the tension target gets the default of its tensile basis (METHODS §10).
+    const tension = r.number(fs, 'tension', fsPath, NUMBERS.factor, { default: DEFAULT_TENSION_TARGET[tensileBasis ?? 'rockMass'] });
     const crushing = r.number(fs, 'crushing', fsPath, NUMBERS.factor, { default: DEFAULT_FS_TARGET.crushing });
     const sliding = r.number(fs, 'sliding', fsPath, NUMBERS.factor, { default: DEFAULT_FS_TARGET.sliding });
     for (const [key, value] of [['tension', tension], ['crushing', crushing], ['sliding', sliding]] as const) {
@@ -671,8 +739,11 @@ function readDesign(r: Reader, input: Raw): Project['design'] | undefined {
   const characteristic = r.enumeration(o, 'characteristic', path, CHARACTERISTIC_RULES, 'mean');
   const basis = r.enumeration(o, 'basis', path, DESIGN_BASES, 'intact');
   const planeStrain = r.boolean(o, 'planeStrainModulus', path, false);
-  if (!fsTarget || typeof ratio !== 'number' || characteristic === undefined || basis === undefined || planeStrain === undefined) {
+  if (
+    !fsTarget || typeof ratio !== 'number' || characteristic === undefined || basis === undefined || planeStrain === undefined ||
+    tensileBasis === undefined || crushingStrength === undefined
+  ) {
     return undefined;
   }
-  return { fsTarget, deflectionLimitRatio: ratio, characteristic, basis, planeStrainModulus: planeStrain };
+  return { fsTarget, deflectionLimitRatio: ratio, characteristic, basis, tensileBasis, crushingStrength, planeStrainModulus: planeStrain };
 }

@@ -3,7 +3,7 @@
  * HTML, the app) renders it, so wording and numbers are decided in one place. All text here
  * is plain (unescaped) text: renderers escape it for their format.
  */
-import type { StatusKind } from './status';
+import type { CheckStatusKind as StatusKind } from '../model/types';
 
 /** A table cell: plain text, optionally carrying the number it shows (for tests and CSV). */
 export interface Cell {

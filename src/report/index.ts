@@ -4,8 +4,6 @@ export type * from './document-types';
 export { renderMarkdown, escapeMarkdown } from './render-markdown';
 export { renderHtml, renderHtmlBody, REPORT_CSS, escapeHtml, type Paper } from './render-html';
 export { resultsCsv, spanCurveCsv } from './results-csv';
-export { checkStatus, STATUS_LEGEND, type CheckStatus, type StatusKind, type StatusOptions } from './status';
-export { checkRows, MODES, MODE_LABEL, MODE_NAME, type CheckRow } from './check-rows';
 export { formulaText, substitutedText, formulaSymbols } from './formula-text';
 export { traceBlock } from './trace-block';
 export { numberText } from './number-text';

@@ -8,10 +8,10 @@
  *     renderMarkdown(doc); renderHtml(doc);
  */
 import type { Analysis, SpanCurve } from '../analysis/types';
+import { buildVerdict } from '../analysis/verdict';
 import { projectHash, writeProjectText } from '../model/project-file';
 import type { Project } from '../model/types';
 import type { UnitSystem } from '../model/units';
-import { checkRows } from './check-rows';
 import type { ReportDocument } from './document-types';
 import { assumptionsSection } from './sections/assumptions';
 import { chartsSection } from './sections/charts';
@@ -44,7 +44,8 @@ export function buildReportDocument(input: ReportInput): ReportDocument {
     analysis,
     curve: input.curve ?? null,
     units,
-    rows: checkRows(project, analysis.report),
+    rows: analysis.report.checks,
+    verdict: buildVerdict(project, analysis.report, units),
   };
   const meta = {
     date: input.date ?? new Date().toISOString().slice(0, 10),

@@ -14,7 +14,7 @@ import { csvFormat } from 'd3';
 import type { Analysis, SpanCurve } from '../analysis/types';
 import type { Mode, Project } from '../model/types';
 import { displayUnit, fileUnit, toDisplay, unitLabel, type UnitSystem } from '../model/units';
-import { MODES, checkRows } from './check-rows';
+import { MODES, STATUS_SYMBOL, STATUS_WORD } from '../analysis/check-labels';
 import { csvSafeRow } from './csv-cell';
 
 /** In the display unit; when that is the file unit the value is written untouched (exact round trip). */
@@ -28,26 +28,29 @@ const plain = (value: number | null): number | '' => (value === null || !Number.
 /** Column-name form of a display unit: "MPa", "psi", "m", "ft". */
 const unitKey = (quantity: 'stress' | 'length', units: UnitSystem): string => unitLabel(quantity, units).replace(/[^A-Za-z0-9]/g, '');
 
-export function resultsCsv(analysis: Analysis, units: UnitSystem, project: Project): string {
+export function resultsCsv(analysis: Analysis, units: UnitSystem, _project?: Project): string {
   const stress = unitKey('stress', units);
   const columns = [
     'layer', 'layer_name', 'mode', `demand_${stress}`, `capacity_${stress}`, 'demand_ratio', 'limit_ratio',
-    'fs', 'target', 'fs_over_target', 'status', 'symbol', 'governing', 'note',
+    'fs', 'target', 'fs_over_target', 'counts', 'status', 'symbol', 'governing', 'reason', 'note',
   ];
-  const rows = checkRows(project, analysis.report).map((r) => csvSafeRow({
+  const g = analysis.report.governing;
+  const rows = analysis.report.checks.map((r) => csvSafeRow({
     layer: r.layerIndex + 1,
     layer_name: r.layer,
     mode: r.mode,
-    [`demand_${stress}`]: r.kind === 'stress' ? display(r.demand, 'stress', units) : '',
-    [`capacity_${stress}`]: r.kind === 'stress' ? display(r.capacity, 'stress', units) : '',
-    demand_ratio: r.kind === 'ratio' ? plain(r.demand) : '',
-    limit_ratio: r.kind === 'ratio' ? plain(r.capacity) : '',
+    [`demand_${stress}`]: r.unit === 'MPa' ? display(r.demand, 'stress', units) : '',
+    [`capacity_${stress}`]: r.unit === 'MPa' ? display(r.capacity, 'stress', units) : '',
+    demand_ratio: r.unit === 'ratio' ? plain(r.demand) : '',
+    limit_ratio: r.unit === 'ratio' ? plain(r.capacity) : '',
     fs: plain(r.fs),
     target: r.target,
     fs_over_target: r.fs === null ? '' : r.fs / r.target,
-    status: r.status.word,
-    symbol: r.status.symbol,
-    governing: r.governing ? 'yes' : 'no',
+    counts: r.counts ? 'yes' : 'no',
+    status: STATUS_WORD[r.status],
+    symbol: STATUS_SYMBOL[r.status],
+    governing: g !== null && g.layerIndex === r.layerIndex && g.mode === r.mode ? 'yes' : 'no',
+    reason: r.reason ?? '',
     note: r.note,
   }));
   return `${csvFormat(rows, columns)}\n`;

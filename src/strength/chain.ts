@@ -6,8 +6,11 @@ import { rqdFromFrequency } from './rqd';
 import { DEFAULT_LAB_DIAMETER_MM, effectiveBlockSize, sizeEffectFactor } from './size-effect';
 import { reduceSpecimens } from './specimens';
 import type { SpecimenReduction, SpecimenSI } from './specimens';
-import { characteristicValue } from './statistics';
+import { CHARACTERISTIC_RULE_NAMES, characteristicValue } from './statistics';
 import type { CharacteristicRuleName } from './statistics';
+
+/** Which strength the tension check uses (METHODS §10): rock mass min(block, mass), or lab (block). */
+export type TensileBasisName = 'rockMass' | 'lab';
 
 export interface StrengthChainInput {
   /** Brazilian discs; may be empty. */
@@ -18,6 +21,8 @@ export interface StrengthChainInput {
   method: 'brazilian' | 'direct';
   rockClass: RockClassName;
   characteristic: CharacteristicRuleName;
+  /** Default "rockMass". */
+  tensileBasis?: TensileBasisName;
   /** m */
   thickness: number;
   /** m */
@@ -56,7 +61,10 @@ export interface StrengthChain {
   /** Pa per accepted specimen (× factor); [] for a given value */
   directValues: number[];
   stats: { n: number; mean: number; sd: number; cov: number } | null;
+  /** Multiplier of the characteristic rule (see `characteristicValue`); null for the mean. */
   kn: number | null;
+  /** 'lower5Log': mean and standard deviation of ln(direct strength in Pa). */
+  logStats: { mean: number; sd: number } | null;
   /** Pa */
   characteristic: number;
   dLab_mm: number;
@@ -80,7 +88,10 @@ export interface StrengthChain {
   mass: number;
   /** crossJointSpacing !== null && crossJointSpacing < span */
   crossJointed: boolean;
-  /** Pa: 0 if cross-jointed, else min(block, mass) */
+  tensileBasis: TensileBasisName;
+  /** Pa: the design strength if the layer were not cross-jointed: min(block, mass) ("rockMass") or block ("lab"). */
+  designUncracked: number;
+  /** Pa: 0 if cross-jointed, else designUncracked */
   design: number;
   warnings: StrengthChainWarning[];
 }
@@ -92,10 +103,10 @@ const MPa = (x: number): string => `${+(x / 1e6).toPrecision(4)} MPa`;
  * lab (mean Brazilian of accepted discs, or a given value) → direct (× 0.7/0.8/0.9,
  * Perras & Diederichs 2014) → characteristic (mean, or EN 1990 Annex D 5 % fractile) →
  * block (× (d_lab/d_eff)^0.18, Hoek & Brown 1980) and rock mass (× s·mi/mb, Hoek–Brown 2002,
- * GSI from RQD and JCond89) → design = min(block, mass), or 0 when cross-jointed (common
- * practice). SI in and out (m, Pa). A given value of 0 means no tensile strength: every
- * strength is 0 and a NO_TENSILE_STRENGTH warning says so. Throws a RangeError when there is
- * neither an accepted specimen nor a value.
+ * GSI from RQD and JCond89) → design = min(block, mass) on the "rockMass" basis, block on the
+ * "lab" basis (METHODS §10), or 0 when cross-jointed (common practice). SI in and out (m, Pa).
+ * A given value of 0 means no tensile strength: every strength is 0 and a NO_TENSILE_STRENGTH
+ * warning says so. Throws a RangeError when there is neither an accepted specimen nor a value.
  *     strengthChain({specimens: [], value: 3e6, method: 'brazilian', rockClass: 'sedimentary',
  *       characteristic: 'mean', thickness: 0.45, span: 6, crossJointSpacing: 8,
  *       fractureFrequency: 3, rqd: null, jointCondition: 20, ucs: 40e6, mi: 7, disturbance: 0})
@@ -111,8 +122,12 @@ export function strengthChain(input: StrengthChainInput): StrengthChain {
   if (method !== 'brazilian' && method !== 'direct') {
     throw new RangeError(`tensile method must be "brazilian" or "direct", got ${JSON.stringify(method)}`);
   }
-  if (rule !== 'mean' && rule !== 'lower5') {
-    throw new RangeError(`characteristic must be "mean" or "lower5", got ${JSON.stringify(rule)}`);
+  if (!CHARACTERISTIC_RULE_NAMES.includes(rule)) {
+    throw new RangeError(`characteristic must be one of ${CHARACTERISTIC_RULE_NAMES.join(', ')}, got ${JSON.stringify(rule)}`);
+  }
+  const tensileBasis = input.tensileBasis ?? 'rockMass';
+  if (tensileBasis !== 'rockMass' && tensileBasis !== 'lab') {
+    throw new RangeError(`tensileBasis must be "rockMass" or "lab", got ${JSON.stringify(tensileBasis)}`);
   }
   const classFactor = directFactorFor(rockClass);
   const warnings: StrengthChainWarning[] = [];
@@ -135,6 +150,7 @@ export function strengthChain(input: StrengthChainInput): StrengthChain {
   let directValues: number[] = [];
   let stats: StrengthChain['stats'] = null;
   let kn: number | null = null;
+  let logStats: StrengthChain['logStats'] = null;
   let characteristic: number;
   let labDiameter: number;
   if (accepted.length > 0) {
@@ -146,6 +162,7 @@ export function strengthChain(input: StrengthChainInput): StrengthChain {
     const result = characteristicValue(directValues, rule);
     stats = { n: result.n, mean: result.mean, sd: result.sd, cov: result.cov };
     kn = result.kn;
+    logStats = result.log ?? null;
     characteristic = result.value;
     if (result.warning !== undefined) {
       warnings.push({ code: result.kn === null ? 'FEW_SPECIMENS' : 'LOWER5_NEGATIVE', path: 'tensile.specimens', message: result.warning });
@@ -164,11 +181,11 @@ export function strengthChain(input: StrengthChainInput): StrengthChain {
         message: `none of the ${specimens.length} specimen(s) was accepted; the given value ${MPa(value)} is used`,
       });
     }
-    if (rule === 'lower5') {
+    if (rule !== 'mean') {
       warnings.push({
         code: 'LOWER5_GIVEN_VALUE',
         path: 'tensile.value_MPa',
-        message: 'a 5 % fractile needs test results; the given value is used as the characteristic value',
+        message: `the characteristic rule "${rule}" needs test results; the given value is used as the characteristic value`,
       });
     }
     labDiameter = DEFAULT_LAB_DIAMETER_MM / 1000;
@@ -229,11 +246,12 @@ export function strengthChain(input: StrengthChainInput): StrengthChain {
       message: `cross-joint spacing ${crossJointSpacing} m is less than the span ${span} m: no tensile strength across the joints (design 0); the voussoir checks govern`,
     });
   }
-  const design = crossJointed ? 0 : Math.min(block, mass);
+  const designUncracked = tensileBasis === 'lab' ? block : Math.min(block, mass);
+  const design = crossJointed ? 0 : designUncracked;
 
   return {
-    source, reduction, lab, labMethod, directFactor: factor, direct, directValues, stats, kn, characteristic,
+    source, reduction, lab, labMethod, directFactor: factor, direct, directValues, stats, kn, logStats, characteristic,
     dLab_mm: size.dLab_mm, dEffRaw_mm: size.dEffRaw_mm, dEff_mm: size.dEff_mm, sizeClamped: size.clamped, sizeFactor,
-    block, fractureFrequency: frequencyUsed, rqdSource, rqd, gsi, mb, s, a, massUcs, mass, crossJointed, design, warnings,
+    block, fractureFrequency: frequencyUsed, rqdSource, rqd, gsi, mb, s, a, massUcs, mass, crossJointed, tensileBasis, designUncracked, design, warnings,
   };
 }

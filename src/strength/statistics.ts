@@ -50,30 +50,65 @@ export function knLower5(n: number): number | null {
   return kn;
 }
 
-export type CharacteristicRuleName = 'mean' | 'lower5';
+export type CharacteristicRuleName = 'mean' | 'lower5' | 'cautiousMean' | 'lower5Log';
+
+export const CHARACTERISTIC_RULE_NAMES: readonly CharacteristicRuleName[] = ['mean', 'lower5', 'cautiousMean', 'lower5Log'];
 
 export interface Characteristic extends Summary {
   value: number;
+  /**
+   * The multiplier used: kn of EN 1990 Table D1 for 'lower5' and 'lower5Log'; t(0.95, n − 1)/√n
+   * for 'cautiousMean'; null for 'mean' or when too few values fall back to the mean.
+   */
   kn: number | null;
+  /** 'lower5Log' only: mean and sample standard deviation of ln x. */
+  log?: { mean: number; sd: number };
   warning?: string;
 }
 
 /**
- * Characteristic value of a set of test results (any unit). 'mean': the mean. 'lower5':
- * m·(1 − kn·V), kn from `knLower5`, clamped at ≥ 0 (EN 1990 Annex D, V unknown); with fewer
- * than 3 values the mean is used and a warning says so.
- *     characteristicValue([2, 2.5, 3], 'lower5') // value = 2.5·(1 − 3.37·0.2) = 0.815
+ * Characteristic value of a set of test results (any unit, values > 0 for 'lower5Log').
+ * - 'mean': the mean.
+ * - 'lower5': m·(1 − kn·V), kn from `knLower5` (EN 1990 Annex D, V unknown), clamped at ≥ 0;
+ *   fewer than 3 values: the mean, with a warning.
+ * - 'cautiousMean': m·(1 − t(0.95, n − 1)·V/√n), the cautious estimate of the mean for a failure
+ *   involving a large volume of ground (EN 1997-1 §2.4.5.2; memory), clamped at ≥ 0; fewer than
+ *   2 values: the mean, with a warning.
+ * - 'lower5Log': the lognormal 5 % fractile exp(m_y − kn·s_y), y = ln x (EN 1990 Annex D, D7.3;
+ *   memory), never negative; fewer than 3 values: the mean, with a warning.
+ *     characteristicValue([2, 2.5, 3], 'lower5')   // value = 2.5·(1 − 3.37·0.2) = 0.815
+ *     characteristicValue([5, 10, 15], 'lower5Log') // value ≈ 1.397
  */
 export function characteristicValue(values: readonly number[], rule: CharacteristicRuleName): Characteristic {
-  if (rule !== 'mean' && rule !== 'lower5') throw new RangeError(`rule must be "mean" or "lower5", got ${JSON.stringify(rule)}`);
+  if (!CHARACTERISTIC_RULE_NAMES.includes(rule)) {
+    throw new RangeError(`rule must be one of ${CHARACTERISTIC_RULE_NAMES.map((r) => `"${r}"`).join(', ')}, got ${JSON.stringify(rule)}`);
+  }
   const { n, mean, sd, cov } = summarise(values);
   if (rule === 'mean') return { n, mean, sd, cov, value: mean, kn: null };
+  if (rule === 'cautiousMean') {
+    if (n < 2) {
+      return { n, mean, sd, cov, value: mean, kn: null, warning: `only ${n} result: a cautious mean needs at least 2 (EN 1997-1 §2.4.5.2); the mean is used` };
+    }
+    const factor = studentTQuantile(0.95, n - 1) / Math.sqrt(n);
+    const cautious = mean * (1 - factor * cov);
+    if (cautious < 0) {
+      return { n, mean, sd, cov, value: 0, kn: factor, warning: `the cautious mean m(1 − t·V/√n) is negative (V = ${cov.toFixed(3)}); taken as 0` };
+    }
+    return { n, mean, sd, cov, value: cautious, kn: factor };
+  }
   const kn = knLower5(n);
   if (kn === null) {
     return {
       n, mean, sd, cov, value: mean, kn: null,
       warning: `only ${n} result(s): a 5 % fractile needs at least 3 (EN 1990 Annex D); the mean is used`,
     };
+  }
+  if (rule === 'lower5Log') {
+    values.forEach((v, i) => {
+      if (!(v > 0)) throw new RangeError(`values[${i}] must be > 0 for a lognormal fractile, got ${v}`);
+    });
+    const logs = summariseLogs(values);
+    return { n, mean, sd, cov, value: Math.exp(logs.mean - kn * logs.sd), kn, log: logs };
   }
   const fractile = mean * (1 - kn * cov);
   if (fractile < 0) {
@@ -83,6 +118,14 @@ export function characteristicValue(values: readonly number[], rule: Characteris
     };
   }
   return { n, mean, sd, cov, value: fractile, kn };
+}
+
+/** Mean and sample standard deviation of ln x. */
+function summariseLogs(values: readonly number[]): { mean: number; sd: number } {
+  const y = values.map((v) => Math.log(v));
+  const m = y.reduce((a, b) => a + b, 0) / y.length;
+  const ss = y.reduce((a, b) => a + (b - m) * (b - m), 0);
+  return { mean: m, sd: y.length > 1 ? Math.sqrt(ss / (y.length - 1)) : 0 };
 }
 
 // ---------------------------------------------------------------- Student t

@@ -12,13 +12,18 @@ import { seeded as rng } from '../helpers/seeded';
 
 const root = join(dirname(fileURLToPath(import.meta.url)), '../..');
 
-/** The one-layer example of DESIGN.md ("Project file" and "Report" sections). */
+/**
+ * The one-layer example of DESIGN.md ("Project file" and "Report" sections). DESIGN's report
+ * numbers were computed with crushing against the UCS as given (FS crushing 29.7), so the
+ * fixture sets crushingStrength "lab" and keeps the file's tension target of 4.
+ */
 export function designExample(): Project {
   return parseProject({
-    schema: 'lamina/1',
+    schema: 'lamina/2',
     title: 'DESIGN.md example',
     opening: { type: 'beam', span_m: 6.0, ends: 'clamped' },
-    loads: { surcharge_kPa: 0, support_kPa: 0, horizontalStress_MPa: 0 },
+    loads: { surcharge_kPa: 0, horizontalStress_MPa: 0 },
+    support: { standing_kPa: 0 },
     layers: [
       {
         name: 'Shale',
@@ -34,7 +39,7 @@ export function designExample(): Project {
         hoekBrown: { mi: 7, disturbance: 0 },
       },
     ],
-    design: { fsTarget: { tension: 4, crushing: 2, sliding: 1.5 }, deflectionLimitRatio: 0.1, characteristic: 'mean', basis: 'intact' },
+    design: { fsTarget: { tension: 4, crushing: 2, sliding: 1.5 }, deflectionLimitRatio: 0.1, characteristic: 'mean', basis: 'intact', crushingStrength: 'lab' },
   }).project;
 }
 
@@ -48,7 +53,7 @@ export function presets(): { file: string; project: Project }[] {
 
 
 /** A random valid project: 1–5 layers, any opening type and options (invented values). */
-export function randomProject(seed: number, overrides: { type?: 'beam' | 'slab' | 'cantilever' } = {}): Project {
+export function randomProject(seed: number, overrides: { type?: 'beam' | 'slab' | 'cantilever' | 'intersection' } = {}): Project {
   const r = rng(seed);
   const between = (lo: number, hi: number) => lo + (hi - lo) * r();
   const pick = <T>(xs: readonly T[]): T => xs[Math.floor(r() * xs.length)];
@@ -85,16 +90,19 @@ export function randomProject(seed: number, overrides: { type?: 'beam' | 'slab' 
     };
   });
   return parseProject({
-    schema: 'lamina/1',
+    schema: 'lamina/2',
     title: `Generated ${seed} (invented)`,
-    opening: { type, span_m: span, ...(type === 'slab' ? { length_m: span * between(1, 3) } : {}), ends: pick(['clamped', 'simple'] as const) },
-    loads: { surcharge_kPa: r() < 0.5 ? 0 : between(0, 60), support_kPa: r() < 0.6 ? 0 : between(0, 20), horizontalStress_MPa: r() < 0.5 ? 0 : between(0, 6) },
+    opening: { type, span_m: span, ...(type === 'slab' || type === 'intersection' ? { length_m: span * between(1, 3) } : {}), ends: pick(['clamped', 'simple'] as const) },
+    loads: { surcharge_kPa: r() < 0.5 ? 0 : between(0, 60), horizontalStress_MPa: r() < 0.5 ? 0 : between(0, 6) },
+    support: { standing_kPa: r() < 0.6 ? 0 : between(0, 20) },
     layers,
     design: {
       fsTarget: { tension: between(2, 8), crushing: between(1.5, 3), sliding: between(1.2, 2) },
       deflectionLimitRatio: pick([0.1, 0.1, 0.25]),
-      characteristic: pick(['mean', 'lower5'] as const),
+      characteristic: pick(['mean', 'lower5', 'cautiousMean', 'lower5Log'] as const),
       basis: pick(['intact', 'jointed'] as const),
+      tensileBasis: pick(['rockMass', 'lab'] as const),
+      crushingStrength: pick(['rockMass', 'lab'] as const),
       planeStrainModulus: r() < 0.2,
     },
   }).project;

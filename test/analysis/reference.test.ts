@@ -4,9 +4,10 @@ import { reference } from './reference';
 import { designExample, presets, randomProject } from './fixtures';
 import type { Project } from '../../src/model/types';
 
-// Lamina's report against the independent plain implementation of METHODS.md in ./reference.ts:
-// strength, elastic and load fields to 0.5 %, voussoir to 1 % with n within 0.02 and identical
-// snap-through flags, largest spans to 1 % (or 5 mm).
+// Lamina's report against the independent plain implementation of METHODS.md (v2) in
+// ./reference.ts: strength, elastic and load fields to 0.5 %, voussoir to 1 % with n within 0.02
+// and identical snap-through flags, which checks count and which one governs (layer index and
+// mode; FS to 1 %), the design span, largest spans to 1 % (or 5 mm).
 const rel = (a: number, b: number) => Math.abs(a - b) / Math.max(Math.abs(b), 1e-9);
 
 function compare(project: Project, label: string): void {
@@ -51,6 +52,25 @@ function compare(project: Project, label: string): void {
     // δ = z0 − z is a small difference of two lever arms; compare it on the scale of z0 too.
     expect(rel(v.deflection_mm!, f.voussoir.delta * 1e3) < 0.02 || Math.abs(v.deflection_mm! - f.voussoir.delta * 1e3) < 1e-3 * l.thickness_m * 1e3, `${at} δ ${v.deflection_mm} vs ${f.voussoir.delta * 1e3}`).toBe(true);
   });
+  expect(Math.abs(r.opening.designSpan_m - ref.designSpan) < 1e-9 * ref.designSpan, `${label} design span`).toBe(true);
+  if (project.opening.type !== 'slab') {
+    // which checks count, per layer and mode (METHODS §10)
+    for (const row of r.checks) {
+      if (row.fs === null) continue;
+      expect(row.counts, `${label} layer ${row.layerIndex} ${row.mode} counts`).toBe(ref.counts[row.layerIndex][row.mode]);
+    }
+    const g = r.governing;
+    const h = ref.governing;
+    if (g === null || h === null) expect(g, `${label} governing`).toBe(h);
+    else {
+      // near-ties between two rows may resolve either way within the tolerances: compare the FS
+      const t = project.design.fsTarget;
+      const hTarget = h.mode === 'tension' ? t.tension : h.mode === 'crushing' ? t.crushing : h.mode === 'sliding' ? t.sliding : 1;
+      const same = g.layerIndex === h.layerIndex && g.mode === h.mode;
+      expect(same || Math.abs(g.fs / g.target - h.fs / hTarget) <= 0.02 * (g.fs / g.target), `${label} governing ${g.layerIndex}/${g.mode} ${g.fs} vs reference ${h.layerIndex}/${h.mode} ${h.fs}`).toBe(true);
+      if (same) expect(Math.abs(g.fs - h.fs) <= 0.01 * Math.abs(h.fs) || Math.abs(g.fs - h.fs) < 1e-3, `${label} governing FS`).toBe(true);
+    }
+  }
   for (const m of ['tension', 'crushing', 'snapThrough', 'deflection'] as const) {
     if (m === 'tension' && project.opening.type === 'slab') continue; // plate stress: not in the reference
     const a = r.maxSpan_m![m];
@@ -68,8 +88,23 @@ describe('Lamina against an independent implementation of METHODS.md', () => {
     compare(designExample(), 'DESIGN example');
     for (const { file, project } of presets()) compare(project, file);
   });
-  it('60 generated beam and cantilever projects agree', { timeout: 300_000 }, () => {
-    for (let seed = 5000; seed < 5060; seed++) compare(randomProject(seed, { type: seed % 4 === 0 ? 'cantilever' : 'beam' }), `seed ${seed}`);
+  it('60 generated beam, cantilever and intersection projects agree (both tensile and crushing bases, all characteristic rules)', { timeout: 300_000 }, () => {
+    for (let seed = 5000; seed < 5060; seed++) {
+      compare(randomProject(seed, { type: seed % 4 === 0 ? 'cantilever' : seed % 4 === 1 ? 'intersection' : 'beam' }), `seed ${seed}`);
+    }
+  });
+  it('20 generated roofs with blocks (s/t < 2), heavy standing support and horizontal stress agree', { timeout: 300_000 }, () => {
+    let blocks = 0;
+    for (let seed = 8000; seed < 8020; seed++) {
+      const project = randomProject(seed, { type: seed % 2 ? 'intersection' : 'beam' });
+      project.layers[0]!.thickness_m = project.opening.span_m * (0.4 + 0.2 * (seed % 3)); // s/t ≈ 2.5, 1.7, 1.25 (intersection: on the diagonal)
+      if (seed % 4 === 0) project.support.standing_kPa = 400;
+      if (seed % 3 === 0) project.loads.horizontalStress_MPa = 3;
+      compare(project, `block seed ${seed}`);
+      const r = analyseProject(project);
+      if (r.opening.designSpan_m / project.layers[0]!.thickness_m < 2) blocks++;
+    }
+    expect(blocks).toBeGreaterThan(3);
   });
   it('30 long, thin, soft roofs (snap-through near and past the limit) agree, flags included', { timeout: 300_000 }, () => {
     let snaps = 0;
@@ -85,8 +120,8 @@ describe('Lamina against an independent implementation of METHODS.md', () => {
       compare(project, `thin seed ${seed}`);
       for (const l of analyseProject(project).layers) l.voussoir?.snapThrough ? snaps++ : stands++;
     }
-    expect(snaps).toBeGreaterThan(5);
-    expect(stands).toBeGreaterThan(5);
+    expect(snaps).toBeGreaterThan(3);
+    expect(stands).toBeGreaterThan(3);
   });
   it('20 generated slab projects agree on every non-plate field', { timeout: 300_000 }, () => {
     for (let seed = 7000; seed < 7020; seed++) {

@@ -1,11 +1,14 @@
 /**
- * An independent, deliberately plain implementation of METHODS.md §1–§3 and §5–§11, written
- * from the formulas alone and sharing no code with src/ (only the project types). It is slow
- * on purpose: Diederichs & Kaiser's 0.01 sweep with the fixed-point lever-arm iteration, and a
- * linear scan plus bisection for the spans. The reference test compares Lamina's report with it.
- * Plates are not re-derived here (their check is the series solution in the plate tests).
+ * An independent, deliberately plain implementation of METHODS.md §1–§3a, §5–§12 (standing
+ * support), §14 and §15 (v2), written from the formulas alone and sharing no code with src/
+ * (only the project types; Student t from jstat). It is slow on purpose: Diederichs & Kaiser's
+ * 0.01 sweep with the fixed-point lever-arm iteration, and a linear scan plus bisection for the
+ * spans. The reference test compares Lamina's report with it, including which checks count
+ * and which governs. Plates are not re-derived here (their check is the series solution in the
+ * plate tests).
  */
-import type { Project } from '../../src/model/types';
+import jStat from 'jstat';
+import type { Mode, Project } from '../../src/model/types';
 
 const KN_TABLE: [number, number][] = [[3, 3.37], [4, 2.63], [5, 2.33], [6, 2.18], [8, 2.0], [10, 1.92], [20, 1.76], [30, 1.73]];
 
@@ -25,11 +28,16 @@ export interface RefLayer {
 
 export interface RefReport {
   layers: RefLayer[];
+  /** Design span (the diagonal for an intersection). */
+  designSpan: number;
+  /** Per layer: which modes count at the current span (METHODS §10). */
+  counts: Record<Mode, boolean>[];
+  governing: { layerIndex: number; mode: Mode; fs: number } | null;
   maxSpan: { tension: number | null; crushing: number | null; snapThrough: number | null; deflection: number | null };
 }
 
-/** D&K 0.01 sweep with the published fixed-point iteration (METHODS §3). */
-export function refVoussoir(s: number, t: number, g: number, E: number, ucs: number, phiDeg: number) {
+/** D&K 0.01 sweep with the published fixed-point iteration (METHODS §3); σh adds to the crushing demand only (§3a). */
+export function refVoussoir(s: number, t: number, g: number, E: number, ucs: number, phiDeg: number, sh = 0) {
   let best: { n: number; z: number; fc: number; z0: number } | null = null;
   for (let k = 1; k <= 99; k++) {
     const n = k / 100;
@@ -55,7 +63,7 @@ export function refVoussoir(s: number, t: number, g: number, E: number, ucs: num
   const delta = best.z0 - best.z;
   return {
     snap: false as const, n: best.n, z: best.z, fc: best.fc, delta, ratio: delta / t,
-    fsCrushing: ucs / best.fc, fsSliding: (best.fc * best.n * Math.tan((phiDeg * Math.PI) / 180)) / (g * s),
+    fsCrushing: ucs / (best.fc + Math.max(0, sh)), fsSliding: (best.fc * best.n * Math.tan((phiDeg * Math.PI) / 180)) / (g * s),
   };
 }
 
@@ -64,7 +72,9 @@ export function reference(project: Project): RefReport {
   const ends = o.type === 'cantilever' ? 'cantilever' : o.ends;
   const sh = project.loads.horizontalStress_MPa * 1e6;
   const d = project.design;
-  const span0 = o.span_m;
+  // Intersection: the design span is the diagonal of the entry widths (METHODS §14).
+  const scale = o.type === 'intersection' ? Math.sqrt(o.span_m ** 2 + (o.length_m ?? o.span_m) ** 2) / o.span_m : 1;
+  const span0 = o.span_m * scale;
 
   const layers0 = project.layers.map((l) => {
     const acc = l.tensile.specimens.filter((sp) => sp.valid && sp.thickness_mm <= sp.diameter_mm);
@@ -77,9 +87,19 @@ export function reference(project: Project): RefReport {
       const dv = bz.map((b) => classF * b);
       const mean = dv.reduce((a, b) => a + b, 0) / dv.length;
       const k = kn(dv.length);
+      const n = dv.length;
+      const sd = n > 1 ? Math.sqrt(dv.reduce((a, b) => a + (b - mean) ** 2, 0) / (n - 1)) : 0;
       if (d.characteristic === 'lower5' && k !== null) {
-        const sd = Math.sqrt(dv.reduce((a, b) => a + (b - mean) ** 2, 0) / (dv.length - 1));
         characteristic = Math.max(0, mean * (1 - k * (sd / mean)));
+      } else if (d.characteristic === 'cautiousMean' && n >= 2) {
+        // EN 1997-1 §2.4.5.2: m(1 − t(0.95, n − 1)·V/√n)
+        characteristic = Math.max(0, mean * (1 - (jStat.studentt.inv(0.95, n - 1) * (sd / mean)) / Math.sqrt(n)));
+      } else if (d.characteristic === 'lower5Log' && k !== null) {
+        // EN 1990 D7.3: exp(m_y − kn s_y), y = ln x
+        const y = dv.map((x) => Math.log(x));
+        const my = y.reduce((a, b) => a + b, 0) / n;
+        const sy = Math.sqrt(y.reduce((a, b) => a + (b - my) ** 2, 0) / (n - 1));
+        characteristic = Math.exp(my - k * sy);
       } else characteristic = mean;
       dLab = acc.reduce((a, sp) => a + sp.diameter_mm, 0) / acc.length;
     } else {
@@ -102,13 +122,17 @@ export function reference(project: Project): RefReport {
     const D = l.hoekBrown.disturbance;
     const mb = l.hoekBrown.mi * Math.exp((gsi - 100) / (28 - 14 * D));
     const s = Math.exp((gsi - 100) / (9 - 3 * D));
+    const a = 0.5 + (Math.exp(-gsi / 15) - Math.exp(-20 / 3)) / 6;
     const mass = (characteristic * s * l.hoekBrown.mi) / mb;
     const crossJointed = j.crossJointSpacing_m !== null && j.crossJointSpacing_m < span0;
-    const design = crossJointed ? 0 : Math.min(block, mass);
+    const uncracked = d.tensileBasis === 'lab' ? block : Math.min(block, mass);
+    const design = crossJointed ? 0 : uncracked;
+    const ucs = l.ucs_MPa * 1e6;
+    const crushStrength = d.crushingStrength === 'lab' ? ucs : ucs * Math.pow(s, a);
     const Ei = l.youngModulus_GPa * 1e9;
     const Em = l.modulusBasis === 'intact' ? Ei * (0.02 + (1 - D / 2) / (1 + Math.exp((60 + 15 * D - gsi) / 11))) : Ei;
     const Eb = d.planeStrainModulus ? Em / (1 - l.poisson ** 2) : Em;
-    return { l, lab, direct, characteristic, block, mass, design, rqd, gsi, crossJointed, Em, Eb, t: l.thickness_m, g: l.unitWeight_kNm3 * 1e3 };
+    return { l, lab, direct, characteristic, block, mass, design, uncracked, crushStrength, rqd, gsi, crossJointed, Em, Eb, t: l.thickness_m, g: l.unitWeight_kNm3 * 1e3 };
   });
 
   // Groups (self-weights only), then loads with surcharge on the top group and support on group 0.
@@ -128,7 +152,9 @@ export function reference(project: Project): RefReport {
   const loads = layers0.map((L, i) => {
     const g = groups[i];
     const idx = groups.map((x, k) => (x === g ? k : -1)).filter((k) => k >= 0);
-    const w = idx.reduce((a, k) => a + layers0[k].g * layers0[k].t, 0) + (g === nG - 1 ? project.loads.surcharge_kPa * 1e3 : 0) - (g === 0 ? project.loads.support_kPa * 1e3 : 0);
+    const down = idx.reduce((a, k) => a + layers0[k].g * layers0[k].t, 0) + (g === nG - 1 ? project.loads.surcharge_kPa * 1e3 : 0);
+    // Standing support relieves at most the load on group 0 (METHODS §12).
+    const w = down - (g === 0 ? Math.min(project.support.standing_kPa * 1e3, down) : 0);
     const k = idx.reduce((a, k) => a + layers0[k].Eb * layers0[k].t ** 3, 0);
     return (L.Eb * L.t ** 3 * w) / k;
   });
@@ -147,7 +173,7 @@ export function reference(project: Project): RefReport {
     const b = beamAt(i, span0);
     const fsTension = ends === 'cantilever' && L.crossJointed ? 0 : L.crossJointed || !(b.max > 0) ? null : L.design / b.max;
     const gEff = loads[i] / L.t;
-    const v = ends === 'cantilever' || !(gEff > 0) ? null : refVoussoir(span0, L.t, gEff, L.Em, L.l.ucs_MPa * 1e6, L.l.jointing.jointFriction_deg);
+    const v = ends === 'cantilever' || !(gEff > 0) ? null : refVoussoir(span0, L.t, gEff, L.Em, L.crushStrength, L.l.jointing.jointFriction_deg, sh);
     return {
       lab: L.lab, direct: L.direct, characteristic: L.characteristic, block: L.block, mass: L.mass, design: L.design,
       rqd: L.rqd, gsi: L.gsi, crossJointed: L.crossJointed, group: groups[i], load: loads[i],
@@ -155,25 +181,51 @@ export function reference(project: Project): RefReport {
     };
   });
 
-  // Largest spans: a plain scan from the top (0.25 m steps, 0.02 m below 2 m, 1 mm below 2 cm) and bisection to 0.1 mm.
-  const ratioAt = (mode: 'tension' | 'crushing' | 'snapThrough' | 'deflection', s: number): number => {
+  // Which checks count (METHODS §10): cantilever → tension; otherwise an uncracked layer counts
+  // tension, a cracked one (cross-jointed or basis "jointed") its voussoir unless a block (s/t < 2).
+  const counts = layers0.map((L) => {
+    const cracked = ends !== 'cantilever' && (L.crossJointed || d.basis === 'jointed');
+    const arch = ends !== 'cantilever' && cracked && span0 / L.t >= 2;
+    return { tension: !cracked, crushing: arch, sliding: arch, deflection: arch, snapThrough: arch } as Record<Mode, boolean>;
+  });
+  const target = (m: Mode) => (m === 'tension' ? d.fsTarget.tension : m === 'crushing' ? d.fsTarget.crushing : m === 'sliding' ? d.fsTarget.sliding : 1);
+  let governing: RefReport['governing'] = null;
+  let best = Infinity;
+  layers.forEach((L, i) => {
+    const v = L.voussoir;
+    const fs: Record<Mode, number | null> = {
+      tension: L.fsTension,
+      crushing: v && !v.snap ? v.fsCrushing : null,
+      sliding: v && !v.snap ? v.fsSliding : null,
+      deflection: v && !v.snap ? (v.ratio > d.deflectionLimitRatio / 1e6 ? d.deflectionLimitRatio / v.ratio : 1e6) : null,
+      snapThrough: v && v.snap ? 0 : null,
+    };
+    for (const m of ['tension', 'crushing', 'sliding', 'deflection', 'snapThrough'] as Mode[]) {
+      const f = fs[m];
+      if (!counts[i][m] || f === null) continue;
+      if (f / target(m) < best) { best = f / target(m); governing = { layerIndex: i, mode: m, fs: f }; }
+    }
+  });
+
+  // Largest spans (as entry widths w; design span w·scale): a plain scan from the top (0.25 m
+  // steps, 0.02 m below 2 m, 1 mm below 0.02 m) and bisection to 0.1 mm, over the layers in
+  // which the mode counts at the current span; a jointed layer's tension stops at its spacing.
+  const ratioAt = (mode: 'tension' | 'crushing' | 'snapThrough' | 'deflection', w: number): number => {
+    const s = w * scale;
     let r = Infinity;
     layers0.forEach((L, i) => {
+      if (!counts[i][mode]) return;
       if (mode === 'tension') {
-        if (L.crossJointed && ends !== 'cantilever') return;
-        // METHODS §11 v2: beyond its joint spacing a layer is cracked (no tension capacity);
-        // up to it, a cross-jointed overhang keeps its uncracked strength min(block, mass).
-        const spacing = L.l.jointing.crossJointSpacing_m;
-        if (spacing !== null && s > spacing) { r = 0; return; }
+        const c = L.l.jointing.crossJointSpacing_m;
+        if (c !== null && c < s) { r = 0; return; }
         const b = beamAt(i, s);
-        const strength = L.crossJointed ? Math.min(L.block, L.mass) : L.design;
-        const fs = b.max > 0 ? strength / b.max : Infinity;
+        const fs = b.max > 0 ? L.uncracked / b.max : Infinity;
         r = Math.min(r, fs / d.fsTarget.tension);
         return;
       }
       const gEff = loads[i] / L.t;
-      if (ends === 'cantilever' || !(gEff > 0)) return;
-      const v = refVoussoir(s, L.t, gEff, L.Em, L.l.ucs_MPa * 1e6, L.l.jointing.jointFriction_deg);
+      if (!(gEff > 0)) return;
+      const v = refVoussoir(s, L.t, gEff, L.Em, L.crushStrength, L.l.jointing.jointFriction_deg, sh);
       if (v.snap) { r = 0; return; }
       if (mode === 'crushing') r = Math.min(r, v.fsCrushing / d.fsTarget.crushing);
       if (mode === 'deflection') r = Math.min(r, d.deflectionLimitRatio / v.ratio);
@@ -181,11 +233,11 @@ export function reference(project: Project): RefReport {
     return r;
   };
   const applies = (mode: 'tension' | 'crushing' | 'snapThrough' | 'deflection') =>
-    mode === 'tension' ? layers.some((l) => !l.crossJointed || ends === 'cantilever') : ends !== 'cantilever' && layers.some((l) => l.voussoir !== null);
+    mode === 'tension' ? counts.some((c) => c.tension) : counts.some((c, i) => c[mode] && loads[i] > 0);
   const largest = (mode: 'tension' | 'crushing' | 'snapThrough' | 'deflection'): number | null => {
     if (!applies(mode)) return null;
     const grid: number[] = [];
-    for (let s = 0.001; s < 0.02; s += 0.001) grid.push(s); // METHODS §11 v2: down to 1 mm
+    for (let s = 0.001; s < 0.02; s += 0.001) grid.push(s);
     for (let s = 0.02; s < 2; s += 0.02) grid.push(s);
     for (let s = 2; s < 100; s += 0.25) grid.push(s);
     grid.push(100);
@@ -197,5 +249,5 @@ export function reference(project: Project): RefReport {
     while (hi - lo > 1e-4) { const m = (lo + hi) / 2; if (ratioAt(mode, m) >= 1) lo = m; else hi = m; }
     return lo;
   };
-  return { layers, maxSpan: { tension: largest('tension'), crushing: largest('crushing'), snapThrough: largest('snapThrough'), deflection: largest('deflection') } };
+  return { layers, designSpan: span0, counts, governing, maxSpan: { tension: largest('tension'), crushing: largest('crushing'), snapThrough: largest('snapThrough'), deflection: largest('deflection') } };
 }

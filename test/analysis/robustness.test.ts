@@ -33,7 +33,7 @@ describe('issue 14 item 1: tensile strength 0 means no tensile strength', () => 
     const l = r.layers[0];
     expect(l.strength.design_MPa).toBe(0);
     expect(l.elastic.fsTension).toBe(0);
-    expect(r.governing).toEqual({ layer: 'Shale', mode: 'tension', fs: 0 });
+    expect(r.governing).toEqual({ layerIndex: 0, layer: 'Shale', mode: 'tension', fs: 0, target: 4 });
     const w = r.warnings.find((x) => x.code === 'NO_TENSILE_STRENGTH');
     expect(w?.path).toBe('layers[0].tensile.value_MPa');
     // FS 0 at every span: the tension mode fails even at 1 mm (METHODS §11 v2)
@@ -53,7 +53,7 @@ describe('issue 14 item 1: tensile strength 0 means no tensile strength', () => 
 
   it('a cantilever with tensile strength 0 has FS 0 and a largest span of 0', () => {
     const r = analysed(tweak(designExample(), (q) => {
-      q.opening = { type: 'cantilever', span_m: 2, length_m: null, ends: 'clamped' };
+      q.opening = { type: 'cantilever', span_m: 2, length_m: null, ends: 'clamped', edges: null };
       q.layers[0].tensile.value_MPa = 0;
     }));
     expect(r.layers[0].elastic.fsTension).toBe(0);
@@ -69,7 +69,7 @@ describe('issue 14 item 2: a slab longer than 100 spans', () => {
     ['clamped', 0.5, (12 * (1 - 0.25 ** 2)) / 384],
     ['simple', 0.75, (5 * 12 * (1 - 0.25 ** 2)) / 384],
   ] as const)('a %s slab with length/span 250 analyses as its plane-strain strip (β, α within half a per cent of the strip limit)', (ends, beta, alpha) => {
-    const r = analysed(tweak(designExample(), (q) => void (q.opening = { type: 'slab', span_m: 2, length_m: 500, ends })));
+    const r = analysed(tweak(designExample(), (q) => void (q.opening = { type: 'slab', span_m: 2, length_m: 500, ends, edges: null })));
     const plate = r.layers[0].plate!;
     expect(Math.abs(plate.beta - beta) / beta).toBeLessThan(5e-3);
     expect(Math.abs(plate.alpha - alpha) / alpha).toBeLessThan(5e-3);
@@ -77,7 +77,7 @@ describe('issue 14 item 2: a slab longer than 100 spans', () => {
   });
 
   it('the longest slab the validator accepts (100 km on a 1 cm span) analyses finitely', () => {
-    analysed(tweak(designExample(), (q) => void (q.opening = { type: 'slab', span_m: 0.01, length_m: 100_000, ends: 'simple' })));
+    analysed(tweak(designExample(), (q) => void (q.opening = { type: 'slab', span_m: 0.01, length_m: 100_000, ends: 'simple', edges: null })));
   });
 });
 
@@ -105,7 +105,8 @@ describe('issue 14 item 3: finite but extreme values', () => {
     for (const [lo, hi] of [[true, false], [false, true]]) {
       const p = tweak(designExample(), (q) => {
         q.opening.span_m = lo ? 0.01 : 1000;
-        q.loads = { surcharge_kPa: hi ? 100_000 : 0, support_kPa: lo ? 100_000 : 0, horizontalStress_MPa: hi ? 1000 : -1000 };
+        q.loads = { surcharge_kPa: hi ? 100_000 : 0, horizontalStress_MPa: hi ? 1000 : -1000 };
+        q.support = { standing_kPa: lo ? 100_000 : 0 };
         const l = q.layers[0];
         l.thickness_m = lo ? 0.001 : 1000;
         l.youngModulus_GPa = lo ? 0.001 : 10_000;
@@ -124,7 +125,7 @@ describe('issue 14 item 3: finite but extreme values', () => {
 describe('issue 14 item 11: largest spans are in [0, 100] m, searched down to 1 mm', () => {
   it('a 0.57 m overhang of a 0.57 m bed with a tiny tensile strength reports its short largest span, not 0', () => {
     const p = tweak(designExample(), (q) => {
-      q.opening = { type: 'cantilever', span_m: 0.57, length_m: null, ends: 'clamped' };
+      q.opening = { type: 'cantilever', span_m: 0.57, length_m: null, ends: 'clamped', edges: null };
       q.layers[0].thickness_m = 0.57;
       q.layers[0].tensile.value_MPa = 0.02;
     });
@@ -169,7 +170,7 @@ describe('issue 14 item 12: the work behind a many-layer slab', () => {
   });
 
   it('a 40-layer slab whose layers differ only in ν: the layer with ν = 0.3 has the tabulated β, α (METHODS §4, Roark Table 11.4 case 1a, b/a = 2 simple)', () => {
-    const base = tweak(designExample(), (q) => void (q.opening = { type: 'slab', span_m: 5, length_m: 10, ends: 'simple' }));
+    const base = tweak(designExample(), (q) => void (q.opening = { type: 'slab', span_m: 5, length_m: 10, ends: 'simple', edges: null }));
     const many = tweak(base, (q) => {
       q.layers = Array.from({ length: 40 }, (_, i) => ({ ...structuredClone(base.layers[0]), name: `L${i}`, poisson: i === 20 ? 0.3 : 0.1 + 0.0075 * i }));
     });

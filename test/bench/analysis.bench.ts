@@ -20,9 +20,10 @@ export function fiveLayerProject(): Project {
     hoekBrown: { mi: 8, disturbance: 0 },
   });
   return parseProject({
-    schema: 'lamina/1', title: 'Benchmark: five beds (invented)',
+    schema: 'lamina/2', title: 'Benchmark: five beds (invented)',
     opening: { type: 'beam', span_m: 7, ends: 'clamped' },
-    loads: { surcharge_kPa: 20, support_kPa: 10, horizontalStress_MPa: 1 },
+    loads: { surcharge_kPa: 20, horizontalStress_MPa: 1 },
+    support: { standing_kPa: 10 },
     layers: [bed('B1', 0.4, 6, 3, null), bed('B2', 0.3, 4, 2.5, 5), bed('B3', 1.2, 18, 5, null), bed('B4', 0.6, 10, 4, null), bed('B5', 2.0, 25, 6, 12)],
     design: { fsTarget: { tension: 4, crushing: 2, sliding: 1.5 }, deflectionLimitRatio: 0.1, characteristic: 'mean', basis: 'intact' },
   }).project;

@@ -25,7 +25,7 @@ const root = resolve(dirname(fileURLToPath(import.meta.url)), '../..');
 const BUNDLE_TARGET_KB = 300;
 const EDIT_TARGET_MS = 50;
 const DEBOUNCE_MS = 150;
-const PRESET_IDS = ['coal-room-shale', 'drift-limestone', 'quarry-bench-overhang', 'intersection-slab'];
+const PRESET_IDS = ['coal-room-shale', 'drift-limestone', 'quarry-bench-overhang', 'intersection-limestone'];
 
 const median = (xs: number[]): number => {
   const s = [...xs].sort((a, b) => a - b);

@@ -46,7 +46,7 @@ describe('lamina CLI', () => {
     expect(await run(['check', 'x.json', '--frobnicate'], f.io)).toBe(2);
     expect(f.err()).toContain('--frobnicate');
   });
-  it('check --json prints a lamina-report/1 report without NaN or Infinity', async () => {
+  it('check --json prints a lamina-report/2 report without NaN or Infinity', async () => {
     for (const file of presetFiles()) {
       const f = fakeIo();
       const code = await run(['check', file, '--json'], f.io);
@@ -54,7 +54,7 @@ describe('lamina CLI', () => {
       const text = f.out();
       expect(text).not.toMatch(/NaN|Infinity/);
       const report = JSON.parse(text);
-      expect(report.schema).toBe('lamina-report/1');
+      expect(report.schema).toBe('lamina-report/2');
       expect(report.layers.length).toBeGreaterThan(0);
       expect(Object.keys(report.maxSpan_m)).toEqual(['tension', 'crushing', 'sliding', 'snapThrough', 'deflection', 'governing']);
     }
@@ -156,7 +156,7 @@ describe('npm run lamina', () => {
   it('builds and runs the CLI through the package script with the exit codes of DESIGN.md', async () => {
     const ok = spawnSync('npm', ['run', '-s', 'lamina', '--', 'check', presetFiles()[0], '--json'], { encoding: 'utf8' });
     expect([0, 1]).toContain(ok.status);
-    expect(JSON.parse(ok.stdout).schema).toBe('lamina-report/1');
+    expect(JSON.parse(ok.stdout).schema).toBe('lamina-report/2');
     const help = execFileSync('npm', ['run', '-s', 'lamina', '--', '--help'], { encoding: 'utf8' });
     expect(help).toContain('licensed engineer');
   }, 120_000);

@@ -80,7 +80,7 @@ describe('the built lamina command', () => {
     const r = lamina(['check', 'presets/*.lamina.json', '--json']);
     const entries = JSON.parse(r.stdout) as { file: string; exit: number; report: { schema: string } }[];
     expect(entries.map((e) => e.file)).toEqual(expected);
-    expect(entries.every((e) => e.report.schema === 'lamina-report/1')).toBe(true);
+    expect(entries.every((e) => e.report.schema === 'lamina-report/2')).toBe(true);
     expect(r.code).toBe(Math.max(...entries.map((e) => e.exit)));
     expect(r.stderr).toContain(`${expected.length} files checked`);
     const none = lamina(['check', 'presets/*.nothing']);
@@ -138,7 +138,7 @@ describe('the built lamina command', () => {
     const lib = (await import(pathToFileURL(join(out, 'index.js')).href)) as typeof import('../../src/index');
     const { project } = lib.readProjectText(coalText);
     const report = lib.analyseProject(project);
-    expect(report.schema).toBe('lamina-report/1');
+    expect(report.schema).toBe('lamina-report/2');
     expect(report).toEqual(analyseProject(readProjectText(coalText).project));
     expect(lib.CAUTION).toBe(CAUTION);
     const reportLib = (await import(pathToFileURL(join(out, 'report.js')).href)) as typeof import('../../src/report');

@@ -9,7 +9,6 @@
  */
 import { analyse, beamProfile, designChart, minimumThickness, slabField, spanCurve } from '../../src/analysis';
 import type { Analysis } from '../../src/analysis';
-import { deflectionFs } from '../../src/analysis/checks';
 import type { Project, Report } from '../../src/model/types';
 
 /**
@@ -76,22 +75,20 @@ export function reportViolations(project: Project, report: Report): string[] {
   if (g) {
     num('governing.fs', g.fs);
     fs('governing.fs', g.fs);
-    const i = report.layers.findIndex((l) => l.name === g.layer);
-    if (i < 0) bad.push(`governing.layer: "${g.layer}" is not a layer`);
-    else {
-      const same = report.layers.filter((l) => l.name === g.layer);
-      const values = same.map((l) => {
-        const v = l.voussoir;
-        switch (g.mode) {
-          case 'tension': return l.elastic.fsTension;
-          case 'crushing': return v?.fsCrushing ?? null;
-          case 'sliding': return v?.fsSliding ?? null;
-          case 'snapThrough': return v?.snapThrough ? 0 : null;
-          case 'deflection': return deflectionFs(v?.deflectionRatio ?? null, project.design.deflectionLimitRatio);
-        }
-      });
-      if (!values.some((x) => x !== null && Math.abs(x - g.fs) <= 1e-9 * Math.max(1, Math.abs(g.fs)))) bad.push(`governing: fs ${g.fs} (${g.mode}) does not match ${g.layer}'s ${values.join(', ')}`);
+    const layer = report.layers[g.layerIndex];
+    if (!layer || layer.name !== g.layer) bad.push(`governing.layerIndex: ${g.layerIndex} is not the layer "${g.layer}"`);
+    // the governing row is a counted row of the check table with the same FS and target
+    const row = report.checks.find((r) => r.layerIndex === g.layerIndex && r.mode === g.mode);
+    if (!row) bad.push(`governing: no check row for layer ${g.layerIndex} ${g.mode}`);
+    else if (!row.counts || row.fs === null || Math.abs(row.fs - g.fs) > 1e-9 * Math.max(1, Math.abs(g.fs)) || row.target !== g.target) {
+      bad.push(`governing: fs ${g.fs} (${g.mode}) does not match its counted row ${JSON.stringify(row)}`);
     }
+    if (layer && g.mode === 'tension' && layer.elastic.fsTension !== g.fs) bad.push(`governing: fs ${g.fs} is not layers[${g.layerIndex}].elastic.fsTension`);
+  }
+  for (const r of report.checks) {
+    if (!r.counts && !r.reason) bad.push(`checks: layer ${r.layerIndex} ${r.mode} does not count but gives no reason`);
+    if (r.counts && r.reason !== null) bad.push(`checks: layer ${r.layerIndex} ${r.mode} counts but has a reason`);
+    numOrNull(`checks[${r.layerIndex}].${r.mode}.fs`, r.fs);
   }
   const m = report.maxSpan_m;
   if (m === null) bad.push('maxSpan_m: null');
@@ -101,8 +98,8 @@ export function reportViolations(project: Project, report: Report): string[] {
       if (v !== null && !(v >= 0 && v <= 100)) bad.push(`maxSpan_m.${k}: ${v} is outside [0, 100]`);
     }
     if (m.sliding !== null) bad.push('maxSpan_m.sliding: must be null');
-    const tensionCounts = project.design.basis === 'intact' || cantilever;
-    const cands = [tensionCounts ? m.tension : null, m.crushing, m.snapThrough, m.deflection].filter((x): x is number => x !== null);
+    // maxSpan holds only the modes counted at the current span, so governing is the least of them
+    const cands = [m.tension, m.crushing, m.snapThrough, m.deflection].filter((x): x is number => x !== null);
     const least = cands.length ? Math.min(...cands) : null;
     if (m.governing !== least) bad.push(`maxSpan_m.governing: ${m.governing}, the least of the modes is ${least}`);
   }

@@ -107,10 +107,12 @@ function layer(r: Rand, i: number): Json {
 }
 
 function opening(r: Rand): Json {
-  const type = pick(r, ['beam', 'slab', 'cantilever'] as const);
+  const type = pick(r, ['beam', 'slab', 'cantilever', 'intersection'] as const);
   const span = numberIn(r, NUMBERS.span, [0.5, 30]);
   const o: Json = { type, span_m: span };
+  if (type === 'intersection') o.length_m = Math.min(NUMBERS.length.max, span * uniform(r, 1, 3));
   if (type === 'slab') {
+    if (r() < 0.3) o.edges = { short: pick(r, ['clamped', 'simple', 'free']), long: pick(r, ['clamped', 'simple']) };
     const u = r();
     const aspect = u < 0.1 ? 1 : u < 0.7 ? uniform(r, 1, 4) : u < 0.9 ? uniform(r, 4, 100) : uniform(r, 100, 1e4);
     o.length_m = Math.min(NUMBERS.length.max, Math.max(span, r() < 0.05 ? NUMBERS.length.max : span * aspect));
@@ -121,15 +123,15 @@ function opening(r: Rand): Json {
 
 /** One random valid project. */
 export function randomValidProject(r: Rand): Json {
-  const p: Json = { schema: 'lamina/1', opening: opening(r) };
+  const p: Json = { schema: 'lamina/2', opening: opening(r) };
   if (r() < 0.5) p.title = 'Fuzz project (invented)';
   if (r() < 0.8) {
     const loads: Json = {};
     if (r() < 0.6) loads.surcharge_kPa = numberIn(r, NUMBERS.pressure, [0, 200]);
-    if (r() < 0.5) loads.support_kPa = numberIn(r, NUMBERS.pressure, [0, 50]);
     if (r() < 0.6) loads.horizontalStress_MPa = numberIn(r, NUMBERS.horizontalStress, [-2, 20]);
     p.loads = loads;
   }
+  if (r() < 0.4) p.support = { standing_kPa: numberIn(r, NUMBERS.pressure, [0, 50]) };
   p.layers = Array.from({ length: layerCount(r) }, (_, i) => layer(r, i));
   if (r() < 0.8) {
     const d: Json = {};
@@ -139,7 +141,9 @@ export function randomValidProject(r: Rand): Json {
       d.fsTarget = fs;
     }
     if (r() < 0.5) d.deflectionLimitRatio = numberIn(r, NUMBERS.ratio, [0.05, 0.25]);
-    if (r() < 0.6) d.characteristic = pick(r, ['mean', 'lower5']);
+    if (r() < 0.6) d.characteristic = pick(r, ['mean', 'lower5', 'cautiousMean', 'lower5Log']);
+    if (r() < 0.5) d.tensileBasis = pick(r, ['rockMass', 'lab']);
+    if (r() < 0.5) d.crushingStrength = pick(r, ['rockMass', 'lab']);
     if (r() < 0.6) d.basis = pick(r, ['intact', 'jointed']);
     if (r() < 0.5) d.planeStrainModulus = r() < 0.5;
     p.design = d;

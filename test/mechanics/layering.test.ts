@@ -52,7 +52,18 @@ describe('layered roof — Obert & Duvall 1967', () => {
     // one group: Σ = 12.5 + 7.5 + 10 − 4 = 26 kPa shared as Et³: 1.25 : 0.135
     expectClose(together.loads[0], (1.25 / 1.385) * 26e3, 1e-12);
   });
-  it('loads in a group sum to the group weight plus surcharge minus support (conservation)', () => {
+  it('standing support is capped at the load it relieves (METHODS §12): 0.6 m, 25 kN/m³ (15 kPa) under 400 kPa → load 0, excess 385 kPa', () => {
+    const bed = { unitWeight: 25e3, thickness: 0.6, modulus: 10e9 };
+    const shared = shareLoads([bed], [0], 0, 400e3);
+    expect(shared.loads[0]).toBe(0);
+    expectClose(shared.supportApplied, 15e3, 1e-12);
+    expectClose(shared.supportExcess, 385e3, 1e-12);
+    // with a surcharge on the same (only) group the support can relieve that too
+    const loaded = shareLoads([bed], [0], 10e3, 400e3);
+    expect(loaded.loads[0]).toBe(0);
+    expectClose(loaded.supportApplied, 25e3, 1e-12);
+  });
+  it('loads in a group sum to the group weight plus surcharge minus the applied support (conservation), never negative', () => {
     const bed = fc.record({
       unitWeight: fc.double({ min: 15e3, max: 30e3, noNaN: true }),
       thickness: fc.double({ min: 0.05, max: 3, noNaN: true }),
@@ -69,7 +80,10 @@ describe('layered roof — Obert & Duvall 1967', () => {
         }
         const total = shared.loads.reduce((a, b) => a + b, 0);
         const weight = beds.reduce((a, b) => a + b.unitWeight * b.thickness, 0);
-        expectClose(total, weight + sur - sup, 1e-9);
+        expectClose(total, weight + sur - shared.supportApplied, 1e-9);
+        expect(shared.supportApplied).toBeLessThanOrEqual(sup);
+        expectClose(shared.supportApplied + shared.supportExcess, sup, 1e-12);
+        for (const q of shared.loads) expect(q).toBeGreaterThanOrEqual(0);
         // groups are contiguous and start at 0
         expect(groups[0]).toBe(0);
         for (let i = 1; i < groups.length; i++) expect(groups[i] - groups[i - 1]).toBeGreaterThanOrEqual(0);

@@ -69,11 +69,15 @@ export const layerArb = fc.record(
 );
 
 const openingArb = fc
-  .tuple(fc.constantFrom('beam', 'slab', 'cantilever'), num(0.5, 60), num(0, 40), fc.constantFrom('clamped', 'simple'), fc.boolean())
-  .map(([type, span, extra, ends, withEnds]) => {
+  .tuple(
+    fc.constantFrom('beam', 'slab', 'cantilever', 'intersection'), num(0.5, 60), num(0, 40), fc.constantFrom('clamped', 'simple'), fc.boolean(),
+    fc.option(fc.record({ short: fc.constantFrom('clamped', 'simple'), long: fc.constantFrom('clamped', 'simple', 'free') })),
+  )
+  .map(([type, span, extra, ends, withEnds, edges]) => {
     const o: Record<string, unknown> = { type, span_m: span };
-    if (type === 'slab') o.length_m = span + extra;
-    if (type !== 'cantilever' || withEnds) o.ends = ends;
+    if (type === 'slab' || type === 'intersection') o.length_m = span + extra;
+    if ((type !== 'cantilever' && type !== 'intersection') || withEnds) o.ends = ends;
+    if (type === 'slab' && edges !== null) o.edges = edges;
     return o;
   });
 
@@ -81,8 +85,10 @@ const designArb = fc.record(
   {
     fsTarget: fc.record({ tension: num(1, 10), crushing: num(1, 10), sliding: num(1, 10) }, { requiredKeys: [] }),
     deflectionLimitRatio: num(0.01, 0.25),
-    characteristic: fc.constantFrom('mean', 'lower5'),
+    characteristic: fc.constantFrom('mean', 'lower5', 'cautiousMean', 'lower5Log'),
     basis: fc.constantFrom('intact', 'jointed'),
+    tensileBasis: fc.constantFrom('rockMass', 'lab'),
+    crushingStrength: fc.constantFrom('rockMass', 'lab'),
     planeStrainModulus: fc.boolean(),
   },
   { requiredKeys: [] },
@@ -90,14 +96,15 @@ const designArb = fc.record(
 
 export const rawProjectArb = fc.record(
   {
-    schema: fc.constant('lamina/1'),
+    schema: fc.constant('lamina/2'),
     title: fc.string({ maxLength: 20 }),
     description: fc.string({ maxLength: 40 }),
     opening: openingArb,
     loads: fc.record(
-      { surcharge_kPa: num(0, 5000), support_kPa: num(0, 500), horizontalStress_MPa: num(-5, 100) },
+      { surcharge_kPa: num(0, 5000), horizontalStress_MPa: num(-5, 100) },
       { requiredKeys: [] },
     ),
+    support: fc.record({ standing_kPa: num(0, 500) }, { requiredKeys: [] }),
     layers: fc.array(layerArb, { minLength: 1, maxLength: 4 }),
     design: designArb,
   },

@@ -15,7 +15,7 @@ const brazilian = (s: Project['layers'][number]['tensile']['specimens'][number])
 
 describe('presets/*.lamina.json', () => {
   it('the four demo presets are present', () => {
-    expect(files).toEqual(['coal-room-shale.lamina.json', 'drift-limestone.lamina.json', 'intersection-slab.lamina.json', 'quarry-bench-overhang.lamina.json']);
+    expect(files).toEqual(['coal-room-shale.lamina.json', 'drift-limestone.lamina.json', 'intersection-limestone.lamina.json', 'quarry-bench-overhang.lamina.json']);
   });
 
   it.each(files)('%s passes validateProject with no errors and no warnings', (file) => {

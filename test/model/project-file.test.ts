@@ -85,14 +85,15 @@ describe('writeProjectText', () => {
   it('writes the DESIGN.md key order, 2-space indent and a trailing newline', () => {
     const p = defaultProject();
     p.description = 'd';
-    p.opening = { type: 'slab', span_m: 6, length_m: 9, ends: 'clamped' };
+    p.opening = { type: 'slab', span_m: 6, length_m: 9, ends: 'clamped', edges: { short: 'clamped', long: 'free' } };
     const text = writeProjectText(p);
     expect(text.endsWith('}\n')).toBe(true);
-    expect(text.startsWith('{\n  "schema": "lamina/1",\n  "title": ')).toBe(true);
+    expect(text.startsWith('{\n  "schema": "lamina/2",\n  "title": ')).toBe(true);
     const raw = JSON.parse(text);
-    expect(Object.keys(raw)).toEqual(['schema', 'title', 'description', 'opening', 'loads', 'layers', 'design']);
-    expect(Object.keys(raw.opening)).toEqual(['type', 'span_m', 'length_m', 'ends']);
-    expect(Object.keys(raw.loads)).toEqual(['surcharge_kPa', 'support_kPa', 'horizontalStress_MPa']);
+    expect(Object.keys(raw)).toEqual(['schema', 'title', 'description', 'opening', 'loads', 'support', 'layers', 'design']);
+    expect(Object.keys(raw.opening)).toEqual(['type', 'span_m', 'length_m', 'ends', 'edges']);
+    expect(Object.keys(raw.loads)).toEqual(['surcharge_kPa', 'horizontalStress_MPa']);
+    expect(Object.keys(raw.support)).toEqual(['standing_kPa']);
     expect(Object.keys(raw.layers[0])).toEqual([
       'name', 'thickness_m', 'unitWeight_kNm3', 'youngModulus_GPa', 'modulusBasis', 'poisson',
       'ucs_MPa', 'rockClass', 'tensile', 'jointing', 'hoekBrown',
@@ -101,7 +102,7 @@ describe('writeProjectText', () => {
     expect(Object.keys(raw.layers[0].jointing)).toEqual([
       'crossJointSpacing_m', 'fractureFrequency_per_m', 'rqd', 'jointCondition', 'jointFriction_deg',
     ]);
-    expect(Object.keys(raw.design)).toEqual(['fsTarget', 'deflectionLimitRatio', 'characteristic', 'basis', 'planeStrainModulus']);
+    expect(Object.keys(raw.design)).toEqual(['fsTarget', 'deflectionLimitRatio', 'characteristic', 'basis', 'tensileBasis', 'crushingStrength', 'planeStrainModulus']);
   });
 
   it('omits length_m when it is null (beam, cantilever)', () => {
@@ -110,7 +111,7 @@ describe('writeProjectText', () => {
 
   it('writes keys in the same order whatever order the object was built in', () => {
     const p = defaultProject();
-    const shuffled = { design: p.design, layers: p.layers, loads: p.loads, opening: p.opening, title: p.title, schema: p.schema };
+    const shuffled = { design: p.design, layers: p.layers, support: p.support, loads: p.loads, opening: p.opening, title: p.title, schema: p.schema };
     expect(writeProjectText(shuffled)).toBe(writeProjectText(p));
   });
 
@@ -166,12 +167,16 @@ describe('projectHash — 64-bit FNV-1a of the UTF-8 bytes', () => {
 });
 
 describe('writeProjectText — length_m', () => {
-  it('writes length_m for a slab and never for a beam or cantilever, even if the object carries one', () => {
+  it('writes length_m for a slab and an intersection and never for a beam or cantilever, even if the object carries one', () => {
     const slab = defaultProject();
-    slab.opening = { type: 'slab', span_m: 6, length_m: 9, ends: 'simple' };
+    slab.opening = { type: 'slab', span_m: 6, length_m: 9, ends: 'simple', edges: null };
     expect(JSON.parse(writeProjectText(slab)).opening.length_m).toBe(9);
+    const crossing = defaultProject();
+    crossing.opening = { type: 'intersection', span_m: 6, length_m: 8, ends: 'simple', edges: null };
+    expect(JSON.parse(writeProjectText(crossing)).opening.length_m).toBe(8);
     const beam = defaultProject();
-    beam.opening = { type: 'beam', span_m: 6, length_m: 9, ends: 'clamped' };
+    beam.opening = { type: 'beam', span_m: 6, length_m: 9, ends: 'clamped', edges: null };
     expect(writeProjectText(beam)).not.toContain('length_m');
+    expect(writeProjectText(beam)).not.toContain('edges');
   });
 });

@@ -15,7 +15,7 @@ type Json = Record<string, any>;
 /** A minimal valid raw project: only the required keys (DESIGN.md). */
 function minimal(): Json {
   return {
-    schema: 'lamina/1',
+    schema: 'lamina/2',
     opening: { type: 'beam', span_m: 6, ends: 'clamped' },
     layers: [{ thickness_m: 0.5, unitWeight_kNm3: 25, youngModulus_GPa: 8, ucs_MPa: 40, tensile: { value_MPa: 3 } }],
   };
@@ -56,13 +56,16 @@ describe('validateProject — accepts and normalises', () => {
     const p = r.project;
     expect(p.title).toBe('Untitled project');
     expect('description' in p).toBe(false);
-    expect(p.opening).toStrictEqual({ type: 'beam', span_m: 6, length_m: null, ends: 'clamped' });
-    expect(p.loads).toStrictEqual({ surcharge_kPa: 0, support_kPa: 0, horizontalStress_MPa: 0 });
+    expect(p.opening).toStrictEqual({ type: 'beam', span_m: 6, length_m: null, ends: 'clamped', edges: null });
+    expect(p.loads).toStrictEqual({ surcharge_kPa: 0, horizontalStress_MPa: 0 });
+    expect(p.support).toStrictEqual({ standing_kPa: 0 });
     expect(p.design).toStrictEqual({
-      fsTarget: { tension: 4, crushing: 2, sliding: 1.5 }, // METHODS §10 default targets
+      fsTarget: { tension: 2, crushing: 2, sliding: 1.5 }, // METHODS §10 default targets on the rock-mass basis
       deflectionLimitRatio: 0.1, // Diederichs & Kaiser 1999 (METHODS §3)
       characteristic: 'mean',
       basis: 'intact',
+      tensileBasis: 'rockMass',
+      crushingStrength: 'rockMass',
       planeStrainModulus: false,
     });
     const l = p.layers[0];
@@ -118,9 +121,9 @@ describe('validateProject — accepts and normalises', () => {
 
   it('a cantilever needs no ends (defaults to "clamped", ignored); a slab keeps length_m', () => {
     const c = validateProject(mutate((p) => { p.opening = { type: 'cantilever', span_m: 2 }; }, minimal));
-    expect(c.ok && c.project.opening).toStrictEqual({ type: 'cantilever', span_m: 2, length_m: null, ends: 'clamped' });
+    expect(c.ok && c.project.opening).toStrictEqual({ type: 'cantilever', span_m: 2, length_m: null, ends: 'clamped', edges: null });
     const s = validateProject(mutate((p) => { p.opening = { type: 'slab', span_m: 6, length_m: 9, ends: 'simple' }; }, minimal));
-    expect(s.ok && s.project.opening).toStrictEqual({ type: 'slab', span_m: 6, length_m: 9, ends: 'simple' });
+    expect(s.ok && s.project.opening).toStrictEqual({ type: 'slab', span_m: 6, length_m: 9, ends: 'simple', edges: null });
   });
 
   it('a slab with length_m equal to span_m (square) is accepted', () => {
@@ -133,7 +136,7 @@ describe('validateProject — accepts and normalises', () => {
     expect(r.ok && r.project.opening.length_m).toBe(null);
     expect(r.warnings).toContainEqual({
       path: 'opening.length_m',
-      message: 'opening.length_m: ignored for opening type "beam" (used for a slab only)',
+      message: 'opening.length_m: ignored for opening type "beam" (used for a slab or an intersection only)',
       code: 'IGNORED',
     });
   });
@@ -159,7 +162,7 @@ describe('validateProject — accepts and normalises', () => {
     ['disturbance 0 and 1', (p: Json) => { p.layers[0].hoekBrown.disturbance = 1; }],
     ['zero tensile strength (uncemented sand / fractured mass, METHODS §10 common practice)', (p: Json) => { p.layers[0].tensile.value_MPa = 0; }],
     ['friction 0°', (p: Json) => { p.layers[0].jointing.jointFriction_deg = 0; }],
-    ['zero surcharge, support and horizontal stress', (p: Json) => { p.loads = { surcharge_kPa: 0, support_kPa: 0, horizontalStress_MPa: 0 }; }],
+    ['zero surcharge, support and horizontal stress', (p: Json) => { p.loads = { surcharge_kPa: 0, horizontalStress_MPa: 0 }; p.support = { standing_kPa: 0 }; }],
     ['fracture frequency 0 /m', (p: Json) => { p.layers[0].jointing.fractureFrequency_per_m = 0; }],
   ])('validateProject accepts the edge value: %s', (_title, fn) => {
     expect(errorsOf(mutate(fn))).toEqual([]);
@@ -184,9 +187,9 @@ describe('validateProject — messages name the path, the expectation and what w
     ]);
   });
 
-  it('opening.type: must be one of "beam", "slab", "cantilever", got "arch"', () => {
+  it('opening.type: must be one of "beam", "slab", "cantilever", "intersection", got "arch"', () => {
     expect(errorsOf(mutate((p) => { p.opening.type = 'arch'; })).map((e) => e.message)).toEqual([
-      'opening.type: must be one of "beam", "slab", "cantilever", got "arch"',
+      'opening.type: must be one of "beam", "slab", "cantilever", "intersection", got "arch"',
     ]);
   });
 
@@ -198,14 +201,14 @@ describe('validateProject — messages name the path, the expectation and what w
 
   it('collects every error, not just the first', () => {
     const raw = mutate((p) => {
-      p.schema = 'lamina/2';
+      p.schema = 'lamina/3';
       p.opening.span_m = 0;
       p.layers[0].thickness_m = -1;
       p.layers[0].poisson = 0.5;
       p.design.fsTarget.tension = 0;
     });
     expect(errorsOf(raw).map((e) => e.message)).toEqual([
-      'schema: must be "lamina/1", got "lamina/2"',
+      'schema: must be "lamina/2" (or "lamina/1", migrated on load), got "lamina/3"',
       'opening.span_m: must be a number from 0.01 to 1000 m, got 0',
       'layers[0].thickness_m: must be a number from 0.001 to 1000 m, got -1',
       'layers[0].poisson: must be ≥ 0 and < 0.5, got 0.5',
@@ -257,14 +260,14 @@ describe('validateProject — messages name the path, the expectation and what w
 
 const refusals: Array<[string, (p: Json) => void, string, string]> = [
   // [what, mutation, path, exact message]
-  ['schema missing', (p) => { delete p.schema; }, 'schema', 'schema: required, must be "lamina/1"'],
-  ['schema wrong', (p) => { p.schema = 'lamina/2'; }, 'schema', 'schema: must be "lamina/1", got "lamina/2"'],
+  ['schema missing', (p) => { delete p.schema; }, 'schema', 'schema: required, must be "lamina/2" (or "lamina/1", migrated on load)'],
+  ['schema wrong', (p) => { p.schema = 'lamina/3'; }, 'schema', 'schema: must be "lamina/2" (or "lamina/1", migrated on load), got "lamina/3"'],
   ['title not a string', (p) => { p.title = 5; }, 'title', 'title: must be a string, got 5'],
   ['description not a string', (p) => { p.description = ['a']; }, 'description', 'description: must be a string, got an array'],
   ['opening missing', (p) => { delete p.opening; }, 'opening', 'opening: required, must be an object with type, span_m and ends'],
   ['opening not an object', (p) => { p.opening = 'beam'; }, 'opening', 'opening: must be an object, got "beam"'],
-  ['opening.type missing', (p) => { delete p.opening.type; }, 'opening.type', 'opening.type: required, must be one of "beam", "slab", "cantilever"'],
-  ['opening.type wrong case', (p) => { p.opening.type = 'Beam'; }, 'opening.type', 'opening.type: must be one of "beam", "slab", "cantilever", got "Beam"'],
+  ['opening.type missing', (p) => { delete p.opening.type; }, 'opening.type', 'opening.type: required, must be one of "beam", "slab", "cantilever", "intersection"'],
+  ['opening.type wrong case', (p) => { p.opening.type = 'Beam'; }, 'opening.type', 'opening.type: must be one of "beam", "slab", "cantilever", "intersection", got "Beam"'],
   ['span missing', (p) => { delete p.opening.span_m; }, 'opening.span_m', 'opening.span_m: required, must be a number from 0.01 to 1000 m'],
   ['span 0', (p) => { p.opening.span_m = 0; }, 'opening.span_m', 'opening.span_m: must be a number from 0.01 to 1000 m, got 0'],
   ['span negative', (p) => { p.opening.span_m = -3; }, 'opening.span_m', 'opening.span_m: must be a number from 0.01 to 1000 m, got -3'],
@@ -280,7 +283,7 @@ const refusals: Array<[string, (p: Json) => void, string, string]> = [
   ['length_m not a number on a beam', (p) => { p.opening.length_m = 'long'; }, 'opening.length_m', 'opening.length_m: must be a number from 0.01 to 100000 m or null, got "long"'],
   ['loads not an object', (p) => { p.loads = 0; }, 'loads', 'loads: must be an object, got 0'],
   ['surcharge negative', (p) => { p.loads.surcharge_kPa = -10; }, 'loads.surcharge_kPa', 'loads.surcharge_kPa: must be a number from 0 to 100000 kPa, got -10'],
-  ['support negative', (p) => { p.loads.support_kPa = -1; }, 'loads.support_kPa', 'loads.support_kPa: must be a number from 0 to 100000 kPa, got -1'],
+  ['support negative', (p) => { p.support.standing_kPa = -1; }, 'support.standing_kPa', 'support.standing_kPa: must be a number from 0 to 100000 kPa, got -1'],
   ['horizontal stress a string', (p) => { p.loads.horizontalStress_MPa = '3 MPa'; }, 'loads.horizontalStress_MPa', 'loads.horizontalStress_MPa: must be a number from -1000 to 1000 MPa, got "3 MPa"'],
   ['horizontal stress -Infinity', (p) => { p.loads.horizontalStress_MPa = -Infinity; }, 'loads.horizontalStress_MPa', 'loads.horizontalStress_MPa: must be a number from -1000 to 1000 MPa, got -Infinity'],
   ['layers missing', (p) => { delete p.layers; }, 'layers', 'layers: required, must be an array'],
@@ -338,7 +341,7 @@ const refusals: Array<[string, (p: Json) => void, string, string]> = [
   ['fsTarget.crushing negative', (p) => { p.design.fsTarget.crushing = -2; }, 'design.fsTarget.crushing', 'design.fsTarget.crushing: must be a number from 0.1 to 100, got -2'],
   ['fsTarget.sliding a string', (p) => { p.design.fsTarget.sliding = '1.5'; }, 'design.fsTarget.sliding', 'design.fsTarget.sliding: must be a number from 0.1 to 100, got "1.5"'],
   ['deflectionLimitRatio 0', (p) => { p.design.deflectionLimitRatio = 0; }, 'design.deflectionLimitRatio', 'design.deflectionLimitRatio: must be a number from 0.001 to 1, got 0'],
-  ['characteristic unknown', (p) => { p.design.characteristic = 'lower10'; }, 'design.characteristic', 'design.characteristic: must be one of "mean", "lower5", got "lower10"'],
+  ['characteristic unknown', (p) => { p.design.characteristic = 'lower10'; }, 'design.characteristic', 'design.characteristic: must be one of "mean", "lower5", "cautiousMean", "lower5Log", got "lower10"'],
   ['basis unknown', (p) => { p.design.basis = 'cracked'; }, 'design.basis', 'design.basis: must be one of "intact", "jointed", got "cracked"'],
   ['planeStrainModulus not a boolean', (p) => { p.design.planeStrainModulus = 1; }, 'design.planeStrainModulus', 'design.planeStrainModulus: must be true or false, got 1'],
 ];
@@ -401,7 +404,7 @@ describe('validateProject — forbidden keys __proto__, constructor, prototype',
   });
 
   it('reads own properties only: fields inherited through a prototype are not seen', () => {
-    const inherited = Object.create({ schema: 'lamina/1', opening: { type: 'beam', span_m: 6, ends: 'clamped' } });
+    const inherited = Object.create({ schema: 'lamina/2', opening: { type: 'beam', span_m: 6, ends: 'clamped' } });
     inherited.layers = complete().layers;
     expect(errorsOf(inherited).map((e) => e.path)).toEqual(['schema', 'opening']);
   });
@@ -442,7 +445,7 @@ describe('validateProject — warnings (accepted, flagged)', () => {
     ['tensile value > ucs/3', (p) => { p.layers[0].tensile.value_MPa = 14; }, 'layers[0].tensile.value_MPa'],
     ['tensile value > 50 MPa', (p) => { p.layers[0].ucs_MPa = 300; p.layers[0].tensile.value_MPa = 60; }, 'layers[0].tensile.value_MPa'],
     ['surcharge > 5000 kPa', (p) => { p.loads.surcharge_kPa = 6000; }, 'loads.surcharge_kPa'],
-    ['support > 500 kPa', (p) => { p.loads.support_kPa = 600; }, 'loads.support_kPa'],
+    ['support > 500 kPa', (p) => { p.support.standing_kPa = 600; }, 'support.standing_kPa'],
     ['horizontal stress > 100 MPa', (p) => { p.loads.horizontalStress_MPa = 120; }, 'loads.horizontalStress_MPa'],
     ['horizontal stress tensile (< 0)', (p) => { p.loads.horizontalStress_MPa = -1; }, 'loads.horizontalStress_MPa'],
     ['mi > 40', (p) => { p.layers[0].hoekBrown.mi = 55; }, 'layers[0].hoekBrown.mi'],
@@ -482,7 +485,8 @@ describe('validateProject — warnings (accepted, flagged)', () => {
       p.layers[0].thickness_m = 20;
       p.layers[0].ucs_MPa = 400;
       p.layers[0].tensile.value_MPa = 50;
-      p.loads = { surcharge_kPa: 5000, support_kPa: 500, horizontalStress_MPa: 100 };
+      p.loads = { surcharge_kPa: 5000, horizontalStress_MPa: 100 };
+      p.support = { standing_kPa: 500 };
     });
     expect(warningsOf(raw)).toEqual([]);
   });

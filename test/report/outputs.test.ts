@@ -6,7 +6,7 @@ import { buildReportDocument } from '../../src/report/report-document';
 import { renderMarkdown } from '../../src/report/render-markdown';
 import { escapeHtml, renderHtml, renderHtmlBody, REPORT_CSS } from '../../src/report/render-html';
 import { resultsCsv, spanCurveCsv } from '../../src/report/results-csv';
-import { MODES, MODE_LABEL } from '../../src/report/check-rows';
+import { MODES, MODE_LABEL } from '../../src/analysis/check-labels';
 import { expectClose } from '../helpers/expect-close';
 import { HOSTILE, allCases, hostileCase, presetCase, type Case } from './fixtures';
 
@@ -38,7 +38,7 @@ describe('every output', () => {
         }
       }
     }
-  });
+  }, 60_000);
   it('the Markdown and the HTML carry the caution at the top and again at the end', () => {
     for (const c of allCases()) {
       const { md, html } = outputs(c, 'SI');
@@ -141,7 +141,10 @@ describe('resultsCsv', () => {
         const crushing = get('crushing');
         const v = layer.voussoir;
         expect(crushing?.fs === '' ? null : Number(crushing?.fs)).toBe(v ? v.fsCrushing : null);
-        expect(crushing?.demand_MPa === '' ? null : Number(crushing?.demand_MPa)).toBe(v ? v.maxCompression_MPa : null);
+        // demand fc + σh (METHODS §3a)
+        const sh = Math.max(0, c.project.loads.horizontalStress_MPa);
+        if (v && v.maxCompression_MPa !== null) expectClose(Number(crushing?.demand_MPa), v.maxCompression_MPa + sh, 1e-12);
+        else expect(crushing?.demand_MPa).toBe('');
         expect(get('sliding')?.fs === '' ? null : Number(get('sliding')?.fs)).toBe(v ? v.fsSliding : null);
         expect(get('deflection')?.demand_ratio === '' ? null : Number(get('deflection')?.demand_ratio)).toBe(v ? v.deflectionRatio : null);
       });
@@ -163,7 +166,11 @@ describe('resultsCsv', () => {
   it('quotes user text so that a name with commas, quotes and newlines parses back unchanged', () => {
     const c = hostileCase();
     const name = 'Shale, "grey"\nlaminated';
-    const report = { ...c.analysis.report, layers: c.analysis.report.layers.map((l, i) => (i === 0 ? { ...l, name } : l)) };
+    const report = {
+      ...c.analysis.report,
+      layers: c.analysis.report.layers.map((l, i) => (i === 0 ? { ...l, name } : l)),
+      checks: c.analysis.report.checks.map((r) => (r.layerIndex === 0 ? { ...r, layer: name } : r)),
+    };
     const rows = csvParse(resultsCsv({ ...c.analysis, report }, 'SI', c.project));
     expect(rows[0]?.layer_name).toBe(name);
   });

@@ -121,7 +121,10 @@ describe('buildReportDocument — checks', () => {
         expect(cellValue(t, /^tension/, 2).value).toBe(layer.strength.design_MPa);
         expect(cellValue(t, /^tension/, 3).value).toBe(layer.elastic.fsTension);
         const v = layer.voussoir;
-        expect(cellValue(t, /^crushing/, 1).value).toBe(v ? v.maxCompression_MPa : null);
+        const sh = Math.max(0, c.project.loads.horizontalStress_MPa);
+        const demand = cellValue(t, /^crushing/, 1).value;
+        if (v && v.maxCompression_MPa !== null) expectClose(demand as number, v.maxCompression_MPa + sh, 1e-12); // fc + σh (METHODS §3a)
+        else expect(demand).toBe(null);
         expect(cellValue(t, /^crushing/, 3).value).toBe(v ? v.fsCrushing : null);
         expect(cellValue(t, /^abutment sliding/, 3).value).toBe(v ? v.fsSliding : null);
         expect(cellValue(t, /^midspan deflection/, 1).value).toBe(v ? v.deflectionRatio : null);
@@ -173,7 +176,7 @@ describe('buildReportDocument — checks', () => {
     const tension = tables(doc, /^Checks of layer/).map((t) => cellValue(t, /^tension/, 5));
     expect(tension.every((cell) => cell.text === 'info ○' || cell.text === 'n/a –')).toBe(true);
     const text = section(doc, 'verdict').blocks.map((b) => (b.kind === 'paragraph' ? b.text : '')).join('\n');
-    expect(text).toMatch(/Design basis “jointed”.*arch checks decide/);
+    expect(text).toMatch(/Design basis “jointed”.*voussoir checks decide/);
   });
   it('the largest-span table shows report.maxSpan_m per mode in the display unit (1 ft = 0.3048 m, METHODS §13)', () => {
     const c = presetCase('coal-room-shale');

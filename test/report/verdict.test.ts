@@ -13,11 +13,11 @@ describe('verdict sentences', () => {
     for (const c of allCases()) {
       const text = verdict(c);
       expect(text).toMatch(/^Governing check: /);
-      expect(text).toMatch(/As an intact beam/);
+      expect(text).toMatch(/As an intact (beam|overhang)/);
       expect(text).toMatch(/As a cracked/);
-      expect(text).toMatch(/Design basis/);
+      expect(text).toMatch(/Design basis|An overhang has no cracked-beam reserve/);
       expect(text).toMatch(/Result: /);
-      expect(text).toMatch(/Largest (span|overhang)/);
+      expect(text).toMatch(/Largest (span|overhang|entry width)/);
     }
   });
   it('the overhang (quarry bench) says a cantilever has no cracked-beam reserve and speaks of the overhang', () => {

@@ -8,7 +8,8 @@ import type { DesignChart } from '../../analysis/types';
 import type { Mode } from '../../model/types';
 import type { UnitSystem } from '../../model/units';
 import { gridMapping, labelPoint } from './contour-grid';
-import { MODE_NAME, MODE_STYLE } from './fs-span';
+import { MODE_STYLE } from './fs-span';
+import { MODE_SHORT as MODE_NAME } from '../../analysis/check-labels';
 import { ID, INK, axis, axisLabel, displayUnit, emptyNote, escapeXml, formatValue, marker, num, svgDocument, text } from './svg';
 
 export interface DesignChartOptions {

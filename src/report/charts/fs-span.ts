@@ -8,11 +8,13 @@ import { line as d3line, max, min, scaleLinear, scaleLog } from 'd3';
 import type { SpanCurve } from '../../analysis/types';
 import type { MaxSpanReport, Mode } from '../../model/types';
 import type { UnitSystem } from '../../model/units';
+import { MODE_SHORT as MODE_NAME } from '../../analysis/check-labels';
 import { ID, INK, PALETTE, axis, axisLabel, displayUnit, emptyNote, escapeXml, formatValue, legend, line, marker, num, svgDocument, text, type SeriesStyle } from './svg';
 
 export interface FsSpanOptions {
   units: UnitSystem;
-  basis?: 'intact' | 'jointed';
+  /** What the x axis measures: "span" (default), "overhang" or "entry width". */
+  spanWord?: string;
   width?: number;
   height?: number;
   title?: string;
@@ -27,14 +29,6 @@ export const MODE_STYLE: Record<Mode, SeriesStyle> = {
   snapThrough: { color: PALETTE.orange, dash: '4 2', marker: 'cross' },
 };
 
-/** Plain names of the modes for labels. */
-export const MODE_NAME: Record<Mode, string> = {
-  tension: 'tension',
-  crushing: 'crushing',
-  sliding: 'sliding',
-  deflection: 'deflection',
-  snapThrough: 'snap-through',
-};
 
 const LINE_MODES: Mode[] = ['tension', 'crushing', 'sliding', 'deflection'];
 const MARKER_MODES: Mode[] = ['tension', 'crushing', 'sliding', 'snapThrough', 'deflection'];
@@ -51,8 +45,10 @@ export function fsSpanSvg(curve: SpanCurve, maxSpan: MaxSpanReport | null, optio
   const width = options.width ?? 680;
   const height = options.height ?? 420;
   const len = displayUnit('length', options.units);
-  const basis = options.basis ?? 'intact';
-  const title = options.title ?? 'Factor of safety against span';
+  const word = options.spanWord ?? 'span';
+  const title = options.title ?? `Factor of safety against ${word}`;
+  // Whether each mode counts comes from the analysis' check table (curve.counts), never from the basis here.
+  const notCounted = (m: Mode): boolean => curve.counts !== undefined && !curve.counts[m];
   const spans = curve.spans_m;
   if (spans.length < 2) {
     return svgDocument({ width, height, title, desc: 'No span curve.', body: emptyNote(width, height, 'No span curve to draw'), className: 'lamina-chart fs-span' });
@@ -102,7 +98,7 @@ export function fsSpanSvg(curve: SpanCurve, maxSpan: MaxSpanReport | null, optio
     i = j;
   }
 
-  parts.push(axis({ scale: x, orient: 'bottom', at: bottom, label: axisLabel('Span', len.unit), ticks: 8, gridTo: top }));
+  parts.push(axis({ scale: x, orient: 'bottom', at: bottom, label: axisLabel(word.charAt(0).toUpperCase() + word.slice(1), len.unit), ticks: 8, gridTo: top }));
   parts.push(axis({ scale: y, orient: 'left', at: left, label: 'FS / target (log scale)', tickValues: decades, gridTo: right }));
 
   // The targets: every mode's target is the line FS/target = 1.
@@ -114,7 +110,7 @@ export function fsSpanSvg(curve: SpanCurve, maxSpan: MaxSpanReport | null, optio
   for (const m of LINE_MODES) {
     const pts = spans.map((_, i) => ratio(m, i));
     if (!pts.some((p) => p !== null)) continue;
-    const excluded = m === 'tension' && basis === 'jointed';
+    const excluded = notCounted(m);
     const st = MODE_STYLE[m];
     const d =
       d3line<number | null>()
@@ -160,11 +156,11 @@ export function fsSpanSvg(curve: SpanCurve, maxSpan: MaxSpanReport | null, optio
   if (Number.isFinite(curve.currentSpan_m)) {
     const xc = x(Math.min(len.convert(curve.currentSpan_m), xMax));
     parts.push(line(xc, top, xc, bottom, INK.axis, 1.5, null, 'class="current-span"'));
-    parts.push(text(xc + 3, top + 28, `current span ${formatValue(len.convert(curve.currentSpan_m))} ${len.unit}`, { size: 9, weight: 'bold' }));
+    parts.push(text(xc + 3, top + 28, `current ${word} ${formatValue(len.convert(curve.currentSpan_m))} ${len.unit}`, { size: 9, weight: 'bold' }));
   }
 
   const items = LINE_MODES.filter((m) => curve.fs[m]?.some((v) => v !== null)).map((m) => ({
-    label: `${MODE_NAME[m]}${m === 'tension' && basis === 'jointed' ? ' (not governing: jointed basis)' : m === 'deflection' ? ' (limit / (δ/t))' : ` (target ${formatValue(t[m])})`}`,
+    label: `${MODE_NAME[m]}${notCounted(m) ? ' (not counted)' : m === 'deflection' ? ' (limit / (δ/t))' : ` (target ${formatValue(t[m])})`}`,
     style: MODE_STYLE[m],
   }));
   parts.push(legend(items, right + 14, top + 8, 150, 1));
@@ -173,7 +169,7 @@ export function fsSpanSvg(curve: SpanCurve, maxSpan: MaxSpanReport | null, optio
       text(right + 42, top + 8 + items.length * 16 + 3.5, 'snap-through: snaps', { size: 10 }),
   );
   parts.push(text(right + 14, top + 8 + (items.length + 1) * 16 + 4, 'dashed verticals: largest', { size: 9, fill: INK.muted }));
-  parts.push(text(right + 14, top + 8 + (items.length + 1) * 16 + 16, 'span meeting the target', { size: 9, fill: INK.muted }));
+  parts.push(text(right + 14, top + 8 + (items.length + 1) * 16 + 16, `${word} meeting the target`, { size: 9, fill: INK.muted }));
 
   const defs =
     `<pattern id="${ID}snaps" patternUnits="userSpaceOnUse" width="8" height="8" patternTransform="rotate(45)">` +
@@ -184,8 +180,9 @@ export function fsSpanSvg(curve: SpanCurve, maxSpan: MaxSpanReport | null, optio
         .join(', ')
     : '';
   const desc =
-    `FS divided by its target against span from ${formatValue(X[0])} to ${formatValue(xMax)} ${len.unit}, log scale; ` +
-    `current span ${formatValue(len.convert(curve.currentSpan_m))} ${len.unit}.` +
+    `FS divided by its target against ${word} from ${formatValue(X[0])} to ${formatValue(xMax)} ${len.unit}, log scale; ` +
+    `current ${word} ${formatValue(len.convert(curve.currentSpan_m))} ${len.unit}.` +
+    (LINE_MODES.some(notCounted) ? ` Not counted at the current ${word}: ${LINE_MODES.filter(notCounted).map((m) => MODE_NAME[m]).join(', ')}.` : '') +
     (spanList ? ` Largest spans: ${spanList}.` : '') +
     (maxSpan && maxSpan.governing !== null ? ` Governing ${formatValue(len.convert(maxSpan.governing))} ${len.unit}.` : '');
   return svgDocument({ width, height, title, desc, defs, body: parts.join(''), className: 'lamina-chart fs-span' });

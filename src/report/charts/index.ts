@@ -4,7 +4,7 @@ export { strengthStripSvg, type StrengthStripOptions } from './strength-strip';
 export { strengthChainSvg, type StrengthChainOptions } from './strength-chain';
 export { beamProfileSvg, type BeamProfileOptions } from './beam-profile';
 export { voussoirArchSvg, type VoussoirArchInput, type VoussoirArchOptions } from './voussoir-arch';
-export { fsSpanSvg, MODE_NAME, MODE_STYLE, type FsSpanOptions } from './fs-span';
+export { fsSpanSvg, MODE_STYLE, type FsSpanOptions } from './fs-span';
 export { slabContourSvg, type SlabContourOptions } from './slab-contour';
 export { designChartSvg, type DesignChartOptions } from './design-chart';
 export { escapeXml, PALETTE } from './svg';

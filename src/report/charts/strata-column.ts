@@ -121,7 +121,7 @@ export function strataColumnSvg(project: Project, analysis: Analysis | null, opt
   }
   const notes: string[] = [];
   if (project.loads.horizontalStress_MPa > 0) notes.push(`horizontal stress ${formatValue(stress.convert(project.loads.horizontalStress_MPa))} ${stress.unit}`);
-  if (project.loads.support_kPa > 0) notes.push(`support ${formatValue(press.convert(project.loads.support_kPa))} ${press.unit}`);
+  if (project.support.standing_kPa > 0) notes.push(`standing support ${formatValue(press.convert(project.support.standing_kPa))} ${press.unit}`);
   if (notes.length) parts.push(text(12, 36, `Loads: ${notes.join('; ')}`, { size: 10 }));
 
   // Bending groups.

@@ -21,9 +21,7 @@ function chart(title: string, draw: () => string | null, caption?: string): Bloc
 
 /** The layer the charts focus on: the governing one, else the immediate roof. */
 export function focusLayer(ctx: SectionContext): number {
-  const g = ctx.analysis.report.governing;
-  const i = g ? ctx.analysis.report.layers.findIndex((l) => l.name === g.layer) : -1;
-  return i >= 0 ? i : 0;
+  return ctx.analysis.report.governing?.layerIndex ?? 0;
 }
 
 export function chartsSection(ctx: SectionContext): Section {
@@ -40,7 +38,7 @@ export function chartsSection(ctx: SectionContext): Section {
     }
   });
   if (curve) {
-    blocks.push(chart('Factor of safety versus span', () => fsSpanSvg(curve, analysis.report.maxSpan_m, { units, basis: project.design.basis })));
+    blocks.push(chart('Factor of safety versus span', () => fsSpanSvg(curve, analysis.report.maxSpan_m, { units, spanWord: ctx.verdict.spanWord })));
   }
   if (layer) {
     blocks.push(chart(`Beam profile, layer ${focus + 1}: ${layer.name}`, () =>

@@ -1,34 +1,39 @@
 /** Section 5: checks per layer and mode, the layer results behind them and the largest spans. */
-import type { Mode } from '../../model/types';
+import type { CheckRow, Mode } from '../../model/types';
+import { MODE_LABEL, STATUS_LEGEND, STATUS_TEXT } from '../../analysis/check-labels';
 import type { Block, Cell, Section } from '../document-types';
-import { MODE_LABEL, type CheckRow } from '../check-rows';
 import { fsText, quantityText, titleWithUnit } from '../format';
 import { MISSING, numberText } from '../number-text';
-import { STATUS_LEGEND } from '../status';
 import { nCell, qCell, textCell } from './cells';
 import type { SectionContext } from './context';
-import { governingSentence } from './verdict';
 
 function amount(row: CheckRow, value: number | null, ctx: SectionContext): Cell {
-  if (value === null || row.kind === 'none') return { text: MISSING, value: null, numeric: true };
-  if (row.kind === 'ratio') return { text: `δ/t = ${numberText(value, 3)}`, value, numeric: true };
+  if (value === null || row.unit === null) return { text: MISSING, value: null, numeric: true };
+  if (row.unit === 'ratio') return { text: `δ/t = ${numberText(value, 3)}`, value, numeric: true };
   return { text: quantityText(value, 'stress', ctx.units), value, numeric: true };
 }
 
+/** True for the row named in `report.governing` (by layer index and mode). */
+export function isGoverning(row: CheckRow, ctx: SectionContext): boolean {
+  const g = ctx.analysis.report.governing;
+  return g !== null && g.layerIndex === row.layerIndex && g.mode === row.mode;
+}
+
 export function checkRowCells(row: CheckRow, ctx: SectionContext): Cell[] {
+  const label = MODE_LABEL[row.mode];
   return [
-    textCell(row.governing ? `${row.label} (governing)` : row.label),
+    textCell(isGoverning(row, ctx) ? `${label} (governing)` : label),
     amount(row, row.demand, ctx),
     amount(row, row.capacity, ctx),
     { text: row.mode === 'snapThrough' && row.fs !== null ? (row.fs > 0 ? 'stands (1)' : 'snaps (0)') : fsText(row.fs), value: row.fs, numeric: true },
     { text: numberText(row.target, 3), value: row.target, numeric: true },
-    { text: row.status.text, status: row.status.kind },
-    textCell(row.note),
+    { text: STATUS_TEXT[row.status], status: row.status },
+    textCell(row.reason ? `not counted: ${row.reason} — ${row.note}` : row.note),
   ];
 }
 
 const SPAN_NOTE: Record<Mode | 'governing', string> = {
-  tension: 'layers not cross-jointed at the current span; strengths held at current-span values',
+  tension: 'layers in which tension counts; strengths held at current-span values; a jointed layer stops at its joint spacing',
   crushing: 'arch thrust reaches UCS / target',
   sliding: 'FS sliding rises with span, so sliding never limits the span from above',
   snapThrough: 'largest span at which an arch still forms',
@@ -40,7 +45,7 @@ export function checksSection(ctx: SectionContext): Section {
   const { analysis, units, project } = ctx;
   const report = analysis.report;
   const blocks: Block[] = [];
-  blocks.push({ kind: 'paragraph', strong: true, text: governingSentence(ctx) });
+  blocks.push({ kind: 'paragraph', strong: true, text: ctx.verdict.sentences[0].text });
   blocks.push({ kind: 'list', items: STATUS_LEGEND.map((s) => `${s.text}: ${s.meaning}`) });
 
   report.layers.forEach((layer, i) => {
@@ -126,12 +131,12 @@ export function checksSection(ctx: SectionContext): Section {
     const modes: Array<Mode | 'governing'> = ['tension', 'crushing', 'sliding', 'snapThrough', 'deflection', 'governing'];
     blocks.push({
       kind: 'table',
-      caption: `Largest span meeting the target (searched up to 100 m; current span ${quantityText(project.opening.span_m, 'length', units)})`,
+      caption: `Largest ${ctx.verdict.spanWord} meeting the target (searched up to 100 m; current ${ctx.verdict.spanWord} ${quantityText(project.opening.span_m, 'length', units)}${project.opening.type === 'intersection' ? `, w2/w1 held, design span the diagonal ${quantityText(report.opening.designSpan_m, 'length', units)}` : ''})`,
       columns: [{ title: 'Mode' }, { title: titleWithUnit('Largest span', 'length', units), numeric: true }, { title: 'Note' }],
       rows: modes.map((m): Cell[] => {
         const value = spans[m];
         const label = m === 'governing' ? 'governing (all counted modes)' : MODE_LABEL[m];
-        const note = value === null ? (m === 'sliding' ? SPAN_NOTE.sliding : 'the mode does not apply') : value >= 100 ? 'target holds up to the 100 m search cap' : SPAN_NOTE[m];
+        const note = value === null ? (m === 'sliding' ? SPAN_NOTE.sliding : 'the mode counts in no layer at the current span') : value >= 100 ? 'target holds up to the 100 m search cap' : SPAN_NOTE[m];
         return [textCell(label), qCell(value, 'length', units), textCell(note)];
       }),
     });

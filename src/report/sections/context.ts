@@ -1,15 +1,17 @@
-/** What every section builder receives: the inputs, the shared check rows and the unit system. */
+/** What every section builder receives: the inputs, the check table, the verdict and the unit system. */
 import type { Analysis, SpanCurve } from '../../analysis/types';
-import type { Project } from '../../model/types';
+import type { Verdict } from '../../analysis/verdict';
+import type { CheckRow, Project } from '../../model/types';
 import type { UnitSystem } from '../../model/units';
-import type { CheckRow } from '../check-rows';
 
 export interface SectionContext {
   project: Project;
   analysis: Analysis;
   curve: SpanCurve | null;
   units: UnitSystem;
+  /** The analysis' check table (report.checks). */
   rows: CheckRow[];
+  verdict: Verdict;
 }
 
 /** "layer 2 “Sandstone”" — how the report names a layer in a sentence. */

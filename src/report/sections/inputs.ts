@@ -9,6 +9,14 @@ const OPENING_TEXT = {
   beam: 'long opening (plane-strain beam)',
   slab: 'rectangular roof slab (plate)',
   cantilever: 'overhang (cantilever)',
+  intersection: 'intersection (beam on the diagonal of the entry widths)',
+} as const;
+
+const RULE_TEXT = {
+  mean: 'mean of the specimens',
+  lower5: 'lower 5 % fractile m(1 − kn·V) (EN 1990 Annex D)',
+  cautiousMean: 'cautious mean m(1 − t·V/√n) (EN 1997-1 §2.4.5.2)',
+  lower5Log: 'lognormal 5 % fractile exp(m_y − kn·s_y) (EN 1990 Annex D, D7.3)',
 } as const;
 
 export function inputsSection(ctx: SectionContext): Section {
@@ -21,11 +29,18 @@ export function inputsSection(ctx: SectionContext): Section {
     kind: 'keyValue',
     items: [
       { key: 'Opening', value: OPENING_TEXT[o.type] },
-      { key: o.type === 'cantilever' ? 'Overhang length' : o.type === 'slab' ? 'Span (short side)' : 'Span', value: inputQuantityText(o.span_m, 'length', units) },
+      { key: o.type === 'cantilever' ? 'Overhang length' : o.type === 'slab' ? 'Span (short side)' : o.type === 'intersection' ? 'Entry width w1' : 'Span', value: inputQuantityText(o.span_m, 'length', units) },
       ...(o.type === 'slab' ? [{ key: 'Length (long side)', value: inputQuantityText(o.length_m, 'length', units) }] : []),
+      ...(o.type === 'intersection'
+        ? [
+            { key: 'Entry width w2', value: inputQuantityText(o.length_m, 'length', units) },
+            { key: 'Design span (diagonal √(w1² + w2²))', value: quantityText(analysis.report.opening.designSpan_m, 'length', units) },
+          ]
+        : []),
       { key: 'Ends', value: o.type === 'cantilever' ? 'fixed root, free tip' : o.ends === 'clamped' ? 'clamped (built-in)' : 'simply supported' },
+      ...(o.type === 'slab' && o.edges ? [{ key: 'Slab edges', value: `short edges ${o.edges.short}, long edges ${o.edges.long}` }] : []),
       { key: 'Surcharge on top of the analysed strata', value: inputQuantityText(project.loads.surcharge_kPa, 'pressure', units) },
-      { key: 'Support pressure (upward)', value: inputQuantityText(project.loads.support_kPa, 'pressure', units) },
+      { key: 'Standing support (upward, capped at the load it relieves)', value: inputQuantityText(project.support.standing_kPa, 'pressure', units) },
       { key: 'Horizontal stress along the span (compression +)', value: inputQuantityText(project.loads.horizontalStress_MPa, 'stress', units) },
     ],
   });
@@ -108,7 +123,7 @@ export function inputsSection(ctx: SectionContext): Section {
         ]),
       });
     }
-    const rule = lab.rule === 'mean' ? 'mean' : `lower 5 % fractile m(1 − kn·V)${lab.kn !== null ? `, kn = ${numberText(lab.kn)}` : ''}`;
+    const rule = lab.rule === 'mean' || lab.kn === null ? RULE_TEXT.mean : `${RULE_TEXT[lab.rule]}, ${lab.rule === 'cautiousMean' ? 't/√n' : 'kn'} = ${numberText(lab.kn, 3)}`;
     blocks.push({
       kind: 'keyValue',
       items: [
@@ -131,8 +146,10 @@ export function inputsSection(ctx: SectionContext): Section {
       { key: 'FS target, crushing', value: numberText(d.fsTarget.crushing, PRECISION.storedInput) },
       { key: 'FS target, sliding', value: numberText(d.fsTarget.sliding, PRECISION.storedInput) },
       { key: 'Deflection limit δ/t', value: numberText(d.deflectionLimitRatio, PRECISION.storedInput) },
-      { key: 'Characteristic value', value: d.characteristic === 'mean' ? 'mean of the specimens' : 'lower 5 % fractile (EN 1990 Annex D)' },
-      { key: 'Design basis', value: d.basis === 'intact' ? 'intact: the beam must not crack' : 'jointed: the roof is taken as cracked' },
+      { key: 'Characteristic value', value: RULE_TEXT[d.characteristic] },
+      { key: 'Tensile basis', value: d.tensileBasis === 'lab' ? 'lab: characteristic strength with the size effect' : 'rock mass: min(block, Hoek–Brown rock mass)' },
+      { key: 'Crushing strength', value: d.crushingStrength === 'lab' ? 'UCS as given (lab)' : 'rock-mass UCS σci·s^a (Hoek–Brown)' },
+      { key: 'Design basis', value: d.basis === 'intact' ? 'intact: a layer that does not crack must not crack' : 'jointed: the roof is taken as cracked' },
       { key: 'Plane-strain modulus E/(1−ν²)', value: d.planeStrainModulus ? 'used in deflection and Euler stress' : 'not used (E as given)' },
     ],
   });

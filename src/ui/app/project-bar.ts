@@ -15,6 +15,7 @@ import { LitElement, html, css, type PropertyValues } from 'lit';
 import type { Project } from '../../model/types';
 import type { UnitSystem } from '../../model/units';
 import { readProjectText, writeProjectText } from '../../model/project-file';
+import { MIGRATED_CODE } from '../../model/validate';
 import { ProjectError } from '../../model/validate';
 import { PRESETS, presetData } from '../state/presets';
 import { newProject } from '../../model/new-project';
@@ -153,8 +154,11 @@ export class ProjectBar extends LitElement {
       return;
     }
     try {
-      const { project } = readProjectText(text);
+      const { project, warnings } = readProjectText(text);
       fireReplace(this, project, `File ${file.name}`);
+      // A lamina/1 file was migrated on reading: say once what that means.
+      const migrated = warnings.find((w) => w.code === MIGRATED_CODE);
+      if (migrated) fire(this, 'app-notice', { notice: migrated.message });
     } catch (err) {
       const errors = err instanceof ProjectError ? err.issues.map((i) => ({ path: i.path, message: i.message })) : [{ path: '', message: String(err) }];
       fire(this, 'project-file-errors', { source: file.name, errors });

@@ -1,15 +1,14 @@
 /**
  * `<verdict-chip>`: the verdict in one short line for the pinned bar of narrow screens — the
- * governing status (word and symbol, from the report's status module), its factor of safety
+ * governing status (word and symbol, from the check table's vocabulary in `analysis/check-labels.ts`), its factor of safety
  * against the target, and the governing mode and layer. While a field holds a refused value it
  * says "stale" in words. The full sentence stays in `<verdict-line>`.
  */
 import { LitElement, html, css, nothing } from 'lit';
 import type { Project } from '../../model/types';
 import type { Analysis } from '../../analysis/types';
-import { targetFor } from '../../analysis/checks';
-import { checkStatus } from '../../report/status';
-import { MODE_NAME } from '../../report/check-rows';
+import { MODE_NAME, STATUS_TEXT } from '../../analysis/check-labels';
+import { buildVerdict } from '../../analysis/verdict';
 import { numberText } from '../../model/number-format';
 import { tokens } from '../styles/tokens';
 import { sheet } from '../styles/sheet';
@@ -68,12 +67,13 @@ export class VerdictChip extends LitElement {
     if (!a || !this.project) return html`<p>${staleMark}<span class="verdict">Analysing…</span></p>`;
     const g = a.report.governing;
     if (!g) return html`<p>${staleMark}<span class="verdict">No check applies.</span></p>`;
-    const target = targetFor(g.mode, this.project.design);
-    const status = checkStatus(g.fs, target);
+    const target = g.target;
+    const kind = buildVerdict(this.project, a.report).status ?? 'na';
+    const status = { kind, text: STATUS_TEXT[kind] };
     const fs = g.mode === 'snapThrough' ? 'snaps through' : `FS ${numberText(g.fs)} / target ${numberText(target)}`;
     return html`<p>
       ${staleMark}<span class="verdict"
-        ><span class="status ${status.kind}">${status.text}</span> ${fs} · ${MODE_NAME[g.mode]}, ${g.layer}${this.pending ? ' (updating…)' : ''}</span
+        ><span class="status ${status.kind}">${status.text}</span> ${fs} · ${MODE_NAME[g.mode]}, layer ${g.layerIndex + 1} ${g.layer}${this.pending ? ' (updating…)' : ''}</span
       >
     </p>`;
   }

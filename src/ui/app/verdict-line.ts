@@ -1,7 +1,8 @@
 /**
- * `<verdict-line>`: the one-line answer at the top of the worksheet — governing layer and
- * mode, its factor of safety against the target, the status (word + symbol, from the report's
- * status module), and the largest span meeting every target.
+ * `<verdict-line>`: the answer at the top of the worksheet — governing layer and mode, its
+ * factor of safety against the target, the status (word + symbol), the intact-beam and
+ * cracked-voussoir sentences and the largest span (overhang, entry width) meeting every
+ * counted target: all from the analysis' verdict (`analysis/verdict.ts`).
  *
  * @fires show-trace - the governing factor of safety was clicked
  */
@@ -10,21 +11,12 @@ import type { Mode, Project } from '../../model/types';
 import type { UnitSystem } from '../../model/units';
 import { formatQuantity } from '../../model/units';
 import type { Analysis } from '../../analysis/types';
-import { checkStatus } from '../../report/status';
-import { checkRows } from '../../report/check-rows';
-import { targetFor } from '../../analysis/checks';
+import { MODE_NAME, STATUS_TEXT } from '../../analysis/check-labels';
+import { buildVerdict } from '../../analysis/verdict';
 import { numberText } from '../../report/number-text';
 import { tokens } from '../styles/tokens';
 import { sheet } from '../styles/sheet';
 import { tracedValue } from '../inputs/traced-value';
-
-const MODE_TEXT: Record<Mode, string> = {
-  tension: 'tension in the intact beam',
-  crushing: 'crushing of the voussoir arch',
-  sliding: 'sliding at the abutments',
-  snapThrough: 'snap-through of the voussoir arch',
-  deflection: 'voussoir deflection (limit / (δ/t))',
-};
 
 const MODE_PATH: Record<Mode, string> = {
   tension: 'elastic.fsTension',
@@ -33,9 +25,6 @@ const MODE_PATH: Record<Mode, string> = {
   snapThrough: 'voussoir.snapThrough',
   deflection: 'voussoir.deflectionRatio',
 };
-
-/** Target on the FS scale of each mode (deflection and snap-through: 1; METHODS §10). */
-export const modeTarget = (mode: Mode, project: Project): number => targetFor(mode, project.design);
 
 export class VerdictLine extends LitElement {
   static override properties = {
@@ -95,41 +84,31 @@ export class VerdictLine extends LitElement {
     if (this.error) return html`<p class="error" role="alert">${this.error}</p>`;
     const a = this.analysis;
     if (!a || !this.project) return html`<p class="pending">Analysing…</p>`;
-    const g = a.report.governing;
     const pending = this.pending ? html` <span class="pending" role="status">(updating…)</span>` : nothing;
-    const span = a.report.maxSpan_m?.governing ?? null;
-    const spanText = html`Largest span meeting every target:
+    // Everything said here comes from the analysis' verdict and check table.
+    const v = buildVerdict(this.project, a.report, this.units);
+    const text = (id: string) => v.sentences.find((s) => s.id === id)?.text ?? '';
+    const span = v.largestSpan_m;
+    const spanText = html`Largest ${v.spanWord} meeting every counted target:
       <strong>${span === null ? 'none found' : formatQuantity(span, 'length', this.units, 3)}</strong>
       (current ${formatQuantity(this.project.opening.span_m, 'length', this.units, 3)}).`;
-    if (!g) return html`<p>No check applies to this project. ${spanText}${pending}</p>`;
-    const i = Math.max(0, a.report.layers.findIndex((l) => l.name === g.layer));
-    const target = modeTarget(g.mode, this.project);
-    const status = checkStatus(g.fs, target);
-    let below = 0;
-    let counted = 0;
-    try {
-      for (const row of checkRows(this.project, a.report)) {
-        if (row.status.kind === 'meets' || row.status.kind === 'below') counted++;
-        if (row.status.kind === 'below') below++;
-      }
-    } catch {
-      counted = 0;
-    }
+    const g = v.governing;
+    if (!g || !v.status) return html`<p>${text('governing')} ${spanText}${pending}</p>`;
     const tally =
-      counted === 0
+      v.counted === 0
         ? nothing
-        : below === 0
-          ? html` All ${counted} counted checks meet their targets.`
-          : html` <span class="tally">${below} of ${counted} counted checks below target ✗</span> (see 5 Checks).`;
-    const basis = this.project.design.basis === 'jointed' ? 'basis: jointed (taken as cracked)' : 'basis: intact (the beam must not crack)';
+        : v.below === 0
+          ? html` All ${v.counted} counted checks meet their targets.`
+          : html` <span class="tally">${v.below} of ${v.counted} counted checks below target ✗</span> (see 5 Checks).`;
     const fsPart =
       g.mode === 'snapThrough'
         ? html`no arch can form (counts as FS 0)`
-        : html`FS ${tracedValue(`layers[${i}].${MODE_PATH[g.mode]}`, numberText(g.fs, 3), g.fs)} against a target of ${numberText(target, 3)}`;
-    return html`<p data-mode=${g.mode} data-fs=${String(g.fs)} data-layer=${i}>
-      <span class="status ${status.kind}" title=${status.description}>${status.text}</span>
-      Governing: ${MODE_TEXT[g.mode]} of <strong>${g.layer}</strong>, ${fsPart}; ${basis}.${tally} ${spanText}${pending}
-    </p>`;
+        : html`FS ${tracedValue(`layers[${g.layerIndex}].${MODE_PATH[g.mode]}`, numberText(g.fs, 3), g.fs)} against a target of ${numberText(g.target, 3)}`;
+    return html`<p data-mode=${g.mode} data-fs=${String(g.fs)} data-layer=${g.layerIndex}>
+      <span class="status ${v.status}" title=${text('governing')}>${STATUS_TEXT[v.status]}</span>
+      Governing: ${MODE_NAME[g.mode]} of <strong>${g.layerIndex + 1} ${g.layer}</strong>, ${fsPart}.${tally} ${spanText}${pending}
+    </p>
+    <p class="basis">${text('intact')} ${text('cracked')}</p>`;
   }
 }
 

@@ -42,6 +42,9 @@ type Row = NumberRow | SelectRow | { kind: 'band'; label: string; note?: string 
 /** Below this host width the layers are shown as stacked cards. */
 export const CARD_WIDTH_PX = 640;
 
+/** What λ counts (METHODS §7): shown next to the field in every form. */
+export const LAMBDA_HINT = 'fractures crossing the layer, along the span (not bedding partings)';
+
 const ROWS: Row[] = [
   { kind: 'band', label: 'Geometry and stiffness' },
   { kind: 'number', label: 'Thickness', key: 'thickness_m', get: (l) => l.thickness_m, quantity: 'length' },
@@ -84,7 +87,15 @@ const ROWS: Row[] = [
   },
   { kind: 'band', label: 'Jointing', note: 'leave empty when not observed or not logged' },
   { kind: 'number', label: 'Cross-joint spacing', key: 'jointing.crossJointSpacing_m', get: (l) => l.jointing.crossJointSpacing_m, quantity: 'length', nullable: true, emptyText: 'none' },
-  { kind: 'number', label: 'Fracture frequency', key: 'jointing.fractureFrequency_per_m', get: (l) => l.jointing.fractureFrequency_per_m, unitText: 'per m', nullable: true, emptyText: '—' },
+  {
+    kind: 'number',
+    label: `Fracture frequency λ: ${LAMBDA_HINT}`,
+    key: 'jointing.fractureFrequency_per_m',
+    get: (l) => l.jointing.fractureFrequency_per_m,
+    unitText: 'per m',
+    nullable: true,
+    emptyText: '—',
+  },
   { kind: 'number', label: 'RQD', key: 'jointing.rqd', get: (l) => l.jointing.rqd, unitText: '%', nullable: true, emptyText: 'from λ' },
   { kind: 'number', label: 'Joint condition JCond89', key: 'jointing.jointCondition', get: (l) => l.jointing.jointCondition, unitText: '0–30' },
   { kind: 'number', label: 'Joint friction angle φ', key: 'jointing.jointFriction_deg', get: (l) => l.jointing.jointFriction_deg, unitText: '°' },

@@ -15,7 +15,7 @@ import type { UnitSystem } from '../../model/units';
 import type { Analysis, DesignChart } from '../../analysis/types';
 import { beamProfile, slabField } from '../../analysis';
 import { beamProfileSvg, voussoirArchSvg, slabContourSvg, designChartSvg } from '../../report/charts';
-import { MODE_NAME } from './check-rows';
+import { MODE_NAME } from '../../analysis/check-labels';
 import { displayValue } from './display-value';
 import { tracedNumber } from './traced-number';
 import { resultsStyles } from './results-styles';
@@ -54,9 +54,7 @@ export class BeamChartsView extends LitElement {
   private governingIndex(): number {
     const a = this.analysis;
     const g = a?.report.governing;
-    if (!a || !g) return 0;
-    const i = a.report.layers.findIndex((l) => l.name === g.layer);
-    return i >= 0 ? i : 0;
+    return a && g ? g.layerIndex : 0;
   }
 
   protected override willUpdate(changed: PropertyValues): void {

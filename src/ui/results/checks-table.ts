@@ -11,7 +11,9 @@ import type { Project } from '../../model/types';
 import type { UnitSystem } from '../../model/units';
 import type { Analysis } from '../../analysis/types';
 import { numberText } from '../../report/number-text';
-import { checkRowViews, verdictSentence, MODE_LABEL, type CheckRowView, type CheckValue } from './check-rows';
+import { MODE_LABEL, STATUS_TEXT, statusDescription } from '../../analysis/check-labels';
+import { buildVerdict } from '../../analysis/verdict';
+import { checkRowViews, type CheckRowView, type CheckValue } from './check-rows';
 import { displayValue } from './display-value';
 import { tracedNumber } from './traced-number';
 import { resultsStyles } from './results-styles';
@@ -25,16 +27,19 @@ export class ChecksTable extends LitElement {
   @property() units: UnitSystem = 'SI';
 
   private rows: CheckRowView[] = [];
-  private verdict = '';
+  private verdict: string[] = [];
 
   protected override willUpdate(changed: PropertyValues<this>): void {
-    if (changed.has('project') || changed.has('analysis')) {
+    if (changed.has('project') || changed.has('analysis') || changed.has('units')) {
       if (this.project && this.analysis) {
-        this.rows = checkRowViews(this.project, this.analysis.report);
-        this.verdict = verdictSentence(this.project, this.analysis.report, this.rows);
+        this.rows = checkRowViews(this.analysis.report);
+        // The analysis' verdict: the governing check, the intact beam and the cracked voussoir.
+        this.verdict = buildVerdict(this.project, this.analysis.report, this.units).sentences
+          .filter((s) => s.id === 'governing' || s.id === 'intact' || s.id === 'cracked')
+          .map((s) => s.text);
       } else {
         this.rows = [];
-        this.verdict = '';
+        this.verdict = [];
       }
     }
   }
@@ -59,16 +64,17 @@ export class ChecksTable extends LitElement {
     return html`<tr
       data-layer=${view.layer}
       data-mode=${view.mode}
-      data-status=${r.status.kind}
-      class=${r.governing ? 'governing' : ''}
+      data-status=${r.status}
+      data-counts=${String(r.counts)}
+      class=${view.governing ? 'governing' : ''}
     >
-      ${first ? html`<th scope="rowgroup" rowspan=${span}>${r.layer}</th>` : nothing}
-      <td>${MODE_LABEL[view.mode]}${r.governing ? html` <strong>(governing)</strong>` : nothing}</td>
+      ${first ? html`<th scope="rowgroup" rowspan=${span}>${view.layer + 1} ${r.layer}</th>` : nothing}
+      <td>${MODE_LABEL[view.mode]}${view.governing ? html` <strong>(governing)</strong>` : nothing}</td>
       <td class="num">${this.value(view.demand)}</td>
       <td class="num">${this.value(view.capacity)}</td>
       <td class="num">${this.fs(view)}</td>
-      <td class="num">${view.mode === 'snapThrough' ? (r.status.kind === 'na' ? '—' : 'stands') : numberText(r.target, 3)}</td>
-      <td><span class="status ${r.status.kind}" title=${r.status.description}>${r.status.text}</span></td>
+      <td class="num">${view.mode === 'snapThrough' ? (r.status === 'na' ? '—' : 'stands') : numberText(r.target, 3)}</td>
+      <td><span class="status ${r.status}" title=${statusDescription(r)}>${STATUS_TEXT[r.status]}</span></td>
       <td class="note">${view.note}</td>
     </tr>`;
   }
@@ -79,19 +85,14 @@ export class ChecksTable extends LitElement {
     if (!a || !p) return html`<p class="empty">No results yet: the analysis has not run.</p>`;
     const report = a.report;
     const byLayer = report.layers.map((_, i) => this.rows.filter((r) => r.layer === i));
-    const basis = p.design.basis;
     return html`
       <p class="verdict" data-role="verdict">
-        ${this.verdict}
+        ${this.verdict.join(' ')}
         ${report.governing ? html`<span class="note">(governing FS ${tracedNumber('governing.fs', numberText(report.governing.fs, 3), '', report.governing.fs)})</span>` : nothing}
       </p>
       <p class="note">
-        Design basis: <strong>${basis}</strong> —
-        ${p.opening.type === 'cantilever'
-          ? 'an overhang has no cracked-beam (voussoir) reserve, so the tension check counts whichever basis is chosen.'
-          : basis === 'intact'
-            ? 'the intact beam must not crack, so tension counts; the voussoir rows are the reserve once cracked.'
-            : 'the roof is taken as cracked: tension is shown for information, the voussoir rows decide.'}
+        Design basis: <strong>${p.design.basis}</strong>; tensile basis <strong>${p.design.tensileBasis}</strong>; crushing strength
+        <strong>${p.design.crushingStrength}</strong>. Rows marked “${STATUS_TEXT.info}” are shown but do not count; the note says why.
         Click any dotted number to see its calculation.
       </p>
       <table>

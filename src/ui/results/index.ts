@@ -13,4 +13,4 @@ export { relatedEntries, tracePrefix, valueText } from './trace-entries';
 export { ReportView, PRINT_CONTAINER_ID } from './report-view';
 export { reportFileName } from './report-file-name';
 export { tracedNumber, type ShowTraceDetail } from './traced-number';
-export { checkRowViews, verdictSentence, type CheckRowView } from './check-rows';
+export { checkRowViews, type CheckRowView } from './check-rows';

@@ -16,7 +16,8 @@ import type { Analysis, SpanCurve } from '../../analysis/types';
 import { fsSpanSvg } from '../../report/charts';
 import { THICKNESS_MIN_M } from '../../analysis/thickness';
 import { numberText } from '../../report/number-text';
-import { MODE_NAME } from './check-rows';
+import { MODE_NAME } from '../../analysis/check-labels';
+import { spanWordOf } from '../../analysis/verdict';
 import { adoptableSpan } from './adoptable-span';
 import { displayText, displayValue } from './display-value';
 import { inputSignificant } from '../../model/number-format';
@@ -53,7 +54,7 @@ export class SpanFinderView extends LitElement {
         try {
           this.spanChartSvg = fsSpanSvg(this.curve, this.analysis?.report.maxSpan_m ?? null, {
             units: this.units,
-            basis: this.project?.design.basis ?? 'intact',
+            spanWord: this.project ? spanWordOf(this.project) : 'span',
           });
         } catch {
           this.spanChartSvg = '';
@@ -81,19 +82,17 @@ export class SpanFinderView extends LitElement {
     const m = a.report.maxSpan_m;
     const adopt = adoptableSpan(m);
     const current = p.opening.span_m;
-    const jointed = p.design.basis === 'jointed';
-    const governingMode = m
-      ? SPAN_MODES.filter((k) => !(jointed && k === 'tension')).find((k) => m[k] !== null && m[k] === m.governing)
-      : undefined;
-    const spanWord = p.opening.type === 'cantilever' ? 'overhang' : p.opening.type === 'slab' ? 'short span' : 'span';
+    // Which modes count, and the sliding shortfall, come from the analysis' check table.
+    const rows = a.report.checks;
+    const counted = (k: Mode) => rows.some((r) => r.mode === k && r.counts);
+    const governingMode = m ? SPAN_MODES.find((k) => m[k] !== null && m[k] === m.governing) : undefined;
+    const spanWord = p.opening.type === 'slab' ? 'short span' : spanWordOf(p);
     const layerIndex = Math.min(Math.max(0, this.chartLayer), p.layers.length - 1);
     // Sliding never limits the span from above (its FS rises with span): a shortfall at the
     // current span is stated here, as a shorter span would make it worse, not better.
-    const slidingFs = a.report.layers
-      .map((l) => l.voussoir?.fsSliding ?? null)
-      .filter((x): x is number => x !== null);
-    const leastSliding = slidingFs.length ? Math.min(...slidingFs) : null;
-    const slidingShort = leastSliding !== null && leastSliding < p.design.fsTarget.sliding;
+    const slidingBelow = rows.filter((r) => r.mode === 'sliding' && r.status === 'below' && r.fs !== null);
+    const leastSliding = slidingBelow.length ? Math.min(...slidingBelow.map((r) => r.fs as number)) : null;
+    const slidingShort = leastSliding !== null;
     return html`
       <table>
         <caption>Largest ${spanWord} that meets each target (all else held fixed)</caption>
@@ -108,8 +107,7 @@ export class SpanFinderView extends LitElement {
               <th scope="row">${MODE_NAME[k]}</th>
               <td class="num">${v === null ? '—' : tracedNumber(`maxSpan_m.${k}`, d.text, d.unit, v)}</td>
               <td class="note">
-                ${v === null ? WHY_NULL[k] : v >= current ? 'meets the target at the current span' : 'below the current span: this mode fails now'}
-                ${jointed && k === 'tension' ? html` — not counted (design basis "jointed")` : nothing}
+                ${v === null ? (k !== 'sliding' && !counted(k) ? `counts in no layer at the current ${spanWord}` : WHY_NULL[k]) : v >= current ? `meets the target at the current ${spanWord}` : `below the current ${spanWord}: this mode fails now`}
                 ${k === 'sliding' && slidingShort
                   ? html`<br /><strong>Sliding falls short at the current ${spanWord}</strong> (least FS ${numberText(leastSliding)} against
                       ${numberText(p.design.fsTarget.sliding)}); a shorter ${spanWord} makes it worse, so it must be resolved on its own.`
@@ -126,7 +124,7 @@ export class SpanFinderView extends LitElement {
                 ? '—'
                 : tracedNumber('maxSpan_m.governing', displayValue(m.governing, 'length', u).text, displayValue(m.governing, 'length', u).unit, m.governing)}
             </td>
-            <td class="note">${governingMode ? `set by ${MODE_NAME[governingMode]}` : m?.governing === null ? 'no mode limits the span' : ''}</td>
+            <td class="note">${governingMode ? `set by ${MODE_NAME[governingMode]}` : m?.governing === null ? `no mode limits the ${spanWord}` : ''}</td>
           </tr>
           <tr data-mode="current">
             <th scope="row">Current ${spanWord}</th>
@@ -144,9 +142,9 @@ export class SpanFinderView extends LitElement {
           data-role="use-span"
           ?disabled=${adopt === null}
           @click=${() => adopt !== null && this.useSpan(adopt)}
-          title="Set the ${spanWord} to the governing largest span (rounded down to 1 mm)"
+          title="Set the ${spanWord} to the governing largest ${spanWord} (rounded down to 1 mm)"
         >
-          Use this span${adopt !== null ? ` (${displayText(adopt, 'length', u, inputSignificant(u !== 'SI'))})` : ''}
+          Use this ${spanWord}${adopt !== null ? ` (${displayText(adopt, 'length', u, inputSignificant(u !== 'SI'))})` : ''}
         </button>
         ${adopt !== null ? html`<span class="note">the governing largest ${spanWord}, rounded down to 1 mm</span>` : nothing}
       </div>

@@ -1,15 +1,18 @@
 /**
  * Which project the app opens with: a share link in the address (`#p=…`) wins; otherwise the
  * autosaved project; otherwise the coal-room demo. Each candidate goes through the model's
- * validation; a damaged link or autosave is skipped with a notice (never a crash).
+ * validation; a damaged link or autosave is skipped with a notice (never a crash). A lamina/1
+ * link or autosave is migrated by the validation and its one-time notice shown; a migrated
+ * autosave is written back at once as lamina/2, so the notice is not repeated.
  *
  * A refused autosave is set aside under the backup key. If even that write fails (storage
  * full), the original is left untouched and returned as `held`: the app then pauses autosave
  * and offers the text as a file, so no later edit can overwrite it.
  */
 import type { Project } from '../../model/types';
+import { MIGRATED_CODE } from '../../model/validate';
 import { decodeShareHash } from './share-link';
-import { readAutosave, setBackup, type KeyValueStorage } from './autosave';
+import { readAutosave, setBackup, writeAutosave, type KeyValueStorage } from './autosave';
 import type { ValidationOutcome } from './project-store';
 import { DEMO_PRESET, presetData } from './presets';
 
@@ -33,9 +36,11 @@ export function initialProject(
   } catch (err) {
     notices.push(`The project link could not be opened: ${err instanceof Error ? err.message : String(err)}.`);
   }
+  const migration = (r: ValidationOutcome): string[] =>
+    r.ok ? r.warnings.filter((w) => w.code === MIGRATED_CODE).map((w) => w.message) : [];
   if (linked !== null) {
     const r = validate(linked);
-    if (r.ok) return { project: r.project, source: 'link', notices: [...notices, 'Opened the project from the link.'] };
+    if (r.ok) return { project: r.project, source: 'link', notices: [...notices, 'Opened the project from the link.', ...migration(r)] };
     notices.push(`The project in the link was refused: ${r.errors.map((e) => e.message).join('; ')}.`);
   }
   const saved = readAutosave(storage);
@@ -44,7 +49,11 @@ export function initialProject(
     let why = 'could not be read (damaged text)';
     if (saved.kind === 'found') {
       const r = validate(saved.data);
-      if (r.ok) return { project: r.project, source: 'autosave', notices };
+      if (r.ok) {
+        const migrated = migration(r);
+        if (migrated.length > 0) writeAutosave(storage, r.project);
+        return { project: r.project, source: 'autosave', notices: [...notices, ...migrated] };
+      }
       why = 'no longer passes validation';
     }
     const backup = storage ? setBackup(storage, saved.text) : { ok: false as const, reason: 'no storage' };

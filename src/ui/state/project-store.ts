@@ -13,6 +13,7 @@
  *   are listed on their own (the app shows them in a dialog) and are never attached to the
  *   current, valid fields.
  */
+import { MIGRATED_CODE } from '../../model/validate';
 import type { Project } from '../../model/types';
 import type { Analysis, DesignChart, SpanCurve } from '../../analysis/types';
 import { setAtPath } from '../../model/project-path';
@@ -67,7 +68,7 @@ export interface AppState {
 }
 
 export type ValidationOutcome =
-  | { ok: true; project: Project; warnings: ReadonlyArray<{ path: string; message: string }> }
+  | { ok: true; project: Project; warnings: ReadonlyArray<{ path: string; message: string; code?: string }> }
   | {
       ok: false;
       errors: ReadonlyArray<{ path: string; message: string }>;
@@ -222,7 +223,7 @@ export class ProjectStore {
       inputWarnings: checked.warnings.map(plain),
       ...(key === null ? { fileErrors: null } : {}),
       pending: true,
-      notice: source ? `${/^(File|Demo|Project link)\b/.test(source) ? 'Loaded' : 'Applied'}: ${source}.` : this.state.notice,
+      notice: migrationNotice(checked.warnings) ?? (source ? `${/^(File|Demo|Project link)\b/.test(source) ? 'Loaded' : 'Applied'}: ${source}.` : this.state.notice),
     });
     this.autosave(checked.project);
     this.schedule();
@@ -386,12 +387,15 @@ export class ProjectStore {
   }
 }
 
+/** The one-time notice of a lamina/1 project migrated on load, if this validation migrated one. */
+function migrationNotice(warnings: ReadonlyArray<{ message: string; code?: string }>): string | null {
+  const w = warnings.find((x) => x.code === MIGRATED_CODE);
+  return w ? w.message : null;
+}
+
 const now = (): number => (typeof performance !== 'undefined' ? performance.now() : Date.now());
 
-/** Index of the governing layer (the report names it), 0 when there is none. */
+/** Index of the governing layer (the report gives it), 0 when there is none. */
 export function governingLayerIndex(analysis: Analysis): number {
-  const g = analysis.report.governing;
-  if (!g) return 0;
-  const i = analysis.report.layers.findIndex((l) => l.name === g.layer);
-  return i >= 0 ? i : 0;
+  return analysis.report.governing?.layerIndex ?? 0;
 }

@@ -25,12 +25,13 @@ function layer(name: string, thickness_m: number, rockClass: Layer['rockClass'],
 
 export function project(name0 = 'Shale'): Project {
   return {
-    schema: 'lamina/1',
+    schema: 'lamina/2',
     title: 'Fixture room',
-    opening: { type: 'beam', span_m: 6, length_m: null, ends: 'clamped' },
-    loads: { surcharge_kPa: 10, support_kPa: 0, horizontalStress_MPa: 0 },
+    opening: { type: 'beam', span_m: 6, length_m: null, ends: 'clamped', edges: null },
+    loads: { surcharge_kPa: 10, horizontalStress_MPa: 0 },
+    support: { standing_kPa: 0 },
     layers: [layer(name0, 0.45, 'sedimentary', 8), layer('Sandstone', 1.8, 'igneous', 20), layer('Mudstone', 0.9, 'metamorphic', 6)],
-    design: { fsTarget: { tension: 4, crushing: 2, sliding: 1.5 }, deflectionLimitRatio: 0.1, characteristic: 'mean', basis: 'intact', planeStrainModulus: false },
+    design: { fsTarget: { tension: 4, crushing: 2, sliding: 1.5 }, deflectionLimitRatio: 0.1, characteristic: 'mean', basis: 'intact', tensileBasis: 'rockMass', crushingStrength: 'rockMass', planeStrainModulus: false },
   };
 }
 
@@ -51,9 +52,11 @@ export const MAX_SPAN: MaxSpanReport = { tension: 1.908, crushing: 15.35, slidin
 
 export function analysis(p: Project = project()): Analysis {
   const report: Report = {
-    schema: 'lamina-report/1',
+    schema: 'lamina-report/2',
+    opening: { type: 'beam', span_m: 6, designSpan_m: 6, basis: 'span' },
     layers: [layerReport(p.layers[0].name, 0.45, 0), layerReport('Sandstone', 1.8, 1), layerReport('Mudstone', 0.9, 1)],
-    governing: { layer: p.layers[0].name, mode: 'tension', fs: 0.404 },
+    checks: [],
+    governing: { layerIndex: 0, layer: p.layers[0].name, mode: 'tension', fs: 0.404, target: 4 },
     maxSpan_m: MAX_SPAN,
     warnings: [],
     trace: [],
@@ -136,6 +139,7 @@ export function curve(): SpanCurve {
       snapThrough: spans_m.map((s) => (s <= 15.46 ? 1 : 0)),
     },
     targets: { tension: 4, crushing: 2, sliding: 1.5, deflection: 1, snapThrough: 1 },
+    counts: { tension: true, crushing: true, sliding: true, deflection: true, snapThrough: true },
     currentSpan_m: 6,
   };
 }
@@ -164,5 +168,6 @@ export function design(): DesignChart {
       snapThrough: grid((s, t) => (s / t < 30 ? 1 : 0)),
     },
     targets: { tension: 4, crushing: 2, sliding: 1.5, deflection: 1, snapThrough: 1 },
+    counts: { tension: true, crushing: true, sliding: true, deflection: true, snapThrough: true },
   };
 }

@@ -47,9 +47,11 @@ describe('fsSpanSvg', () => {
     expect(Number(m![1])).toBeLessThan(x);
   });
 
-  it('fsSpanSvg with basis jointed marks tension as not governing', () => {
-    const svg = fsSpanSvg(curve(), { ...MAX_SPAN, governing: 12.58 }, { units: 'SI', basis: 'jointed' });
-    expectLabels(svg, ['tension (not governing: jointed basis)', 'deflection max 12.6 m (governs)']);
+  it('fsSpanSvg marks a mode the check table does not count (curve.counts) as not counted', () => {
+    const c = curve();
+    c.counts = { tension: false, crushing: true, sliding: true, deflection: true, snapThrough: true };
+    const svg = fsSpanSvg(c, { ...MAX_SPAN, governing: 12.58 }, { units: 'SI' });
+    expectLabels(svg, ['tension (not counted)', 'deflection max 12.6 m (governs)']);
   });
 
   it('fsSpanSvg without a max-span report and with gaps (null FS) still renders', () => {

@@ -34,7 +34,7 @@ function allCharts(project: Project, units: UnitSystem): string[] {
     const field = slabField(project, a, i);
     if (field) out.push(slabContourSvg(field, { units }));
   });
-  out.push(fsSpanSvg(spanCurve(project, { samples: 40 }), a.report.maxSpan_m, { units, basis: project.design.basis }));
+  out.push(fsSpanSvg(spanCurve(project, { samples: 40 }), a.report.maxSpan_m, { units }));
   const chart = designChart(project, 0);
   for (const m of MODES) out.push(designChartSvg(chart, m, { units, currentSpan_m: project.opening.span_m, currentThickness_m: project.layers[0].thickness_m }));
   return out;
@@ -71,7 +71,7 @@ describe('charts of the presets (real analyses)', () => {
 
   it('a preset turned into a slab draws its stress contours', () => {
     const project = load(presets.find((f) => f.startsWith('coal-room'))!);
-    project.opening = { type: 'slab', span_m: project.opening.span_m, length_m: project.opening.span_m * 1.5, ends: project.opening.ends };
+    project.opening = { type: 'slab', span_m: project.opening.span_m, length_m: project.opening.span_m * 1.5, ends: project.opening.ends, edges: null };
     const a = analyse(project);
     const field = slabField(project, a, 0);
     expect(field).not.toBeNull();

@@ -73,7 +73,7 @@ describe('strataColumnSvg', () => {
 
   it('strataColumnSvg draws a cantilever as an overhang beside a rock face', () => {
     const p = project();
-    p.opening = { type: 'cantilever', span_m: 2, length_m: null, ends: 'clamped' };
+    p.opening = { type: 'cantilever', span_m: 2, length_m: null, ends: 'clamped', edges: null };
     const svg = strataColumnSvg(p, null, { units: 'SI' });
     expectWellFormed(svg);
     expectLabels(svg, ['overhang 2 m', 'rock face', 'open below the overhang']);
@@ -82,7 +82,7 @@ describe('strataColumnSvg', () => {
 
   it('strataColumnSvg states both sides of a slab opening', () => {
     const p = project();
-    p.opening = { type: 'slab', span_m: 6, length_m: 9, ends: 'simple' };
+    p.opening = { type: 'slab', span_m: 6, length_m: 9, ends: 'simple', edges: null };
     expectLabels(strataColumnSvg(p, null, { units: 'SI' }), ['span (short side) 6 m × length 9 m, simple ends', 'opening (slab roof)']);
   });
 

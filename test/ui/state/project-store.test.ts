@@ -20,9 +20,11 @@ function analyse(p: Project): Analysis {
   p.layers.forEach((l, i) => { if (l.thickness_m < p.layers[gi].thickness_m) gi = i; });
   return {
     report: {
-      schema: 'lamina-report/1',
+      schema: 'lamina-report/2',
+      opening: { type: p.opening.type, span_m: p.opening.span_m, designSpan_m: p.opening.span_m, basis: 'span' },
       layers: p.layers.map((l) => ({ name: l.name, thickness_m: l.thickness_m } as never)),
-      governing: { layer: p.layers[gi].name, mode: 'tension', fs: p.layers[gi].thickness_m },
+      checks: [],
+      governing: { layerIndex: gi, layer: p.layers[gi].name, mode: 'tension', fs: p.layers[gi].thickness_m, target: 2 },
       maxSpan_m: null,
       warnings: [],
       trace: [],
@@ -40,7 +42,7 @@ function deps(extra: Partial<StoreDeps> = {}) {
     calls: { analyse: 0, chart: [] },
     validate,
     analyse: (p) => { d.calls.analyse++; return analyse(p); },
-    spanCurve: (p) => ({ spans_m: [1], fs: {} as never, targets: {} as never, currentSpan_m: p.opening.span_m }),
+    spanCurve: (p) => ({ spans_m: [1], fs: {} as never, targets: {} as never, counts: {} as never, currentSpan_m: p.opening.span_m }),
     designChart: (_p, layer) => { d.calls.chart.push(layer); return { layer } as never; },
     minimumThickness: () => 0.3,
     storage: {

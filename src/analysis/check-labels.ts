@@ -1,0 +1,73 @@
+/**
+ * The one vocabulary of the check table: the order of the modes, their names in a table and in
+ * a sentence, and the status words and symbols (a word AND a symbol, never colour alone).
+ * The report, the app, the charts and the CLI take their words from here.
+ *
+ *     STATUS_TEXT.below // "below ✗"
+ */
+import type { CheckStatusKind, Mode } from '../model/types';
+
+/** Table order of the modes. */
+export const MODES: readonly Mode[] = ['tension', 'crushing', 'sliding', 'deflection', 'snapThrough'];
+
+/** Modes of the voussoir (cracked beam). */
+export const VOUSSOIR_MODES: readonly Mode[] = ['crushing', 'sliding', 'deflection', 'snapThrough'];
+
+/** Row labels in a check table. */
+export const MODE_LABEL: Record<Mode, string> = {
+  tension: 'tension (intact beam)',
+  crushing: 'crushing (voussoir arch)',
+  sliding: 'abutment sliding (voussoir arch)',
+  deflection: 'midspan deflection δ/t (voussoir arch)',
+  snapThrough: 'snap-through (voussoir arch)',
+};
+
+/** Names inside a sentence ("… governs: crushing of the arch in layer 1"). */
+export const MODE_NAME: Record<Mode, string> = {
+  tension: 'tension',
+  crushing: 'crushing of the arch',
+  sliding: 'sliding at the abutments',
+  deflection: 'midspan deflection',
+  snapThrough: 'snap-through',
+};
+
+/** Short names for chart labels and legends. */
+export const MODE_SHORT: Record<Mode, string> = {
+  tension: 'tension',
+  crushing: 'crushing',
+  sliding: 'sliding',
+  deflection: 'deflection',
+  snapThrough: 'snap-through',
+};
+
+export const STATUS_WORD: Record<CheckStatusKind, string> = { meets: 'meets', below: 'below', info: 'info', na: 'n/a' };
+export const STATUS_SYMBOL: Record<CheckStatusKind, string> = { meets: '✓', below: '✗', info: '○', na: '–' };
+export const STATUS_TEXT: Record<CheckStatusKind, string> = {
+  meets: 'meets ✓',
+  below: 'below ✗',
+  info: 'info ○',
+  na: 'n/a –',
+};
+
+/** Legend lines for the statuses, for the report's key. */
+export const STATUS_LEGEND: ReadonlyArray<{ text: string; meaning: string }> = [
+  { text: STATUS_TEXT.meets, meaning: 'the factor of safety reaches the target, and the check counts' },
+  { text: STATUS_TEXT.below, meaning: 'the factor of safety is short of the target, and the check counts' },
+  { text: STATUS_TEXT.info, meaning: 'computed and shown, but it does not count (the row says why)' },
+  { text: STATUS_TEXT.na, meaning: 'the check does not apply (the row says why)' },
+];
+
+/** What a status means, in one sentence (tooltips, screen readers). */
+export function statusDescription(row: { status: CheckStatusKind; fs: number | null; target: number; reason: string | null }): string {
+  const fs = row.fs === null ? '' : +row.fs.toPrecision(3);
+  switch (row.status) {
+    case 'meets':
+      return `factor of safety ${fs} meets the target ${row.target}`;
+    case 'below':
+      return `factor of safety ${fs} is below the target ${row.target}`;
+    case 'info':
+      return `shown for information, not counted: ${row.reason ?? ''}`;
+    default:
+      return `not applicable: ${row.reason ?? ''}`;
+  }
+}
