@@ -11,18 +11,30 @@ import { analyse, beamProfile, designChart, minimumThickness, slabField, spanCur
 import type { Analysis } from '../../src/analysis';
 import type { Project, Report } from '../../src/model/types';
 
-/** Paths of every NaN/±Infinity number and every string mentioning NaN or Infinity. */
-export function nonFinite(value: unknown, path = '', out: string[] = []): string[] {
+/**
+ * Paths of every NaN/±Infinity number and every string mentioning NaN or Infinity. Text the
+ * user typed (`userText`: names, ids, titles, which may well be "NaN") is taken out of each
+ * string before it is checked.
+ */
+export function nonFinite(value: unknown, path = '', out: string[] = [], userText: readonly string[] = []): string[] {
   if (typeof value === 'number') {
     if (!Number.isFinite(value)) out.push(`${path} = ${value}`);
   } else if (typeof value === 'string') {
-    if (/\bNaN\b|\bInfinity\b/.test(value)) out.push(`${path} text "${value.slice(0, 120)}"`);
+    let text = value;
+    for (const u of userText) if (u) text = text.split(u).join(' ');
+    if (/\bNaN\b|\bInfinity\b/.test(text)) out.push(`${path} text "${value.slice(0, 120)}"`);
   } else if (Array.isArray(value)) {
-    value.forEach((v, i) => nonFinite(v, `${path}[${i}]`, out));
+    value.forEach((v, i) => nonFinite(v, `${path}[${i}]`, out, userText));
   } else if (value !== null && typeof value === 'object') {
-    for (const [k, v] of Object.entries(value)) nonFinite(v, path ? `${path}.${k}` : k, out);
+    for (const [k, v] of Object.entries(value)) nonFinite(v, path ? `${path}.${k}` : k, out, userText);
   }
   return out;
+}
+
+/** Every string of the project the user typed, longest first (so that a name inside another is taken out after it). */
+export function userStrings(project: Project): string[] {
+  const all = [project.title, project.description ?? '', ...project.layers.flatMap((l) => [l.name, ...l.tensile.specimens.map((s) => s.id)])];
+  return [...new Set(all)].filter((x) => /NaN|Infinity/.test(x)).sort((a, b) => b.length - a.length);
 }
 
 const isNum = (v: unknown): v is number => typeof v === 'number' && Number.isFinite(v);
@@ -93,7 +105,7 @@ export function reportViolations(project: Project, report: Report): string[] {
   }
   for (const w of report.warnings) if (typeof w.message !== 'string' || typeof w.path !== 'string') bad.push(`warnings: malformed ${JSON.stringify(w)}`);
   for (const t of report.trace) num(`trace ${t.path}.result`, t.result);
-  bad.push(...nonFinite(report).map((x) => `non-finite ${x}`));
+  bad.push(...nonFinite(report, '', [], userStrings(project)).map((x) => `non-finite ${x}`));
   const json = JSON.stringify(report);
   if (json !== JSON.stringify(JSON.parse(json))) bad.push('JSON round trip changed the report');
   return bad;
@@ -113,8 +125,9 @@ export function checkProject(project: Project, withCharts: boolean): { violation
   const ms = performance.now() - t0;
   const cpuMs = cpu();
   const violations = reportViolations(project, analysis.report);
-  violations.push(...nonFinite(analysis.layers, 'detail.layers').map((x) => `non-finite ${x}`));
-  violations.push(...nonFinite(analysis.groups, 'detail.groups').map((x) => `non-finite ${x}`));
+  const typed = userStrings(project);
+  violations.push(...nonFinite(analysis.layers, 'detail.layers', [], typed).map((x) => `non-finite ${x}`));
+  violations.push(...nonFinite(analysis.groups, 'detail.groups', [], typed).map((x) => `non-finite ${x}`));
   if (withCharts) {
     try {
       violations.push(...nonFinite(spanCurve(project), 'spanCurve').map((x) => `non-finite ${x}`));
