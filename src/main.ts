@@ -51,6 +51,7 @@ function boot(): void {
     writeAutosave(storage, first.project);
     if (location.hash.startsWith(SHARE_PREFIX)) history.replaceState(null, '', location.pathname + location.search);
   }
+  if (first.held) store.holdAutosave(first.held.text, first.held.message);
   const notices = [...first.notices];
   if (!storage) notices.push('This browser blocks local storage: changes are not autosaved — use Save.');
   if (notices.length) store.setNotice(notices.join(' '));

@@ -13,6 +13,7 @@ import { MODE_SHORT } from './check-labels';
 import { maxSpans, spanFsFunction, SPAN_CAP_M, SPAN_FLOOR_M } from './span-finder';
 import { SOURCES, TraceBuilder } from './trace';
 import { beamCoefficients } from '../mechanics/beam';
+import { specimenOutcomes } from '../strength/specimens';
 
 const MPa = 1e-6;
 const kPa = 1e-3;
@@ -292,9 +293,10 @@ function labDetail(layer: LayerSI, ls: LayerState, p: ProjectSI): LabDetail {
   const chain = ls.chain;
   const factor = chain.directFactor;
   const red = chain.reduction;
+  const outcome = specimenOutcomes(red, layer.specimens.length);
   const specimens = layer.specimens.map((sp, index) => {
-    const accepted = red?.accepted.find((a) => a.index === index);
-    const rejected = red?.rejected.find((r) => r.index === index);
+    const accepted = outcome.accepted[index];
+    const rejected = outcome.rejected[index];
     const brazilian = (2 * sp.peakLoad) / (Math.PI * sp.diameter * sp.thickness);
     return {
       index,
@@ -306,7 +308,7 @@ function labDetail(layer: LayerSI, ls: LayerState, p: ProjectSI): LabDetail {
       direct_MPa: (accepted ? accepted.brazilian : brazilian) * MPa * factor,
       accepted: Boolean(accepted),
       reason: rejected ? rejected.reason : null,
-      warnings: (red?.warnings ?? []).filter((w) => w.index === index).map((w) => w.message),
+      warnings: outcome.warnings[index].map((w) => w.message),
     };
   });
   return {

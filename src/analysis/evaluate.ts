@@ -102,7 +102,8 @@ export function plateAspect(p: ProjectSI): number {
 /** β, α for a slab at `plateAspect` (the aspect ratio is held fixed when the span varies). */
 export function plateFor(p: ProjectSI, poisson: number): PlateCoefficients | null {
   if (p.type !== 'slab' || p.length === null) return null;
-  return plateCoefficients({ aspect: plateAspect(p), edges: p.plateEdges, poisson });
+  const aspect = plateAspect(p);
+  return p.plateSource ? p.plateSource(aspect, poisson) : plateCoefficients({ aspect, edges: p.plateEdges, poisson });
 }
 
 export interface EvaluateOptions {

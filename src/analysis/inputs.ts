@@ -3,7 +3,7 @@
  * practical units in its key names; this is the one place they are converted for analysis.
  */
 import type { Design, EndCondition, Layer, OpeningType, Project } from '../model/types';
-import type { PlateInput } from '../mechanics/plate';
+import type { PlateCoefficients, PlateInput } from '../mechanics/plate';
 import type { SpecimenSI } from '../strength/specimens';
 
 export interface LayerSI {
@@ -46,6 +46,11 @@ export interface ProjectSI {
   horizontalStress: number;
   layers: LayerSI[];
   design: Design;
+  /**
+   * Optional source of slab plate coefficients in place of the exact (cached) solve: the
+   * uncertainty run's interpolation over aspect ratio and Poisson's ratio (sample-plates.ts).
+   */
+  plateSource?: (aspect: number, poisson: number) => PlateCoefficients;
 }
 
 export function layerToSI(layer: Layer): LayerSI {

@@ -10,7 +10,7 @@ export interface ParsedArgs {
   flags: Record<string, string | true>;
 }
 
-const VALUE_FLAGS = new Set(['--html', '--csv', '--units', '--rock', '--layer']);
+const VALUE_FLAGS = new Set(['--html', '--csv', '--units', '--rock', '--layer', '--samples', '--seed']);
 const BOOLEAN_FLAGS = new Set(['--json', '--jsonl', '--markdown', '--help', '-h']);
 
 export function parseArgs(argv: readonly string[]): ParsedArgs {

@@ -18,6 +18,8 @@ import { expandInputs, readSource, type InputSource } from './inputs';
 import type { Io } from './io';
 import { writeOutput } from './output';
 import { caution, checkText, spanLines } from './text-report';
+import { samplingFlags, uncertaintyFor, uncertaintyLines, type SamplingFlags } from './uncertainty';
+import { ProjectError } from '../model/validate';
 
 export function laminaVersion(): string {
   return version;
@@ -50,6 +52,7 @@ const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
 export async function runCheck(args: ParsedArgs, io: Io): Promise<ExitCode> {
   const units = unitsFlag(args);
   const format = outputFormat(args);
+  const sampling = samplingFlags(args);
   if (args.positional.length === 0) throw new UsageError('check needs at least one project file (or - for standard input)');
   const sources = expandInputs(args.positional);
   // One named file keeps the single-report output (--json prints the report itself).
@@ -72,7 +75,7 @@ export async function runCheck(args: ParsedArgs, io: Io): Promise<ExitCode> {
   };
 
   for (const source of sources) {
-    const entry = checkOne(source, io, { units, format, single, html, csv, reports });
+    const entry = checkOne(source, io, { units, format, single, html, csv, reports, sampling });
     worst = worstExit(worst, entry.exit);
     if (entry.status === 'meets') tally.meets++;
     else if (entry.status === 'below') tally.below++;
@@ -95,6 +98,7 @@ interface CheckOptions {
   html: string | true | undefined;
   csv: string | true | undefined;
   reports: typeof import('./report-output') | null;
+  sampling: SamplingFlags;
 }
 
 function checkOne(source: InputSource, io: Io, o: CheckOptions): CheckEntry {
@@ -118,7 +122,18 @@ function checkOne(source: InputSource, io: Io, o: CheckOptions): CheckEntry {
     io.err(`lamina: internal error: ${file}: ${e instanceof Error ? e.message : String(e)}\n`);
     return { file, status: 'internal error', exit: EXIT_INTERNAL, errors: [{ path: '', message: `internal error: ${e instanceof Error ? e.message : String(e)}` }] };
   }
-  const exit = meetsTargets(project, analysis.report) ? EXIT_MEETS : EXIT_BELOW;
+  // The uncertainty run (METHODS §16): a bad variable refuses the file with its field path.
+  try {
+    const block = uncertaintyFor(project, o.sampling, io, file);
+    if (block) analysis = { ...analysis, report: { ...analysis.report, uncertainty: block } };
+  } catch (e) {
+    if (!(e instanceof ProjectError)) throw e;
+    io.err(`lamina: input refused: ${file}: ${e.issues.map((i) => i.message).join('; ')}\n`);
+    return { file, status: 'refused', exit: EXIT_REFUSED, errors: e.issues };
+  }
+  const u = analysis.report.uncertainty;
+  // An acceptable P_f in the file counts like a check: not shown to be met → exit 1.
+  const exit = meetsTargets(project, analysis.report) && u?.meetsAcceptablePf !== false ? EXIT_MEETS : EXIT_BELOW;
   const curve = o.reports || typeof o.csv === 'string' ? spanCurve(project) : null;
   const doc = () => o.reports!.reportDocument({ project, analysis, curve: curve!, text, units: o.units, version: laminaVersion() });
   if (typeof o.html === 'string') writeOutput(io, '--html', o.html, o.reports!.renderHtml(doc()));
@@ -128,7 +143,10 @@ function checkOne(source: InputSource, io: Io, o: CheckOptions): CheckEntry {
   }
   if (o.format === 'json' && o.single) io.out(JSON.stringify(analysis.report, null, 2) + '\n');
   else if (o.format === 'markdown') io.out(o.reports!.renderMarkdown(doc()));
-  else if (o.format === 'text') io.out((o.single ? '' : `File: ${file}\n`) + checkText(project, analysis, o.units));
+  else if (o.format === 'text') {
+    const text = checkText(project, analysis, o.units);
+    io.out((o.single ? '' : `File: ${file}\n`) + (u ? insertBeforeCaution(text, uncertaintyLines(u)) : text));
+  }
   return { file, status: exit === EXIT_MEETS ? 'meets' : 'below', exit, report: analysis.report };
 }
 
@@ -164,4 +182,11 @@ export async function runSpan(args: ParsedArgs, io: Io): Promise<ExitCode> {
     io.out(lines.join('\n'));
   }
   return meetsTargets(project, analysis.report) ? EXIT_MEETS : EXIT_BELOW;
+}
+
+/** The uncertainty section goes above the closing caution of the text report. */
+function insertBeforeCaution(text: string, lines: string[]): string {
+  const tail = `${caution()}\n`;
+  const at = text.lastIndexOf(tail);
+  return at < 0 ? `${text}${lines.join('\n')}\n` : `${text.slice(0, at)}${lines.join('\n')}\n\n${text.slice(at)}`;
 }

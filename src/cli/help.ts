@@ -5,6 +5,7 @@ export const USAGE = `Lamina — roof and overhang checks for excavations in bed
 
 Usage:
   lamina check FILE... [--json | --jsonl | --markdown] [--html OUT.html] [--csv OUT.csv] [--units SI|US]
+               [--samples N] [--seed S]
       Full analysis of each project file: strength chain, elastic / layered / voussoir /
       slab checks, governing mode and the largest span per mode. FILE may be a pattern
       ("presets/*.lamina.json", expanded by lamina itself) or - for standard input.
@@ -33,6 +34,9 @@ Options:
   --units SI|US    units for human-readable output and CSV (default SI)
   --rock CLASS     rock class for the Brazilian-to-direct factor (default sedimentary)
   --layer N        span: the layer whose minimum thickness is found (default 1)
+  --samples N      check: samples of the uncertainty run (100 to 1000000) of a file with
+                   uncertainty variables; overrides the file's uncertainty.samples
+  --seed S         check: seed of the uncertainty run (0 to 2147483647), overrides the file's
 
 check and openings print a summary line on stderr (files or openings checked, how many
 meet the targets, are below and were refused). Over several files or openings the exit

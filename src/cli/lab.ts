@@ -2,7 +2,7 @@
 import { parseSpecimensCsv } from '../model/specimens-csv';
 import { ROCK_CLASSES } from '../model/validate';
 import type { RockClass } from '../model/types';
-import { reduceSpecimens } from '../strength/specimens';
+import { reduceSpecimens, specimenOutcomes } from '../strength/specimens';
 import { directFactor } from '../strength/direct-factor';
 import { characteristicValue } from '../strength/statistics';
 import { formatQuantity, type UnitSystem } from '../model/units';
@@ -34,9 +34,10 @@ export function runLab(args: ParsedArgs, io: Io): ExitCode {
   const mean = characteristicValue(direct, 'mean');
   const lower5 = characteristicValue(direct, 'lower5');
   const MPa = (pa: number) => pa * 1e-6;
+  const outcome = specimenOutcomes(reduction, parsed.specimens.length);
   const specimens = parsed.specimens.map((s, index) => {
-    const a = reduction.accepted.find((x) => x.index === index);
-    const r = reduction.rejected.find((x) => x.index === index);
+    const a = outcome.accepted[index];
+    const r = outcome.rejected[index];
     const brazilian = (2 * s.peakLoad_kN * 1e3) / (Math.PI * (s.diameter_mm / 1e3) * (s.thickness_mm / 1e3));
     return {
       id: s.id,
@@ -47,7 +48,7 @@ export function runLab(args: ParsedArgs, io: Io): ExitCode {
       brazilian_MPa: MPa(brazilian),
       accepted: Boolean(a),
       reason: r ? r.reason : null,
-      warnings: reduction.warnings.filter((w) => w.index === index).map((w) => w.message),
+      warnings: outcome.warnings[index].map((w) => w.message),
     };
   });
   const result = {

@@ -13,7 +13,7 @@ import { displayUnit, fileUnit, formatQuantity, toDisplay, unitLabel, type Quant
 import { MODE_NAME } from '../analysis/check-labels';
 import { numberText } from '../report/number-text';
 import { UsageError, type ParsedArgs } from './args';
-import { safeCsvText } from './csv-cell';
+import { neutraliseCsvText as safeCsvText } from '../report/csv-cell';
 import { EXIT_BELOW, EXIT_MEETS, EXIT_REFUSED, worstExit, type ExitCode } from './exit-codes';
 import { InputError, parseProjectText, printWarnings, unitsFlag } from './input';
 import { expandInputs, readSource } from './inputs';

@@ -7,3 +7,9 @@ export const CAUTION =
 
 /** A short heading for the caution block. */
 export const CAUTION_TITLE = 'Caution';
+
+/**
+ * The caution in one line, for the bar pinned at the top of narrow screens (the full `CAUTION`
+ * stays at the top and the foot of the sheet and in every report).
+ */
+export const CAUTION_SHORT = 'Screening aid only: roof falls kill. A qualified, licensed engineer must judge every design.';

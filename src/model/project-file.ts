@@ -39,14 +39,15 @@ function jsonErrorMessage(source: string, err: unknown): string {
 
 /**
  * Find the first syntax error in JSON text (the engine's own message does not always give a
- * position). Returns undefined if no error is found (or nesting is too deep to follow).
+ * position). Returns undefined if no error is found. Runs in time and stack linear in the text
+ * whatever the nesting.
  */
 export function locateJsonError(text: string): { position: number; reason: string } | undefined {
   let i = 0;
   const fail = (reason: string): never => {
     throw { position: i, reason };
   };
-  const shown = (): string => (i < text.length ? JSON.stringify(text[i]) : 'the end of the file');
+  const shown = (): string => (i < text.length ? JSON.stringify(text[i]) : 'end of the file');
   const space = (): void => {
     while (i < text.length && ' \t\n\r'.includes(text[i])) i++;
   };
@@ -78,35 +79,9 @@ export function locateJsonError(text: string): { position: number; reason: strin
     if (!m) fail(`unexpected ${shown()} (expected a value)`);
     i += m![0].length;
   };
-  const value = (depth: number): void => {
-    if (depth > 500) throw undefined;
-    space();
+  /** A scalar value at i (string, number, literal); containers are handled by the loop below. */
+  const scalar = (): void => {
     const c = text[i];
-    if (c === '{') {
-      i++; space();
-      if (text[i] === '}') { i++; return; }
-      for (;;) {
-        space();
-        if (text[i] !== '"') fail(`unexpected ${shown()} (expected a property name in double quotes)`);
-        string(); space();
-        if (text[i] !== ':') fail(`unexpected ${shown()} (expected ":")`);
-        i++;
-        value(depth + 1); space();
-        if (text[i] === ',') { i++; continue; }
-        if (text[i] === '}') { i++; return; }
-        fail(`unexpected ${shown()} (expected "," or "}")`);
-      }
-    }
-    if (c === '[') {
-      i++; space();
-      if (text[i] === ']') { i++; return; }
-      for (;;) {
-        value(depth + 1); space();
-        if (text[i] === ',') { i++; continue; }
-        if (text[i] === ']') { i++; return; }
-        fail(`unexpected ${shown()} (expected "," or "]")`);
-      }
-    }
     if (c === '"') return string();
     if (c === 't') return literal('true');
     if (c === 'f') return literal('false');
@@ -114,8 +89,63 @@ export function locateJsonError(text: string): { position: number; reason: strin
     if (c === '-' || (c !== undefined && c >= '0' && c <= '9')) return number();
     fail(`unexpected ${shown()} (expected a value)`);
   };
+  /**
+   * Iterative, with an explicit stack of open containers: 200,000 nested "[" are followed to
+   * the end of the file like a flat list (a recursive reader would overflow the call stack).
+   */
+  const document = (): void => {
+    const open: ('{' | '[')[] = [];
+    let wantValue = true;
+    for (;;) {
+      space();
+      if (wantValue) {
+        const c = text[i];
+        if (c === '{' || c === '[') {
+          i++;
+          space();
+          const close = c === '{' ? '}' : ']';
+          if (text[i] === close) {
+            i++;
+            wantValue = false;
+          } else {
+            open.push(c);
+            if (c === '{') {
+              if (text[i] !== '"') fail(`unexpected ${shown()} (expected a property name in double quotes)`);
+              string(); space();
+              if (text[i] !== ':') fail(`unexpected ${shown()} (expected ":")`);
+              i++;
+            }
+            continue;
+          }
+        } else {
+          scalar();
+          wantValue = false;
+        }
+      }
+      if (open.length === 0) return;
+      space();
+      const top = open[open.length - 1];
+      const close = top === '{' ? '}' : ']';
+      if (text[i] === ',') {
+        i++;
+        if (top === '{') {
+          space();
+          if (text[i] !== '"') fail(`unexpected ${shown()} (expected a property name in double quotes)`);
+          string(); space();
+          if (text[i] !== ':') fail(`unexpected ${shown()} (expected ":")`);
+          i++;
+        }
+        wantValue = true;
+      } else if (text[i] === close) {
+        i++;
+        open.pop();
+      } else {
+        fail(`unexpected ${shown()} (expected "," or "${close}")`);
+      }
+    }
+  };
   try {
-    value(0);
+    document();
     space();
     if (i < text.length) fail(`unexpected ${shown()} after the end of the project`);
     return undefined;
@@ -161,6 +191,13 @@ function orderedProject(p: Project): Record<string, unknown> {
     crushingStrength: p.design.crushingStrength,
     planeStrainModulus: p.design.planeStrainModulus,
   };
+  if (p.uncertainty !== undefined) {
+    const u = p.uncertainty;
+    out.uncertainty = u === null ? null : {
+      samples: u.samples, seed: u.seed, method: u.method, acceptablePf: u.acceptablePf,
+      variables: u.variables.map((v) => ({ ...v })),
+    };
+  }
   return out;
 }
 

@@ -119,6 +119,36 @@ export interface Design {
   planeStrainModulus: boolean;
 }
 
+/** Sampling of the uncertainty run (METHODS §16). */
+export type SamplingMethodName = 'monteCarlo' | 'latinHypercube';
+export type VariableDistributionName = 'normal' | 'lognormal' | 'uniform' | 'triangular';
+
+/** One uncertain input: a field path and its distribution; the mean defaults to the project's value. */
+export interface UncertainVariable {
+  path: string;
+  distribution: VariableDistributionName;
+  mean?: number;
+  cov?: number;
+  sd?: number;
+  min?: number;
+  max?: number;
+  /** triangular only */
+  mode?: number;
+}
+
+/** The file's `uncertainty` block (DESIGN "Contract changes in v2"). */
+export interface Uncertainty {
+  /** 100 … 1 000 000, default 20 000 */
+  samples: number;
+  /** whole number 0 … 2³¹ − 1, default 1 */
+  seed: number;
+  /** default "latinHypercube" */
+  method: SamplingMethodName;
+  /** null, or a probability in (0, 1): adds a counted `probability` row */
+  acceptablePf: number | null;
+  variables: UncertainVariable[];
+}
+
 export interface Project {
   schema: 'lamina/2';
   title: string;
@@ -129,6 +159,8 @@ export interface Project {
   /** layers[0] is the immediate roof; then upward. */
   layers: Layer[];
   design: Design;
+  /** Optional: null or absent = no uncertainty run. */
+  uncertainty?: Uncertainty | null;
 }
 
 // ---------------------------------------------------------------- report
@@ -275,4 +307,53 @@ export interface Report {
   maxSpan_m: MaxSpanReport | null;
   warnings: Warning[];
   trace: TraceEntry[];
+  /** The uncertainty run (METHODS §16), when the file asks for one and the caller ran it. */
+  uncertainty?: UncertaintyReport | null;
+}
+
+/** One sampled input as the report shows it. */
+export interface UncertaintyInput {
+  path: string;
+  distribution: VariableDistributionName;
+  mean: number;
+  sd: number;
+  /** ends of the support (null when open) */
+  lower: number | null;
+  upper: number | null;
+}
+
+/** The report's `uncertainty` block (DESIGN "Contract changes in v2"). */
+export interface UncertaintyReport {
+  method: SamplingMethodName;
+  seed: number;
+  samples: number;
+  evaluated: number;
+  inputs: UncertaintyInput[];
+  /** P(some counted check has FS < 1) */
+  pf: number;
+  /** 95 %: Wilson, or the rule of three with no failure */
+  pfInterval: [number, number];
+  intervalMethod: 'wilson' | 'ruleOfThree';
+  /** √((1 − P_f)/(N P_f)); null with no failure */
+  pfCov: number | null;
+  /** −Φ⁻¹(P_f); null at P_f 0 or 1 (see betaNote) */
+  beta: number | null;
+  betaNote: string | null;
+  byMode: Partial<Record<Mode, number>>;
+  byModeInterval: Partial<Record<Mode, [number, number]>>;
+  pBelowTarget: number;
+  sensitivity: { path: string; rankCorrelation: number | null }[];
+  histogram: { bins: { x0: number; x1: number; count: number }[]; above: number; total: number };
+  governingFs: { min: number | null; mean: number | null; max: number | null };
+  /** the deterministic governing check, on which FORM runs */
+  governing: Governing | null;
+  form: { beta: number | null; pf: number | null; converged: boolean; iterations: number; note: string | null; designPoint: { path: string; value: number }[] } | null;
+  /** P_f at points of the span curve (entry span, m), each with `samplesPerSpan` samples and the same seed */
+  pfVersusSpan: { span_m: number; pf: number; pfInterval: [number, number]; beta: number | null }[];
+  samplesPerSpan: number;
+  /** slab: the measured error of the plate interpolation, null when none is used */
+  plateInterpolation: { maxRelativeError: number; nodes: { aspect: number; poisson: number } } | null;
+  acceptablePf: number | null;
+  /** P_f ≤ acceptablePf judged by the interval's upper end; null without acceptablePf */
+  meetsAcceptablePf: boolean | null;
 }

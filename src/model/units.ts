@@ -17,6 +17,8 @@
  *     parseQuantity('0.45', 'm')    // 0.45 (a bare number is already in the given unit)
  */
 import { create, createUnitDependencies, unitDependencies, type Unit } from 'mathjs';
+import { normaliseDecimalComma } from './decimal-comma';
+import { MISSING, PRECISION, numberText } from './number-format';
 
 const CUSTOM_UNITS: ReadonlyArray<[string, string]> = [
   ['psf', '1 lbf/ft^2'],
@@ -105,7 +107,8 @@ function toUnit(value: number, unitText: string): Unit | undefined {
 /**
  * Parse `text` (a number, optionally followed by a unit) and return it in `siUnit`
  * (e.g. 'm', 'mm', 'MPa', 'kPa', 'GPa', 'kN/m^3', 'kN'). A bare number is taken as already
- * in `siUnit`. Throws `UnitError` on unparsable text or a wrong dimension.
+ * in `siUnit`. A decimal comma is read as a point ("2,5 m"; see decimal-comma.ts). Throws
+ * `UnitError` on unparsable text or a wrong dimension, `AmbiguousNumberError` on "1,250".
  *     parseQuantity('160 lbf/ft^3', 'kN/m^3') // 25.134
  */
 export function parseQuantity(text: string, siUnit: string): number {
@@ -114,7 +117,7 @@ export function parseQuantity(text: string, siUnit: string): number {
   const dim = dimensionOf(siUnit);
   const expected = `expected ${dim.name} (e.g. ${dim.example}), got ${JSON.stringify(String(text))}`;
   if (typeof text !== 'string') throw new UnitError(expected);
-  const m = QUANTITY.exec(text);
+  const m = QUANTITY.exec(normaliseDecimalComma(text)); // "2,5 m" → "2.5 m"; "1,250" throws (ambiguous)
   if (!m) throw new UnitError(expected);
   const value = Number(m[1]);
   if (!Number.isFinite(value)) throw new UnitError(expected);
@@ -217,17 +220,16 @@ export function unitLabel(quantity: Quantity, system: UnitSystem): string {
 }
 
 /**
- * Format a value given in the file unit as display text with its unit, to `digits`
- * significant digits (default 4): formatQuantity(6, 'length', 'US') // "19.69 ft".
- * `null` formats as "—".
+ * Format a value given in the file unit as display text with its unit, by the precision rule
+ * of `number-format.ts` (a result: 3 significant figures unless `digits` says otherwise):
+ * formatQuantity(6, 'length', 'US') // "19.7 ft". `null` formats as "—".
  */
-export function formatQuantity(value: number | null, quantity: Quantity, system: UnitSystem, digits = 4): string {
-  if (value === null) return '—';
+export function formatQuantity(value: number | null, quantity: Quantity, system: UnitSystem, digits: number = PRECISION.result): string {
+  if (value === null) return MISSING;
   if (!(Number.isInteger(digits) && digits >= 1 && digits <= 15)) {
     throw new RangeError(`formatQuantity: digits must be an integer from 1 to 15, got ${digits}`);
   }
-  const shown = Number(toDisplay(value, quantity, system).toPrecision(digits));
-  return `${shown === 0 ? 0 : shown} ${unitLabel(quantity, system)}`;
+  return `${numberText(toDisplay(value, quantity, system), digits)} ${unitLabel(quantity, system)}`;
 }
 
 /** Parse text typed into a field showing `quantity` in `system`; returns the file unit value. */

@@ -24,6 +24,7 @@
  *
  *     validateProject(JSON.parse(text)) // { ok: true, project, warnings } | { ok: false, errors, warnings }
  */
+import { numberText } from './number-format';
 import {
   DEFAULT_DEFLECTION_LIMIT_RATIO,
   DEFAULT_DISTURBANCE,
@@ -38,6 +39,7 @@ import {
   defaultSpecimenId,
 } from './defaults';
 import { migrateV1 } from './migrate';
+import { ELIGIBLE_FIELDS, eligibleField } from './uncertain-fields';
 import type {
   CharacteristicRule,
   CrushingStrength,
@@ -52,6 +54,10 @@ import type {
   RockClass,
   Specimen,
   TensileMethod,
+  SamplingMethodName,
+  Uncertainty,
+  UncertainVariable,
+  VariableDistributionName,
 } from './types';
 
 export interface FieldIssue {
@@ -88,7 +94,7 @@ export function parseProject(input: unknown): { project: Project; warnings: Fiel
 
 /** Keys the schema knows, per object (also the order the file is written in). */
 export const SCHEMA_KEYS = {
-  project: ['schema', 'title', 'description', 'opening', 'loads', 'support', 'layers', 'design'],
+  project: ['schema', 'title', 'description', 'opening', 'loads', 'support', 'layers', 'design', 'uncertainty'],
   opening: ['type', 'span_m', 'length_m', 'ends', 'edges'],
   edges: ['short', 'long'],
   loads: ['surcharge_kPa', 'horizontalStress_MPa'],
@@ -103,7 +109,16 @@ export const SCHEMA_KEYS = {
   hoekBrown: ['mi', 'disturbance'],
   design: ['fsTarget', 'deflectionLimitRatio', 'characteristic', 'basis', 'tensileBasis', 'crushingStrength', 'planeStrainModulus'],
   fsTarget: ['tension', 'crushing', 'sliding'],
+  uncertainty: ['samples', 'seed', 'method', 'acceptablePf', 'variables'],
+  variable: ['path', 'distribution', 'mean', 'cov', 'sd', 'min', 'max', 'mode'],
 } as const;
+
+export const SAMPLING_METHOD_NAMES: readonly SamplingMethodName[] = ['monteCarlo', 'latinHypercube'];
+export const VARIABLE_DISTRIBUTIONS: readonly VariableDistributionName[] = ['normal', 'lognormal', 'uniform', 'triangular'];
+/** Bounds of `uncertainty.samples` (common practice: below 100 the interval is meaningless; 1e6 bounds the run time). */
+export const MIN_SAMPLES = 100;
+export const MAX_SAMPLES = 1_000_000;
+export const MAX_VARIABLES = 100;
 
 export const OPENING_TYPES: readonly OpeningType[] = ['beam', 'slab', 'cantilever', 'intersection'];
 export const END_CONDITIONS: readonly EndCondition[] = ['clamped', 'simple'];
@@ -313,21 +328,44 @@ class Reader {
   }
 }
 
-/** Refuse `__proto__`, `constructor`, `prototype` as own keys anywhere in the input. */
-function scanForbidden(value: unknown, path: string, reader: Reader, seen: Set<object>): void {
-  if (typeof value !== 'object' || value === null || seen.has(value)) return;
-  seen.add(value);
-  const isArray = Array.isArray(value);
-  // own names only, so sparse arrays cost what they hold
-  for (const key of Object.getOwnPropertyNames(value)) {
-    if (isArray && key === 'length') continue;
-    const p = isArray && /^\d+$/.test(key) ? `${path}[${key}]` : child(path, key);
-    if (FORBIDDEN_KEYS.has(key)) {
-      reader.error(p, `forbidden key ${JSON.stringify(key)}`, 'FORBIDDEN_KEY');
-      continue;
+/**
+ * Refuse `__proto__`, `constructor`, `prototype` as own keys anywhere in the input. Iterative
+ * (an explicit stack), so a 100,000-deep object is scanned like a flat one instead of
+ * overflowing the call stack; a path is built only for a key that is refused.
+ */
+function scanForbidden(input: unknown, reader: Reader): void {
+  interface Node { value: object; parent: Node | null; step: string }
+  const pathOf = (node: Node | null, last: string): string => {
+    const steps = [last];
+    for (let n = node; n !== null && n.parent !== null; n = n.parent) steps.push(n.step);
+    let path = '';
+    for (let k = steps.length - 1; k >= 0; k--) path = steps[k].startsWith('[') ? `${path}${steps[k]}` : child(path, steps[k]);
+    return path;
+  };
+  if (typeof input !== 'object' || input === null) return;
+  const seen = new Set<object>([input]);
+  const stack: Node[] = [{ value: input, parent: null, step: '' }];
+  while (stack.length > 0) {
+    const node = stack.pop()!;
+    const isArray = Array.isArray(node.value);
+    const children: Node[] = [];
+    // own names only, so sparse arrays cost what they hold
+    for (const key of Object.getOwnPropertyNames(node.value)) {
+      if (isArray && key === 'length') continue;
+      const step = isArray && /^\d+$/.test(key) ? `[${key}]` : key;
+      if (FORBIDDEN_KEYS.has(key)) {
+        reader.error(pathOf(node, step), `forbidden key ${JSON.stringify(key)}`, 'FORBIDDEN_KEY');
+        continue;
+      }
+      const descriptor = Object.getOwnPropertyDescriptor(node.value, key);
+      const v: unknown = descriptor && 'value' in descriptor ? descriptor.value : undefined;
+      if (typeof v === 'object' && v !== null && !seen.has(v)) {
+        seen.add(v);
+        children.push({ value: v, parent: node, step });
+      }
     }
-    const descriptor = Object.getOwnPropertyDescriptor(value, key);
-    if (descriptor && 'value' in descriptor) scanForbidden(descriptor.value, p, reader, seen);
+    // reversed, so keys are visited (and errors listed) in document order
+    for (let k = children.length - 1; k >= 0; k--) stack.push(children[k]);
   }
 }
 
@@ -391,7 +429,7 @@ export function validateProject(input: unknown): ValidationResult {
     r.error('', `a project must be a JSON object, got ${describeValue(input)}`, 'TYPE');
     return { ok: false, errors: r.errors, warnings: r.warnings };
   }
-  scanForbidden(input, '', r, new Set());
+  scanForbidden(input, r);
   let migratedFrom: 'lamina/1' | undefined;
   if (own(input, 'schema') === 'lamina/1') {
     const migration = migrateV1(input);
@@ -417,11 +455,13 @@ function finish(r: Reader, input: Raw, migratedFrom: 'lamina/1' | undefined): Va
   const support = readSupport(r, input);
   const layers = readLayers(r, input);
   const design = readDesign(r, input);
+  const uncertainty = readUncertainty(r, input, layers);
 
-  if (r.errors.length > 0 || !opening || !loads || !support || !layers || !design || title === undefined || description === undefined) {
+  if (r.errors.length > 0 || uncertainty === undefined || !opening || !loads || !support || !layers || !design || title === undefined || description === undefined) {
     return { ok: false, errors: r.errors, warnings: r.warnings };
   }
   const project: Project = { schema: 'lamina/2', title, opening, loads, support, layers, design };
+  if (own(input, 'uncertainty') !== undefined) project.uncertainty = uncertainty;
   const extra = migratedFrom ? { migratedFrom } : {};
   if (own(input, 'description') !== undefined) {
     // keep key order: description follows title
@@ -601,7 +641,7 @@ function readTensile(r: Reader, layer: Raw, layerPath: string, ucs: number | und
     if (value > 50) r.plausible(child(path, 'value_MPa'), value, ' MPa', null, 50);
     else if (ucs !== undefined && value > ucs / 3) {
       r.warn(child(path, 'value_MPa'),
-        `${value} MPa is implausibly high against ucs_MPa ${ucs} (above ucs/3 = ${+(ucs / 3).toPrecision(4)} MPa); check the value and its unit`,
+        `${value} MPa is implausibly high against ucs_MPa ${ucs} (above ucs/3 = ${numberText(ucs / 3)} MPa); check the value and its unit`,
         'IMPLAUSIBLE');
     }
   }
@@ -639,7 +679,7 @@ function readSpecimen(r: Reader, raw: unknown, path: string, k: number): Specime
     const sigma = (2000 * load) / (Math.PI * diameter * thickness);
     if (sigma > 50) {
       r.warn(child(path, 'peakLoad_kN'),
-        `gives a Brazilian strength of ${+sigma.toPrecision(4)} MPa, implausibly high (above 50 MPa); check the load is in kN and the sizes in mm`,
+        `gives a Brazilian strength of ${numberText(sigma)} MPa, implausibly high (above 50 MPa); check the load is in kN and the sizes in mm`,
         'IMPLAUSIBLE');
     }
   }
@@ -722,4 +762,57 @@ function readDesign(r: Reader, input: Raw): Project['design'] | undefined {
     return undefined;
   }
   return { fsTarget, deflectionLimitRatio: ratio, characteristic, basis, tensileBasis, crushingStrength, planeStrainModulus: planeStrain };
+}
+
+/**
+ * The `uncertainty` block (METHODS §16): null, or sampling settings and variables. Each
+ * variable names an eligible field (model/uncertain-fields.ts) that exists in this project;
+ * cov and sd ≥ 0, min < max. The distributions themselves are built, with the remaining
+ * checks (a spread that fits the physical range), by uncertainty/variables.ts.
+ */
+function readUncertainty(r: Reader, input: Raw, layers: Layer[] | undefined): Uncertainty | null | undefined {
+  const path = 'uncertainty';
+  const v = own(input, 'uncertainty');
+  if (v === undefined || v === null) return null;
+  const o = r.object(input, 'uncertainty', '', 'must be null or an object { samples, seed, method, acceptablePf, variables }');
+  if (!o) return undefined;
+  r.unknownKeys(o, SCHEMA_KEYS.uncertainty, path);
+  const samples = r.number(o, 'samples', path, { unit: '', min: MIN_SAMPLES, max: MAX_SAMPLES }, { default: 20000 });
+  if (typeof samples === 'number' && !Number.isInteger(samples)) r.error(child(path, 'samples'), `must be a whole number, got ${samples}`, 'TYPE');
+  const seed = r.number(o, 'seed', path, { unit: '', min: 0, max: 2 ** 31 - 1 }, { default: 1 });
+  if (typeof seed === 'number' && !Number.isInteger(seed)) r.error(child(path, 'seed'), `must be a whole number, got ${seed}`, 'TYPE');
+  const method = r.enumeration(o, 'method', path, SAMPLING_METHOD_NAMES, 'latinHypercube');
+  const acceptablePf = r.number(o, 'acceptablePf', path, { unit: '', min: 0, minOpen: true, max: 1, maxOpen: true }, { nullable: true });
+  const list = r.array(o, 'variables', path, false, MAX_VARIABLES) ?? [];
+  const variables: UncertainVariable[] = [];
+  list.forEach((raw, j) => {
+    const at = `${path}.variables[${j}]`;
+    if (!isObject(raw)) {
+      r.error(at, `must be an object { path, distribution, mean, cov | sd, min, max }, got ${describeValue(raw)}`, 'TYPE');
+      return;
+    }
+    r.unknownKeys(raw, SCHEMA_KEYS.variable, at);
+    const fieldPath = own(raw, 'path');
+    const eligible = typeof fieldPath === 'string' ? eligibleField(fieldPath) : null;
+    if (typeof fieldPath !== 'string') r.error(child(at, 'path'), `required, must be a field path such as "layers[0].thickness_m", got ${describeValue(fieldPath)}`, 'TYPE');
+    else if (eligible === null) r.error(child(at, 'path'), `"${fieldPath}" cannot be sampled; eligible: ${ELIGIBLE_FIELDS.map((f) => f.pattern).join(', ')}`, 'PATH');
+    else {
+      const index = /^layers\[(\d+)\]/.exec(fieldPath);
+      if (index && layers && Number(index[1]) >= layers.length) r.error(child(at, 'path'), `"${fieldPath}" does not exist: the project has ${layers.length} layer(s)`, 'PATH');
+      if (eligible.pattern === 'loads.support_kPa') r.error(child(at, 'path'), `"${fieldPath}" is the lamina/1 name: use "support.standing_kPa"`, 'PATH');
+    }
+    const distribution = r.enumeration(raw, 'distribution', at, VARIABLE_DISTRIBUTIONS, undefined);
+    const numbers: Partial<Record<'mean' | 'cov' | 'sd' | 'min' | 'max' | 'mode', number>> = {};
+    for (const key of ['mean', 'cov', 'sd', 'min', 'max', 'mode'] as const) {
+      const rule: NumberRule = key === 'cov' || key === 'sd' ? { unit: '', min: 0 } : { unit: '' };
+      const n = r.number(raw, key, at, rule, { nullable: true });
+      if (typeof n === 'number') numbers[key] = n;
+    }
+    if (numbers.min !== undefined && numbers.max !== undefined && !(numbers.min < numbers.max)) {
+      r.error(child(at, 'max'), `must be greater than min (${numbers.min}), got ${numbers.max}`, 'RANGE');
+    }
+    if (typeof fieldPath === 'string' && distribution !== undefined) variables.push({ path: fieldPath, distribution, ...numbers });
+  });
+  if (typeof samples !== 'number' || typeof seed !== 'number' || method === undefined || acceptablePf === undefined) return undefined;
+  return { samples, seed, method, acceptablePf, variables };
 }

@@ -110,6 +110,7 @@ export type SectionId =
   | 'trace'
   | 'assumptions'
   | 'charts'
+  | 'uncertainty'
   | 'closing';
 
 export interface Section {

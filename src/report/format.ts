@@ -3,30 +3,35 @@
  * (src/model/units). Values come in the report's practical SI units (m, kPa, MPa, GPa, kN/m³,
  * mm, kN), the units of the project file and of the Report.
  *
- *     quantityText(6, 'length', 'US')   // "19.69 ft"
+ *     quantityText(6, 'length', 'US')   // "19.7 ft"
  *     quantityText(null, 'stress', 'SI') // "—"
  */
 import { toDisplay, unitLabel, type Quantity, type UnitSystem } from '../model/units';
-import { MISSING, numberText } from './number-text';
+import { MISSING, PRECISION, numberText } from './number-text';
+import { inputSignificant } from '../model/number-format';
 
-export function quantityText(value: number | null | undefined, quantity: Quantity, units: UnitSystem, digits = 4): string {
+export function quantityText(value: number | null | undefined, quantity: Quantity, units: UnitSystem, digits: number = PRECISION.result): string {
   if (value === null || value === undefined || !Number.isFinite(value)) return MISSING;
   return `${numberText(toDisplay(value, quantity, units), digits)} ${unitLabel(quantity, units)}`;
 }
 
 /** The number alone in the display unit (for table cells whose column title gives the unit). */
-export function displayNumber(value: number | null | undefined, quantity: Quantity, units: UnitSystem, digits = 4): string {
+export function displayNumber(value: number | null | undefined, quantity: Quantity, units: UnitSystem, digits: number = PRECISION.result): string {
   if (value === null || value === undefined || !Number.isFinite(value)) return MISSING;
   return numberText(toDisplay(value, quantity, units), digits);
 }
+
+/** An input with its unit: as stored in SI, to 4 significant figures when converted to US. */
+export const inputQuantityText = (value: number | null | undefined, quantity: Quantity, units: UnitSystem): string =>
+  quantityText(value, quantity, units, inputSignificant(units !== 'SI'));
 
 /** "Span (ft)" — a column or axis title with its display unit. */
 export function titleWithUnit(title: string, quantity: Quantity, units: UnitSystem): string {
   return `${title} (${unitLabel(quantity, units)})`;
 }
 
-/** Factor of safety text (dimensionless), 3 significant digits. */
-export const fsText = (fs: number | null | undefined): string => numberText(fs, 3);
+/** Factor of safety text (dimensionless), a result by the precision rule. */
+export const fsText = (fs: number | null | undefined): string => numberText(fs);
 
 /** Which display quantity a trace unit belongs to (null: show as traced only). */
 export function quantityOfUnit(unit: string): Quantity | null {

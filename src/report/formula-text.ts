@@ -12,7 +12,7 @@
  * letters (`sigma_h` → "σh"). Throws a SyntaxError for an expression mathjs cannot parse.
  */
 import { create, parseDependencies, type MathNode } from 'mathjs';
-import { numberText, superscript } from './number-text';
+import { PRECISION, numberText, superscript } from './number-text';
 import { symbolText } from './symbol-text';
 import { withUnit } from './unit-text';
 
@@ -72,7 +72,7 @@ function render(node: AnyNode, ctx: RenderContext, role: Role): string {
       const name = node.name ?? '';
       const given = ctx.values?.[name];
       if (!given) return symbolText(name);
-      const text = withUnit(numberText(given.value, 6), given.unit);
+      const text = withUnit(numberText(given.value, PRECISION.trace), given.unit);
       const hasUnit = text.includes(' ') || /[°%]$/.test(text);
       const negative = given.value < 0;
       if ((role === 'powBase' && (hasUnit || negative)) || (role === 'divisor' && hasUnit) || (negative && role !== 'top' && role !== 'argument')) {

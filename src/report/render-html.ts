@@ -1,6 +1,7 @@
 /**
  * Renders the report model as ONE self-contained HTML file: inline CSS and SVG, no scripts,
- * no external requests, print CSS (A4 or Letter via `@page`, each main section on a new page,
+ * no external requests (and a Content-Security-Policy that forbids them, `REPORT_CSP`),
+ * print CSS (A4 or Letter via `@page`, each main section on a new page,
  * table headers repeated, rows kept whole). Every piece of user text is escaped; chart SVG comes
  * from src/report/charts, whose builders escape their own text.
  *
@@ -120,6 +121,15 @@ export function renderHtmlBody(doc: ReportDocument): string {
   return `<article class="lamina-report" lang="en">\n<h1>${escapeHtml(doc.title)}</h1>\n${doc.sections.map(sectionHtml).join('\n')}\n</article>`;
 }
 
+/**
+ * Content-Security-Policy of the HTML report: it needs nothing but its own inline CSS (and
+ * data: images, should a chart ever embed one), so everything else — scripts, frames, fonts,
+ * network requests, forms, plugins — is refused by the browser even if some text slipped past
+ * the escaping. W3C Content Security Policy Level 3; a `<meta>` policy must come before any
+ * content it governs.
+ */
+export const REPORT_CSP = "default-src 'none'; style-src 'unsafe-inline'; img-src data:; base-uri 'none'; form-action 'none'";
+
 export function renderHtml(doc: ReportDocument, options: { paper?: Paper } = {}): string {
   const paper = options.paper ?? 'A4';
   if (paper !== 'A4' && paper !== 'Letter') throw new RangeError(`paper must be "A4" or "Letter", got ${JSON.stringify(paper)}`);
@@ -128,6 +138,7 @@ export function renderHtml(doc: ReportDocument, options: { paper?: Paper } = {})
     '<html lang="en">',
     '<head>',
     '<meta charset="utf-8">',
+    `<meta http-equiv="Content-Security-Policy" content="${REPORT_CSP}">`,
     '<meta name="viewport" content="width=device-width, initial-scale=1">',
     `<meta name="generator" content="Lamina ${escapeHtml(doc.meta.version)}">`,
     `<title>${escapeHtml(doc.title)}</title>`,

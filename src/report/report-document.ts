@@ -22,6 +22,7 @@ import { inputsSection } from './sections/inputs';
 import { strengthSection } from './sections/strength';
 import { traceSection } from './sections/trace';
 import { verdictSection } from './sections/verdict';
+import { uncertaintySection } from './sections/uncertainty';
 
 export interface ReportInput {
   project: Project;
@@ -66,6 +67,7 @@ export function buildReportDocument(input: ReportInput): ReportDocument {
       traceSection(ctx),
       assumptionsSection(ctx),
       chartsSection(ctx),
+      ...[uncertaintySection(ctx)].filter((s) => s !== null),
       closingSection(),
     ],
   };

@@ -2,8 +2,10 @@
  * CSV exports (d3-dsv `csvFormat`, RFC 4180 quoting): the per-layer check results, one row per
  * layer × mode, and the FS-versus-span curve. Units are in the column names; numbers are
  * written at full precision in the chosen unit system; a value that does not apply is an empty
- * cell. The caution is not written into the CSV (a data table must parse as one); it is in
- * every report that shows these numbers.
+ * cell. Text cells that a spreadsheet would evaluate (`=…`, `+…`, `-…`, `@…`) get a leading
+ * apostrophe (`csv-cell.ts`, OWASP "CSV Injection"); numbers are never touched. The caution is
+ * not written into the CSV (a data table must parse as one); it is in every report that shows
+ * these numbers.
  *
  *     resultsCsv(analysis, 'SI', project)  // "layer,layer_name,mode,demand_MPa,…"
  *     spanCurveCsv(curve, 'US')            // "span_ft,fs_tension,…"
@@ -13,6 +15,7 @@ import type { Analysis, SpanCurve } from '../analysis/types';
 import type { Mode, Project } from '../model/types';
 import { displayUnit, fileUnit, toDisplay, unitLabel, type UnitSystem } from '../model/units';
 import { MODES, STATUS_SYMBOL, STATUS_WORD } from '../analysis/check-labels';
+import { csvSafeRow } from './csv-cell';
 
 /** In the display unit; when that is the file unit the value is written untouched (exact round trip). */
 function display(value: number | null, quantity: 'stress' | 'length', units: UnitSystem): number | '' {
@@ -32,7 +35,7 @@ export function resultsCsv(analysis: Analysis, units: UnitSystem, _project?: Pro
     'fs', 'target', 'fs_over_target', 'counts', 'status', 'symbol', 'governing', 'reason', 'note',
   ];
   const g = analysis.report.governing;
-  const rows = analysis.report.checks.map((r) => ({
+  const rows = analysis.report.checks.map((r) => csvSafeRow({
     layer: r.layerIndex + 1,
     layer_name: r.layer,
     mode: r.mode,
@@ -60,7 +63,7 @@ export function spanCurveCsv(curve: SpanCurve, units: UnitSystem): string {
     const row: Record<string, number | ''> = { [span]: display(s, 'length', units) };
     for (const m of MODES as Mode[]) row[`fs_${m}`] = plain(curve.fs[m]?.[i] ?? null);
     for (const m of MODES as Mode[]) row[`target_${m}`] = curve.targets[m];
-    return row;
+    return csvSafeRow(row);
   });
   return `${csvFormat(rows, columns)}\n`;
 }

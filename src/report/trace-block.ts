@@ -8,7 +8,7 @@ import type { UnitSystem } from '../model/units';
 import type { FormulaBlock } from './document-types';
 import { quantityOfUnit, quantityText } from './format';
 import { formulaSymbols, formulaText, substitutedText } from './formula-text';
-import { numberText } from './number-text';
+import { PRECISION, numberText } from './number-text';
 import { symbolText } from './symbol-text';
 import { withUnit } from './unit-text';
 
@@ -29,9 +29,9 @@ export function traceBlock(entry: TraceEntry, units: UnitSystem): FormulaBlock {
   const names = [...order.filter((n) => n in entry.values), ...Object.keys(entry.values).filter((n) => !order.includes(n))];
   const values = names.map((n) => {
     const v = entry.values[n] as { value: number; unit: string };
-    return `${symbolText(n)} = ${withUnit(numberText(v.value, 6), v.unit)}`;
+    return `${symbolText(n)} = ${withUnit(numberText(v.value, PRECISION.trace), v.unit)}`;
   });
-  let result = withUnit(numberText(entry.result, 6), entry.unit);
+  let result = withUnit(numberText(entry.result, PRECISION.trace), entry.unit);
   const quantity = quantityOfUnit(entry.unit);
   if (units === 'US' && quantity !== null) result += ` (= ${quantityText(entry.result, quantity, 'US')})`;
   const block: FormulaBlock = {

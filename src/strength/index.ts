@@ -1,6 +1,6 @@
 export { brazilianTensileStrength } from './brazilian';
-export { reduceSpecimens, REASON_INVALID, REASON_TOO_THICK } from './specimens';
-export type { SpecimenSI, SpecimenReduction, AcceptedSpecimen, RejectedSpecimen, SpecimenWarning } from './specimens';
+export { reduceSpecimens, specimenOutcomes, REASON_INVALID, REASON_TOO_THICK } from './specimens';
+export type { SpecimenSI, SpecimenReduction, AcceptedSpecimen, RejectedSpecimen, SpecimenWarning, SpecimenOutcomes } from './specimens';
 export { directFactor } from './direct-factor';
 export type { RockClassName } from './direct-factor';
 export { summarise, knLower5, characteristicValue, studentTQuantile } from './statistics';

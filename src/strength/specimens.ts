@@ -96,3 +96,28 @@ export function reduceSpecimens(specimens: readonly SpecimenSI[]): SpecimenReduc
   });
   return result;
 }
+
+/** The reduction of each input specimen, looked up by its index. */
+export interface SpecimenOutcomes {
+  accepted: ReadonlyArray<AcceptedSpecimen | undefined>;
+  rejected: ReadonlyArray<RejectedSpecimen | undefined>;
+  warnings: ReadonlyArray<readonly SpecimenWarning[]>;
+}
+
+/**
+ * Index a reduction by specimen position in one pass, so a per-specimen table costs O(n)
+ * rather than a search of the whole reduction per specimen (O(n²): 100,000 discs took 17 s).
+ *     const o = specimenOutcomes(reduceSpecimens(list), list.length);
+ *     o.accepted[3]?.brazilian; o.rejected[3]?.reason; o.warnings[3]
+ */
+export function specimenOutcomes(reduction: SpecimenReduction | null | undefined, count: number): SpecimenOutcomes {
+  const accepted: (AcceptedSpecimen | undefined)[] = new Array(count).fill(undefined);
+  const rejected: (RejectedSpecimen | undefined)[] = new Array(count).fill(undefined);
+  const warnings: SpecimenWarning[][] = Array.from({ length: count }, () => []);
+  if (reduction) {
+    for (const a of reduction.accepted) if (a.index < count && accepted[a.index] === undefined) accepted[a.index] = a;
+    for (const r of reduction.rejected) if (r.index < count && rejected[r.index] === undefined) rejected[r.index] = r;
+    for (const w of reduction.warnings) if (w.index < count) warnings[w.index].push(w);
+  }
+  return { accepted, rejected, warnings };
+}

@@ -17,3 +17,5 @@ export { form } from './form';
 export type { FormOptions, FormResult } from './form';
 export { ELIGIBLE_FIELDS, eligibleField, resolveVariables, projectValueAt, applySample, brazilianVariable, MIN_SPECIMENS_FOR_VARIABLE } from './variables';
 export type { VariableSpec, Variable, VariablesResult, EligibleField } from './variables';
+export { runUncertainty, uncertaintyVariables } from './run';
+export type { UncertaintyRunOptions } from './run';

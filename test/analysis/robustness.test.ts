@@ -5,7 +5,9 @@
 import { describe, it, expect } from 'vitest';
 import { analyse } from '../../src/analysis';
 import { solvePlateRitz } from '../../src/mechanics/plate-ritz';
-import { validateProject } from '../../src/model/validate';
+import { NUMBERS, validateProject } from '../../src/model/validate';
+import { reduceSpecimens } from '../../src/strength/specimens';
+import { characteristicValue } from '../../src/strength/statistics';
 import type { Project } from '../../src/model/types';
 import { nonFinite, reportViolations } from '../fuzz/contract';
 import { designExample } from './fixtures';
@@ -179,5 +181,25 @@ describe('issue 14 item 12: the work behind a many-layer slab', () => {
     // α = 12(1 − ν²)·w D/(q a⁴) with w independent of ν: the layers' α scale exactly with 1 − ν²
     const ratio = r.layers[0].plate!.alpha / (1 - many.layers[0].poisson ** 2);
     for (const i of [7, 33, 39]) expect(r.layers[i].plate!.alpha / (1 - many.layers[i].poisson ** 2)).toBeCloseTo(ratio, 12);
+  });
+});
+
+describe('issue 14 item 3, the lab reduction: specimens at the bounds give finite strengths', () => {
+  it('discs of 1 and 1000 mm with loads of 0.001 and 10 000 kN (the NUMBERS bounds) reduce to finite, positive Brazilian strengths and statistics', () => {
+    const { specimenSize, peakLoad } = NUMBERS;
+    const discs = [];
+    for (const d of [specimenSize.min, specimenSize.max]) for (const p of [peakLoad.min, peakLoad.max]) {
+      discs.push({ id: `d${d}p${p}`, diameter: d / 1e3, thickness: Math.min(d, specimenSize.min) / 1e3, peakLoad: p * 1e3, valid: true });
+    }
+    const red = reduceSpecimens(discs);
+    expect(red.accepted).toHaveLength(4);
+    // σt = 2P/(πDL) (ISRM 1978): 1 N on a 1000 mm × 1 mm disc is the smallest, 10 000 kN on 1 mm × 1 mm the largest
+    expect(Math.min(...red.accepted.map((a) => a.brazilian))).toBeCloseTo((2 * 1) / (Math.PI * 1 * 1e-3), 6);
+    expect(Math.max(...red.accepted.map((a) => a.brazilian))).toBeCloseTo((2 * 1e7) / (Math.PI * 1e-3 * 1e-3), -3);
+    for (const rule of ['mean', 'lower5'] as const) {
+      const c = characteristicValue(red.accepted.map((a) => a.brazilian), rule);
+      expect(nonFinite(c)).toEqual([]);
+      expect(c.value).toBeGreaterThanOrEqual(0);
+    }
   });
 });

@@ -7,6 +7,7 @@ import { benchPlate } from './plate.bench';
 import { benchAnalysis } from './analysis.bench';
 import { benchCli } from './cli.bench';
 import { benchWorstCase } from './worst-case.bench';
+import { benchLab } from './lab.bench';
 import { benchUncertainty } from './uncertainty.bench';
 import type { BenchResult } from './types';
 
@@ -16,6 +17,7 @@ const groups: [string, () => Promise<BenchResult[]>][] = [
   ['analysis', benchAnalysis],
   ['command line', benchCli],
   ['worst case (fuzz set)', () => benchWorstCase()],
+  ['lab', benchLab],
   ['uncertainty', benchUncertainty],
 ];
 

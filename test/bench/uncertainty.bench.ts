@@ -8,7 +8,12 @@
  * Target: ≤ 3 µs a sample, so that the full-analysis run (about 10 µs a sample for a 3-layer
  * beam, issue 11) is dominated by the analysis itself.
  */
+import { readFileSync } from 'node:fs';
 import { pathToFileURL } from 'node:url';
+import { evaluate } from '../../src/analysis/evaluate';
+import { projectToSI } from '../../src/analysis/inputs';
+import { parseProject } from '../../src/model/validate';
+import { runUncertainty } from '../../src/uncertainty/run';
 import { distribution } from '../../src/uncertainty/distributions';
 import { runMonteCarlo } from '../../src/uncertainty/monte-carlo';
 import type { BenchResult } from './types';
@@ -58,6 +63,7 @@ export async function benchUncertainty(): Promise<BenchResult[]> {
   if (sink === -1) console.log(sink);
   const perSample = ((layerMs - loopMs) * 1e3) / N;
   return [
+    ...benchAnalysisSamples(),
     {
       name: `Monte Carlo, 1e5 Latin hypercube samples × 7 variables, closed-form FS (${perSample.toFixed(2)} µs a sample over the loop)`,
       median_us: layerMs * 1e3,
@@ -67,6 +73,62 @@ export async function benchUncertainty(): Promise<BenchResult[]> {
       pass: perSample <= 3,
     },
   ];
+}
+
+/** min and median of `runs` timed calls after one warm-up, ms. */
+function timeMinMedian(fn: () => void, runs: number): { min: number; median: number } {
+  fn();
+  const times: number[] = [];
+  for (let k = 0; k < runs; k++) {
+    const t0 = performance.now();
+    fn();
+    times.push(performance.now() - t0);
+  }
+  return { min: Math.min(...times), median: median(times) };
+}
+
+/**
+ * The full per-sample path (issue 11): `runUncertainty` on the 3-layer coal-room beam preset,
+ * 4 variables (thickness, unit weight and tensile value of the immediate roof, modulus of the
+ * second bed), no FORM and no span points, against a plain loop of the same number of
+ * `evaluate` calls on the fixed SI project (strength chains, loads, beams, voussoirs; no check
+ * table, sampling or statistics). Target of the issue: 1e5 samples ≤ 1 s on one core (≈ 10 µs
+ * a sample); pass here is the ratio ≤ 1.5 (the sampling path adds at most half of the evaluate
+ * cost), since the absolute time depends on the machine. LAMINA_BENCH_SAMPLES lowers N for a
+ * quick look.
+ */
+function benchAnalysisSamples(): BenchResult[] {
+  const n = Number(process.env.LAMINA_BENCH_SAMPLES ?? 100_000);
+  const raw = JSON.parse(readFileSync(new URL('../../presets/coal-room-shale.lamina.json', import.meta.url), 'utf8'));
+  raw.uncertainty = {
+    samples: n, seed: 1, method: 'latinHypercube',
+    variables: [
+      { path: 'layers[0].thickness_m', distribution: 'normal', cov: 0.1 },
+      { path: 'layers[0].unitWeight_kNm3', distribution: 'normal', cov: 0.05 },
+      { path: 'layers[0].tensile.value_MPa', distribution: 'lognormal', mean: 4, cov: 0.3 },
+      { path: 'layers[1].youngModulus_GPa', distribution: 'lognormal', cov: 0.2 },
+    ],
+  };
+  const project = parseProject(raw).project;
+  const si = projectToSI(project);
+  let sink = 0;
+  const run = timeMinMedian(() => {
+    sink += runUncertainty(project, { spanPoints: 0, form: false }).pf;
+  }, 5);
+  const loop = timeMinMedian(() => {
+    for (let i = 0; i < n; i++) sink += evaluate(si).layers.length;
+  }, 5);
+  if (sink === -1) console.log(sink);
+  const ratio = run.median / loop.median;
+  return [{
+    name: `Uncertainty run, ${n} samples of the 3-layer coal-room beam, 4 variables (${((run.median * 1e3) / n).toFixed(1)} µs a sample; issue target 1e5 in ≤ 1 s: ${run.median * (1e5 / n) <= 1000 ? 'met' : 'not met'} on this machine)`,
+    median_us: run.median * 1e3,
+    min_us: run.min * 1e3,
+    baseline: `plain evaluate loop ${loop.median.toFixed(0)} ms (min ${loop.min.toFixed(0)} ms)`,
+    ratio,
+    target: 'ratio ≤ 1.5 against the plain evaluate loop',
+    pass: ratio <= 1.5,
+  }];
 }
 
 if (import.meta.url === pathToFileURL(process.argv[1] ?? '').href) {

@@ -96,7 +96,7 @@ describe('parseQuantity — conversions checked against METHODS §13', () => {
 
   it.each([
     '', '   ', 'abc', 'm', '3 MPa 5', '1+2 m', '2*3 m', '3 m + 4 m', 'sqrt(4) m', 'eval("1") m',
-    '1,5 m', '3 furlongs', '1e400 m', '6 m;', 'Infinity m', 'NaN',
+    '1,5,0 m', '3 furlongs', '1e400 m', '6 m;', 'Infinity m', 'NaN',
   ])('unparsable or unsafe text %j throws UnitError (text is never evaluated)', (text) => {
     expect(() => parseQuantity(text, 'm')).toThrow(UnitError);
   });
@@ -170,9 +170,10 @@ describe('display unit systems', () => {
     expect(unitLabel('length', 'SI')).toBe('m');
   });
 
-  it('formatQuantity(6, "length", "US") is "19.69 ft" — 6/0.3048 = 19.685 (METHODS §13)', () => {
-    expect(formatQuantity(6, 'length', 'US')).toBe('19.69 ft');
-    expect(formatQuantity(25, 'unitWeight', 'US')).toBe('159.1 lbf/ft³'); // 25/0.157087 = 159.15
+  it('formatQuantity(6, "length", "US") is "19.7 ft" — 6/0.3048 = 19.685, a result to 3 significant figures (METHODS §13)', () => {
+    expect(formatQuantity(6, 'length', 'US')).toBe('19.7 ft');
+    expect(formatQuantity(6, 'length', 'US', 4)).toBe('19.69 ft');
+    expect(formatQuantity(25, 'unitWeight', 'US')).toBe('159 lbf/ft³'); // 25/0.157087 = 159.15
     expect(formatQuantity(3, 'stress', 'US', 3)).toBe('435 psi'); // 3 × 145.04 = 435.1
     expect(formatQuantity(0.45, 'length', 'SI')).toBe('0.45 m');
     expect(formatQuantity(null, 'length', 'SI')).toBe('—');

@@ -471,10 +471,10 @@ describe('validateProject — warnings (accepted, flagged)', () => {
     expect(w[0].message).toBe('layers[0].youngModulus_GPa: 0.05 GPa is implausibly low (below 0.1 GPa); check the value and its unit');
   });
 
-  it('the tensile/ucs warning names ucs/3: 14 MPa against ucs 40 MPa (40/3 = 13.33)', () => {
+  it('the tensile/ucs warning names ucs/3: 14 MPa against ucs 40 MPa (40/3 = 13.33, shown as 13.3 by the precision rule)', () => {
     const w = warningsOf(mutate((p) => { p.layers[0].tensile.value_MPa = 14; }));
     expect(w[0].message).toBe(
-      'layers[0].tensile.value_MPa: 14 MPa is implausibly high against ucs_MPa 40 (above ucs/3 = 13.33 MPa); check the value and its unit',
+      'layers[0].tensile.value_MPa: 14 MPa is implausibly high against ucs_MPa 40 (above ucs/3 = 13.3 MPa); check the value and its unit',
     );
   });
 

@@ -35,7 +35,7 @@ describe('verdict sentences', () => {
   });
   it('the span sentence is in the display unit: ft in US units (1 ft = 0.3048 m, METHODS §13)', () => {
     const c = presetCase('coal-room-shale');
-    expect(verdict(c, 'US')).toMatch(/current span of 19\.7 ft/); // 6 m / 0.3048 = 19.685 ft, 3 digits
+    expect(verdict(c, 'US')).toMatch(/current span of 19\.7 ft/); // 6 m / 0.3048 = 19.685 ft, 3 significant figures
     expect(verdict(c, 'SI')).toMatch(/current span of 6 m/);
   });
 });

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { reduceSpecimens } from '../../src/strength/specimens';
+import { reduceSpecimens, specimenOutcomes } from '../../src/strength/specimens';
 import type { SpecimenSI } from '../../src/strength/specimens';
 import { expectClose } from '../helpers/expect-close';
 
@@ -54,5 +54,21 @@ describe('reduceSpecimens', () => {
     expect(reduceSpecimens([])).toEqual({ accepted: [], rejected: [], warnings: [] });
     expect(() => reduceSpecimens([disc('x', 54, 27, 0)])).toThrow(RangeError);
     expect(() => reduceSpecimens([disc('x', Number.NaN, 27, 5)])).toThrow(/diameter/);
+  });
+});
+
+describe('specimenOutcomes (linear-time lookup, issue 14 item 10)', () => {
+  it('gives each specimen the same outcome as searching the reduction for its index', () => {
+    // invalid, too thick, small diameter (54 mm ISRM minimum, from memory), L/D outside 0.2–0.75 (ASTM D3967)
+    const list = [disc('a', 54, 27, 10), disc('b', 54, 27, 10, false), disc('c', 40, 45, 10), disc('d', 42, 8, 5), disc('e', 54, 30, 9)];
+    const red = reduceSpecimens(list);
+    const o = specimenOutcomes(red, list.length);
+    list.forEach((_, k) => {
+      expect(o.accepted[k]).toBe(red.accepted.find((a) => a.index === k));
+      expect(o.rejected[k]).toBe(red.rejected.find((r) => r.index === k));
+      expect(o.warnings[k]).toEqual(red.warnings.filter((w) => w.index === k));
+    });
+    expect(o.warnings[3].map((w) => w.code).sort()).toEqual(['LD_RATIO', 'SMALL_DIAMETER']);
+    expect(specimenOutcomes(null, 2)).toEqual({ accepted: [undefined, undefined], rejected: [undefined, undefined], warnings: [[], []] });
   });
 });

@@ -17,4 +17,17 @@ describe('index.html', () => {
     expect(html).not.toMatch(/(src|href)=["']https?:/);
     expect(html).not.toMatch(/@import|@font-face/);
   });
+
+  it('carries a Content-Security-Policy before any script: scripts from its own origin only, no eval, no frames or plugins (W3C CSP Level 3)', () => {
+    const meta = /<meta\s+http-equiv="Content-Security-Policy"\s+content="([^"]+)"/.exec(html);
+    expect(meta).not.toBeNull();
+    const policy = new Map(meta![1].split(';').map((d) => d.trim().split(/\s+/)).map(([name, ...values]) => [name, values]));
+    expect(policy.get('script-src')).toEqual(["'self'"]);
+    expect(policy.get('default-src')).toEqual(["'self'"]);
+    expect(policy.get('object-src')).toEqual(["'none'"]);
+    expect(policy.get('frame-src')).toEqual(["'none'"]);
+    expect(meta![1]).not.toMatch(/unsafe-eval|https?:|\*/);
+    expect(html.indexOf('Content-Security-Policy')).toBeLessThan(html.indexOf('<script'));
+  });
 });
+

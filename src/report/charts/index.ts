@@ -8,3 +8,5 @@ export { fsSpanSvg, MODE_STYLE, type FsSpanOptions } from './fs-span';
 export { slabContourSvg, type SlabContourOptions } from './slab-contour';
 export { designChartSvg, type DesignChartOptions } from './design-chart';
 export { escapeXml, PALETTE } from './svg';
+export { fsHistogramSvg, type FsHistogramOptions } from './fs-histogram';
+export { sensitivitySvg } from './sensitivity';

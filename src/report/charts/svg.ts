@@ -6,6 +6,7 @@
  */
 import type { ScaleContinuousNumeric } from 'd3';
 import { toDisplay, unitLabel, type Quantity, type UnitSystem } from '../../model/units';
+import { numberText } from '../../model/number-format';
 
 /** Escapes text for XML text nodes and attribute values: & < > " '. */
 export function escapeXml(text: unknown): string {
@@ -28,18 +29,12 @@ export function num(value: number): string {
 }
 
 /**
- * A value for a text label: ≥ 100 → whole number, ≥ 1 → at most 2 decimals, below 1 → 3
- * significant figures (so 0.00520 stays readable). Trailing zeros are dropped.
+ * A value for a text label, by the one precision rule (model/number-format.ts): 3 significant
+ * figures, whole-number digits kept, trailing zeros dropped, the true minus sign.
  */
 export function formatValue(value: number): string {
   if (!Number.isFinite(value)) return '–';
-  const a = Math.abs(value);
-  let text: string;
-  if (a === 0) text = '0';
-  else if (a >= 100) text = value.toFixed(0);
-  else if (a >= 1) text = String(Number(value.toFixed(2)));
-  else text = String(Number(value.toPrecision(3)));
-  return text === '-0' ? '0' : text.replace('-', '−');
+  return numberText(value);
 }
 
 /** Okabe–Ito colour-blind safe palette (Okabe & Ito 2008), used by every chart. */

@@ -1,6 +1,9 @@
 /** Section 1: header (title, date, version, file hash, units) and the caution. */
 import { CAUTION, CAUTION_TITLE } from '../../model/caution';
-import type { Section } from '../document-types';
+import type { Block, Section } from '../document-types';
+import { demoLeftover, demoLeftoverText } from '../../model/demo-leftover';
+import { isNewProject, pendingDefaults } from '../../model/new-project';
+import { inputQuantityText } from '../format';
 import type { SectionContext } from './context';
 
 export const UNIT_SYSTEM_TEXT = {
@@ -22,11 +25,23 @@ export function headerSection(ctx: SectionContext, meta: { date: string; version
   return {
     id: 'header',
     title: 'Project and report details',
-    blocks: [
-      { kind: 'callout', tone: 'caution', title: CAUTION_TITLE, text: CAUTION },
-      { kind: 'keyValue', items },
-    ],
+    blocks: [{ kind: 'callout', tone: 'caution', title: CAUTION_TITLE, text: CAUTION }, ...provenanceWarnings(ctx), { kind: 'keyValue', items }],
   };
+}
+
+/** Demo text left in a changed project, and placeholders of a new project still in use. */
+function provenanceWarnings(ctx: SectionContext): Block[] {
+  const blocks: Block[] = [];
+  const leftover = demoLeftover(ctx.project);
+  if (leftover) blocks.push({ kind: 'callout', tone: 'warning', title: 'Demo text in a changed project', text: demoLeftoverText(leftover) });
+  if (isNewProject(ctx.project)) {
+    const left = pendingDefaults(ctx.project).filter((v) => v.kind === 'placeholder');
+    if (left.length > 0) {
+      const list = left.map((v) => `${v.label} ${typeof v.value === 'number' && v.quantity ? inputQuantityText(v.value, v.quantity, ctx.units) : String(v.value)}`);
+      blocks.push({ kind: 'callout', tone: 'warning', title: 'Placeholder values still in use', text: `This new project still holds Lamina’s placeholders, not site data: ${list.join('; ')}.` });
+    }
+  }
+  return blocks;
 }
 
 export function closingSection(): Section {

@@ -1,8 +1,8 @@
 /** Section 3: the inputs — opening, loads, strata, lab specimens, targets and options. */
 import type { Block, Cell, Section } from '../document-types';
-import { quantityText, titleWithUnit } from '../format';
-import { numberText } from '../number-text';
-import { nCell, qCell, textCell } from './cells';
+import { inputQuantityText, quantityText, titleWithUnit } from '../format';
+import { PRECISION, numberText } from '../number-text';
+import { inCell, nCell, qCell, textCell } from './cells';
 import type { SectionContext } from './context';
 
 const OPENING_TEXT = {
@@ -29,19 +29,19 @@ export function inputsSection(ctx: SectionContext): Section {
     kind: 'keyValue',
     items: [
       { key: 'Opening', value: OPENING_TEXT[o.type] },
-      { key: o.type === 'cantilever' ? 'Overhang length' : o.type === 'slab' ? 'Span (short side)' : o.type === 'intersection' ? 'Entry width w1' : 'Span', value: quantityText(o.span_m, 'length', units) },
-      ...(o.type === 'slab' ? [{ key: 'Length (long side)', value: quantityText(o.length_m, 'length', units) }] : []),
+      { key: o.type === 'cantilever' ? 'Overhang length' : o.type === 'slab' ? 'Span (short side)' : o.type === 'intersection' ? 'Entry width w1' : 'Span', value: inputQuantityText(o.span_m, 'length', units) },
+      ...(o.type === 'slab' ? [{ key: 'Length (long side)', value: inputQuantityText(o.length_m, 'length', units) }] : []),
       ...(o.type === 'intersection'
         ? [
-            { key: 'Entry width w2', value: quantityText(o.length_m, 'length', units) },
+            { key: 'Entry width w2', value: inputQuantityText(o.length_m, 'length', units) },
             { key: 'Design span (diagonal √(w1² + w2²))', value: quantityText(analysis.report.opening.designSpan_m, 'length', units) },
           ]
         : []),
       { key: 'Ends', value: o.type === 'cantilever' ? 'fixed root, free tip' : o.ends === 'clamped' ? 'clamped (built-in)' : 'simply supported' },
       ...(o.type === 'slab' && o.edges ? [{ key: 'Slab edges', value: `short edges ${o.edges.short}, long edges ${o.edges.long}` }] : []),
-      { key: 'Surcharge on top of the analysed strata', value: quantityText(project.loads.surcharge_kPa, 'pressure', units) },
-      { key: 'Standing support (upward, capped at the load it relieves)', value: quantityText(project.support.standing_kPa, 'pressure', units) },
-      { key: 'Horizontal stress along the span (compression +)', value: quantityText(project.loads.horizontalStress_MPa, 'stress', units) },
+      { key: 'Surcharge on top of the analysed strata', value: inputQuantityText(project.loads.surcharge_kPa, 'pressure', units) },
+      { key: 'Standing support (upward, capped at the load it relieves)', value: inputQuantityText(project.support.standing_kPa, 'pressure', units) },
+      { key: 'Horizontal stress along the span (compression +)', value: inputQuantityText(project.loads.horizontalStress_MPa, 'stress', units) },
     ],
   });
 
@@ -60,9 +60,9 @@ export function inputsSection(ctx: SectionContext): Section {
       { title: 'Rock class' },
     ],
     rows: project.layers.map((l, i): Cell[] => [
-      nCell(i + 1, 3), textCell(l.name), qCell(l.thickness_m, 'length', units), qCell(l.unitWeight_kNm3, 'unitWeight', units),
-      qCell(l.youngModulus_GPa, 'modulus', units), textCell(l.modulusBasis === 'mass' ? 'rock mass (as given)' : 'intact (reduced with GSI)'),
-      nCell(l.poisson, 3), qCell(l.ucs_MPa, 'stress', units), textCell(l.rockClass),
+      nCell(i + 1), textCell(l.name), inCell(l.thickness_m, 'length', units), inCell(l.unitWeight_kNm3, 'unitWeight', units),
+      inCell(l.youngModulus_GPa, 'modulus', units), textCell(l.modulusBasis === 'mass' ? 'rock mass (as given)' : 'intact (reduced with GSI)'),
+      inCell(l.poisson, null, units), inCell(l.ucs_MPa, 'stress', units), textCell(l.rockClass),
     ]),
   });
   blocks.push({
@@ -82,10 +82,10 @@ export function inputsSection(ctx: SectionContext): Section {
       { title: 'Disturbance D', numeric: true },
     ],
     rows: project.layers.map((l, i): Cell[] => [
-      nCell(i + 1, 3), qCell(l.tensile.value_MPa, 'stress', units), textCell(l.tensile.method), nCell(l.tensile.specimens.length, 6),
-      l.jointing.crossJointSpacing_m === null ? textCell('none seen') : qCell(l.jointing.crossJointSpacing_m, 'length', units),
-      nCell(l.jointing.fractureFrequency_per_m), nCell(l.jointing.rqd), nCell(l.jointing.jointCondition), nCell(l.jointing.jointFriction_deg),
-      nCell(l.hoekBrown.mi), nCell(l.hoekBrown.disturbance),
+      nCell(i + 1), inCell(l.tensile.value_MPa, 'stress', units), textCell(l.tensile.method), nCell(l.tensile.specimens.length),
+      l.jointing.crossJointSpacing_m === null ? textCell('none seen') : inCell(l.jointing.crossJointSpacing_m, 'length', units),
+      inCell(l.jointing.fractureFrequency_per_m, null, units), inCell(l.jointing.rqd, null, units), inCell(l.jointing.jointCondition, null, units),
+      inCell(l.jointing.jointFriction_deg, null, units), inCell(l.hoekBrown.mi, null, units), inCell(l.hoekBrown.disturbance, null, units),
     ]),
   });
 
@@ -97,7 +97,7 @@ export function inputsSection(ctx: SectionContext): Section {
     if (lab.source === 'value') {
       blocks.push({
         kind: 'paragraph',
-        text: `No specimens: the given ${lab.method === 'brazilian' ? 'Brazilian' : 'direct'} tensile strength of ${quantityText(layer.tensile.value_MPa, 'stress', units)} is used as the characteristic lab value.`,
+        text: `No specimens: the given ${lab.method === 'brazilian' ? 'Brazilian' : 'direct'} tensile strength of ${inputQuantityText(layer.tensile.value_MPa, 'stress', units)} is used as the characteristic lab value.`,
       });
     } else {
       blocks.push({
@@ -115,8 +115,8 @@ export function inputsSection(ctx: SectionContext): Section {
           { title: 'Why not used / remarks' },
         ],
         rows: lab.specimens.map((s): Cell[] => [
-          textCell(s.id), qCell(s.diameter_mm, 'smallLength', units), qCell(s.thickness_mm, 'smallLength', units),
-          nCell(s.diameter_mm > 0 ? s.thickness_mm / s.diameter_mm : null, 3), qCell(s.peakLoad_kN, 'force', units),
+          textCell(s.id), inCell(s.diameter_mm, 'smallLength', units), inCell(s.thickness_mm, 'smallLength', units),
+          nCell(s.diameter_mm > 0 ? s.thickness_mm / s.diameter_mm : null), inCell(s.peakLoad_kN, 'force', units),
           qCell(s.brazilian_MPa, 'stress', units), qCell(s.direct_MPa, 'stress', units),
           textCell(s.accepted ? 'yes ✓' : 'no ✗'),
           textCell([s.reason ?? '', ...s.warnings].filter((x) => x).join('; ') || '—'),
@@ -127,11 +127,11 @@ export function inputsSection(ctx: SectionContext): Section {
     blocks.push({
       kind: 'keyValue',
       items: [
-        { key: 'Specimens used', value: numberText(lab.n, 6) },
+        { key: 'Specimens used', value: numberText(lab.n) },
         { key: 'Mean (direct)', value: quantityText(lab.mean_MPa, 'stress', units) },
         { key: 'Standard deviation', value: quantityText(lab.sd_MPa, 'stress', units) },
-        { key: 'Coefficient of variation V', value: numberText(lab.cov, 3) },
-        { key: 'Direct/Brazilian factor', value: numberText(lab.directFactor, 3) },
+        { key: 'Coefficient of variation V', value: numberText(lab.cov) },
+        { key: 'Direct/Brazilian factor', value: numberText(lab.directFactor) },
         { key: 'Characteristic value', value: `${quantityText(lab.characteristic_MPa, 'stress', units)} (${rule})` },
       ],
     });
@@ -142,10 +142,10 @@ export function inputsSection(ctx: SectionContext): Section {
   blocks.push({
     kind: 'keyValue',
     items: [
-      { key: 'FS target, tension', value: numberText(d.fsTarget.tension, 4) },
-      { key: 'FS target, crushing', value: numberText(d.fsTarget.crushing, 4) },
-      { key: 'FS target, sliding', value: numberText(d.fsTarget.sliding, 4) },
-      { key: 'Deflection limit δ/t', value: numberText(d.deflectionLimitRatio, 4) },
+      { key: 'FS target, tension', value: numberText(d.fsTarget.tension, PRECISION.storedInput) },
+      { key: 'FS target, crushing', value: numberText(d.fsTarget.crushing, PRECISION.storedInput) },
+      { key: 'FS target, sliding', value: numberText(d.fsTarget.sliding, PRECISION.storedInput) },
+      { key: 'Deflection limit δ/t', value: numberText(d.deflectionLimitRatio, PRECISION.storedInput) },
       { key: 'Characteristic value', value: RULE_TEXT[d.characteristic] },
       { key: 'Tensile basis', value: d.tensileBasis === 'lab' ? 'lab: characteristic strength with the size effect' : 'rock mass: min(block, Hoek–Brown rock mass)' },
       { key: 'Crushing strength', value: d.crushingStrength === 'lab' ? 'UCS as given (lab)' : 'rock-mass UCS σci·s^a (Hoek–Brown)' },

@@ -24,14 +24,14 @@ export function strengthSection(ctx: SectionContext): Section {
       blocks.push({
         kind: 'keyValue',
         items: [
-          { key: 'RQD', value: `${numberText(layer.strength.rqd, 4)} %` },
-          { key: 'GSI', value: numberText(layer.strength.gsi, 4) },
-          { key: 'Hoek–Brown mb, s, a', value: `${numberText(hb.mb, 4)}, ${numberText(hb.s, 4)}, ${numberText(hb.a, 4)}` },
+          { key: 'RQD', value: `${numberText(layer.strength.rqd)} %` },
+          { key: 'GSI', value: numberText(layer.strength.gsi) },
+          { key: 'Hoek–Brown mb, s, a', value: `${numberText(hb.mb)}, ${numberText(hb.s)}, ${numberText(hb.a)}` },
           { key: 'Rock-mass UCS σci·s^a', value: quantityText(hb.massUcs_MPa, 'stress', units) },
           {
             key: 'Size effect',
             value: `d_lab ${quantityText(b.dLab_mm, 'smallLength', units)}, d_eff ${quantityText(b.dEff_mm, 'smallLength', units)}` +
-              `${b.clamped ? ` (clamped from ${quantityText(b.dEffRaw_mm, 'smallLength', units)} to the 10–200 mm range of the fit and ≥ d_lab)` : ''}, factor ${numberText(b.factor, 4)}`,
+              `${b.clamped ? ` (clamped from ${quantityText(b.dEffRaw_mm, 'smallLength', units)} to the 10–200 mm range of the fit and ≥ d_lab)` : ''}, factor ${numberText(b.factor)}`,
           },
           { key: 'Modulus used in the mechanics', value: quantityText(detail.modulusUsed_GPa, 'modulus', units) },
           { key: 'Cross-jointed at this span', value: layer.strength.crossJointed ? 'yes — no tensile strength across the joints (design = 0)' : 'no' },

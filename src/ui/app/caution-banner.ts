@@ -1,12 +1,17 @@
 /**
  * `<caution-banner>`: the engineering caution (DESIGN.md "Caution", text from
- * `src/model/caution.ts` — never retyped), visible on every view and in print.
+ * `src/model/caution.ts` — never retyped), visible on every view and in print. With `compact`
+ * it shows the one-line `CAUTION_SHORT` (the bar pinned at the top of narrow screens).
  */
 import { LitElement, html, css } from 'lit';
-import { CAUTION, CAUTION_TITLE } from '../../model/caution';
+import { CAUTION, CAUTION_SHORT, CAUTION_TITLE } from '../../model/caution';
 import { tokens } from '../styles/tokens';
 
 export class CautionBanner extends LitElement {
+  static override properties = { compact: { type: Boolean, reflect: true } };
+
+  compact = false;
+
   static override styles = [
     tokens,
     css`
@@ -29,6 +34,12 @@ export class CautionBanner extends LitElement {
       strong::before {
         content: '⚠ ';
       }
+      :host([compact]) aside {
+        border-width: 1px;
+        border-left-width: 6px;
+        padding: 0.1rem 0.4rem;
+        font-size: 0.95em;
+      }
       @media print {
         aside {
           break-inside: avoid;
@@ -38,7 +49,7 @@ export class CautionBanner extends LitElement {
   ];
 
   override render() {
-    return html`<aside role="note" aria-label=${CAUTION_TITLE}><strong>${CAUTION_TITLE}.</strong><span class="text">${CAUTION}</span></aside>`;
+    return html`<aside role="note" aria-label=${CAUTION_TITLE}><strong>${CAUTION_TITLE}.</strong><span class="text">${this.compact ? CAUTION_SHORT : CAUTION}</span></aside>`;
   }
 }
 

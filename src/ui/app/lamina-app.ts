@@ -5,22 +5,34 @@
  * 5 Checks · 6 Span and thickness · 7 Report. Results elements (sections 4–7, the trace dialog)
  * are rendered by tag; if one is not registered the page still works (it stays empty).
  *
+ * Under the project bar it warns of demo text left in a changed project (with a one-click
+ * clear) and lists the placeholders and defaults a new project still holds. While any field
+ * holds a refused value the verdict and every results section say "stale". A refused file's
+ * errors are listed in a dialog of their own. On a narrow or short screen the top block
+ * scrolls away and a pinned bar keeps a one-line caution and the verdict on screen.
+ *
  * Performance marks: `lamina:edit` at each edit (set by the store), `lamina:results` once the
  * results have rendered (next animation frame after the update), and the measure
  * `lamina:edit-to-results`.
  */
 import { LitElement, html, css, nothing } from 'lit';
-import type { UnitSystem } from '../../model/units';
+import { formatQuantity, type UnitSystem } from '../../model/units';
+import type { Project } from '../../model/types';
+import { clearDemoText, demoLeftover, demoLeftoverText } from '../../model/demo-leftover';
+import { isNewProject, pendingDefaults, type StartingValue } from '../../model/new-project';
+import { numberText, PRECISION } from '../../model/number-format';
 import type { AppState, ProjectStore } from '../state/project-store';
 import { tokens } from '../styles/tokens';
 import { sheet } from '../styles/sheet';
 import { textField } from '../inputs/field-templates';
+import { downloadText } from './download';
 import '../inputs/opening-loads-form';
 import '../inputs/strata-editor';
 import '../inputs/lab-tests-panel';
 import './caution-banner';
 import './verdict-line';
 import './project-bar';
+import './verdict-chip';
 
 const SECTIONS = [
   { id: 'opening', title: 'Opening and loads' },
@@ -103,12 +115,87 @@ export class LaminaApp extends LitElement {
         padding-top: 0.3rem;
         border-bottom: 1px solid var(--lam-rule);
       }
+      .pin {
+        display: none;
+      }
       @media (max-width: 900px), (max-height: 640px) {
-        /* On small screens the fixed block would hide too much of the sheet: it scrolls away
-           (the caution is repeated at the foot of the sheet). */
+        /* On small screens the full block would hide too much of the sheet: it scrolls away,
+           and a pinned one-line caution and verdict stay on screen instead. */
         .top {
           position: static;
         }
+        .pin {
+          display: block;
+          position: sticky;
+          top: 0;
+          z-index: 3;
+          background: var(--lam-paper);
+          padding: 0.2rem 0 0.25rem;
+          border-bottom: 1px solid var(--lam-ink);
+        }
+        .pin verdict-chip {
+          margin-top: 0.15rem;
+        }
+        section > h2 {
+          scroll-margin-top: 5.5rem;
+        }
+      }
+      .verdict-wrap.stale verdict-line {
+        color: var(--lam-muted);
+      }
+      .stale-note {
+        margin: 0.2rem 0;
+        font-weight: 600;
+      }
+      .stale-word {
+        border: 1px dashed var(--lam-ink);
+        padding: 0 0.3em;
+        margin-right: 0.3em;
+        font-weight: 700;
+      }
+      .provenance {
+        margin: 0.4rem 0;
+      }
+      .demo-leftover {
+        border: 2px solid var(--lam-warn);
+        border-left-width: 8px;
+        padding: 0.3rem 0.6rem;
+        margin: 0.3rem 0;
+      }
+      .demo-leftover button {
+        margin-top: 0.25rem;
+      }
+      details.new-project {
+        border: 1px solid var(--lam-ink);
+        padding: 0.3rem 0.6rem;
+        margin: 0.3rem 0;
+      }
+      details.new-project summary {
+        font-weight: 600;
+        cursor: pointer;
+      }
+      details.new-project h3 {
+        font-size: 1em;
+        margin: 0.5rem 0 0.2rem;
+      }
+      details.new-project ul {
+        margin: 0.2rem 0;
+        padding-left: 1.2rem;
+      }
+      details.new-project .why {
+        color: var(--lam-muted);
+      }
+      dialog.file-dialog {
+        max-width: min(40rem, calc(100vw - 2rem));
+        border: 2px solid var(--lam-bad);
+        padding: 0.5rem 1rem;
+      }
+      dialog.file-dialog::backdrop {
+        background: rgb(0 0 0 / 0.35);
+      }
+      .file-errors ul {
+        padding-left: 1.2rem;
+        overflow-wrap: anywhere;
       }
       nav ol {
         list-style: none;
@@ -139,6 +226,18 @@ export class LaminaApp extends LitElement {
         padding: 0.3rem 0.8rem;
         margin: 0.4rem 0;
       }
+      .autosave-alert {
+        border: 2px solid var(--lam-bad);
+        border-left-width: 8px;
+        padding: 0.3rem 0.8rem;
+        margin: 0.4rem 0;
+      }
+      .autosave-alert p {
+        margin: 0.3rem 0;
+      }
+      .autosave-alert button {
+        margin: 0 0.5rem 0.3rem 0;
+      }
       .file-errors h2 {
         font-size: 1em;
         border: none;
@@ -161,6 +260,15 @@ export class LaminaApp extends LitElement {
       }
       section > h2 {
         scroll-margin-top: 9rem;
+      }
+      /* A results view wider than the screen (a wide table on a phone) scrolls sideways in its
+         own box: never past the page, never cut off. */
+      section.results > :not(h2):not(p),
+      section.print > :not(h2):not(p),
+      section.inputs > lab-tests-panel {
+        display: block;
+        max-width: 100%;
+        overflow-x: auto;
       }
       .num-badge {
         display: inline-block;
@@ -194,6 +302,8 @@ export class LaminaApp extends LitElement {
         nav,
         .status-line,
         project-bar,
+        .pin,
+        .provenance,
         .messages,
         details.input-notes,
         section.inputs,
@@ -223,6 +333,7 @@ export class LaminaApp extends LitElement {
     this.addEventListener('history-redo', this.onRedo);
     this.addEventListener('project-file-errors', this.onFileErrors as EventListener);
     this.addEventListener('app-notice', this.onNotice as EventListener);
+    this.addEventListener('field-refused', this.onFieldRefused as EventListener);
     window.addEventListener('keydown', this.onKey);
   }
 
@@ -311,9 +422,77 @@ export class LaminaApp extends LitElement {
   private onRedo = (): void => void this.store.redo();
 
   private onFileErrors = (e: CustomEvent<{ source: string; errors: { path: string; message: string }[] }>): void => {
-    this.store.setFieldErrors(e.detail.errors, `${e.detail.source}: not opened — the current project is unchanged.`);
-    void this.updateComplete.then(() => this.renderRoot.querySelector<HTMLElement>('.file-errors')?.focus());
+    this.store.setFileErrors(e.detail.source, e.detail.errors, `${e.detail.source}: not opened — the current project is unchanged.`);
   };
+
+  private onFieldRefused = (e: CustomEvent<{ path: string; message: string | null }>): void => {
+    e.stopPropagation();
+    this.store.markRefused(e.detail.path, e.detail.message);
+  };
+
+  /** Open or close the refused-file dialog to match the state. */
+  protected override updated(): void {
+    const dialog = this.renderRoot.querySelector<HTMLDialogElement>('dialog.file-dialog');
+    if (!dialog) return;
+    const want = Boolean(this.state?.fileErrors);
+    if (want && !dialog.open) {
+      dialog.showModal();
+      dialog.querySelector<HTMLElement>('button')?.focus();
+    } else if (!want && dialog.open) dialog.close();
+  }
+
+  private clearDemo(project: Project): void {
+    const leftover = demoLeftover(project);
+    if (leftover) this.store.replace(clearDemoText(project, leftover), 'Demo title and description cleared');
+  }
+
+  private endNewProject(project: Project): void {
+    const next = structuredClone(project);
+    delete next.description;
+    this.store.replace(next, 'New-project list closed');
+  }
+
+  private startingValue(v: StartingValue, units: UnitSystem) {
+    const value =
+      typeof v.value === 'number'
+        ? v.quantity
+          ? formatQuantity(v.value, v.quantity, units, units === 'SI' ? PRECISION.storedInput : PRECISION.convertedInput)
+          : `${numberText(v.value, PRECISION.storedInput)}${v.unit}`
+        : String(v.value);
+    return html`<li data-path=${v.path}><strong>${v.label}</strong> ${value} <span class="why">— ${v.why}</span></li>`;
+  }
+
+  /** Demo text left in a changed project; the placeholders and defaults a new project still holds. */
+  private provenance(p: Project, units: UnitSystem) {
+    const leftover = demoLeftover(p);
+    const fresh = isNewProject(p) ? pendingDefaults(p) : null;
+    if (!leftover && !fresh) return nothing;
+    const placeholders = fresh?.filter((v) => v.kind === 'placeholder') ?? [];
+    const defaults = fresh?.filter((v) => v.kind === 'default') ?? [];
+    return html`<div class="provenance">
+      ${leftover
+        ? html`<div class="demo-leftover" role="alert">
+            <strong class="warning">Demo text in a changed project.</strong> ${demoLeftoverText(leftover)}
+            <br /><button type="button" id="clear-demo-text" @click=${() => this.clearDemo(p)}>Clear the demo ${leftover.fields.join(' and ')}</button>
+          </div>`
+        : nothing}
+      ${fresh
+        ? html`<details class="new-project" open>
+            <summary>New project: ${placeholders.length} placeholder${placeholders.length === 1 ? '' : 's'} to replace, ${defaults.length} default${defaults.length === 1 ? '' : 's'} to check</summary>
+            <p>It starts with one layer and the values below. Each leaves this list once you change it.</p>
+            ${placeholders.length
+              ? html`<h3>Placeholders: replace each with your own data</h3>
+                  <ul class="placeholders">${placeholders.map((v) => this.startingValue(v, units))}</ul>`
+              : html`<p><strong>Every placeholder has been replaced.</strong></p>`}
+            ${defaults.length
+              ? html`<h3>Defaults: check that each fits your site</h3>
+                  <ul class="defaults">${defaults.map((v) => this.startingValue(v, units))}</ul>`
+              : nothing}
+            <button type="button" id="end-new-project" @click=${() => this.endNewProject(p)}>Close this list (removes the new-project description)</button>
+          </details>`
+        : nothing}
+    </div>`;
+  }
 
   private onNotice = (e: CustomEvent<{ notice: string }>): void => this.store.setNotice(e.detail.notice);
 
@@ -336,9 +515,28 @@ export class LaminaApp extends LitElement {
     heading?.focus({ preventScroll: true });
   }
 
+  /** A failed or paused autosave, said plainly, with a way to keep the saved text as a file. */
+  private renderAutosave(s: AppState) {
+    const a = s.autosave;
+    if (a.status === 'saved') return nothing;
+    return html`<div class="autosave-alert" role="alert">
+      <p>${a.message}</p>
+      ${a.held !== null
+        ? html`<button type="button" id="autosave-download" @click=${() => downloadText('lamina-autosave-kept.json', a.held ?? '')}>
+              Download the autosaved text (${a.held.length.toLocaleString('en-US')} characters)
+            </button>
+            <button type="button" id="autosave-resume" @click=${() => this.store.resumeAutosave()}>I have kept it — resume autosave (it will be overwritten)</button>`
+        : nothing}
+    </div>`;
+  }
+
   private heading(n: number) {
     const s = SECTIONS[n - 1];
-    return html`<h2 id="${s.id}-h" tabindex="-1"><span class="num-badge">${n}</span> ${s.title}</h2>`;
+    const stale =
+      n >= 4 && this.state?.stale
+        ? html`<p class="stale-note" role="status"><span class="stale-word">Stale</span>results are for the last accepted values; a field above holds a refused value.</p>`
+        : nothing;
+    return html`<h2 id="${s.id}-h" tabindex="-1"><span class="num-badge">${n}</span> ${s.title}</h2>${stale}`;
   }
 
   override render() {
@@ -346,19 +544,25 @@ export class LaminaApp extends LitElement {
     if (!s) return nothing;
     const p = s.project;
     const report = s.analysis?.report ?? null;
-    // A refused file, preset or paste gets the full list; a refused field edit is shown beside
-    // its field and on the fixed-height status line (so the sheet does not jump while typing).
-    const fileErrors = s.fieldErrorsFrom === 'project' ? s.fieldErrors : [];
-    const editErrors = s.fieldErrorsFrom === 'edit' ? s.fieldErrors : [];
+    // A refused file, link or paste gets its own dialog; a refused field is shown beside the
+    // field and on the fixed-height status line (so the sheet does not jump while typing).
+    const fileErrors = s.fileErrors;
+    const editErrors = s.fieldErrors;
     return html`
       <header>
         <h1>Lamina <small>roof beam worksheet</small></h1>
         <div class="title">${textField(this, { label: 'Project title', path: 'title', value: p.title, compact: true, size: 60 })}</div>
       </header>
       <project-bar .project=${p} units=${s.units} ?canUndo=${s.canUndo} ?canRedo=${s.canRedo}></project-bar>
+      ${this.provenance(p, s.units)}
       <div class="top">
         <caution-banner></caution-banner>
-        <verdict-line .project=${p} .analysis=${s.analysis} units=${s.units} ?pending=${s.pending} .error=${s.error}></verdict-line>
+        <div class="verdict-wrap ${s.stale ? 'stale' : ''}">
+          ${s.stale
+            ? html`<p class="stale-note" role="status"><span class="stale-word">Stale</span>the verdict and results are for the last accepted values; a field holds a refused value.</p>`
+            : nothing}
+          <verdict-line .project=${p} .analysis=${s.analysis} units=${s.units} ?pending=${s.pending} .error=${s.error}></verdict-line>
+        </div>
         <p class="status-line" role="status" aria-live="polite">
           ${editErrors.length
             ? html`<span class="error">Not applied — ${editErrors[0].message}${editErrors.length > 1 ? ` (and ${editErrors.length - 1} more)` : ''}</span>`
@@ -370,15 +574,24 @@ export class LaminaApp extends LitElement {
           </ol>
         </nav>
       </div>
+      <div class="pin" aria-label="Caution and verdict">
+        <caution-banner compact></caution-banner>
+        <verdict-chip .project=${p} .analysis=${s.analysis} ?stale=${s.stale} ?pending=${s.pending}></verdict-chip>
+      </div>
       <div class="messages">
-        ${fileErrors.length
-          ? html`<div class="file-errors" role="alert" tabindex="-1">
-              <h2>Not accepted — ${fileErrors.length} field error${fileErrors.length === 1 ? '' : 's'}</h2>
-              <ul>
-                ${fileErrors.map((e) => html`<li data-path=${e.path}>${e.message}</li>`)}
-              </ul>
-            </div>`
-          : nothing}
+        ${this.renderAutosave(s)}
+        <dialog class="file-dialog" aria-labelledby="file-dialog-h" @close=${() => this.store.dismissFileErrors()}>
+          ${fileErrors
+            ? html`<div class="file-errors" role="alert">
+                <h2 id="file-dialog-h">Not opened: ${fileErrors.source}</h2>
+                <p>${fileErrors.errors.length} error${fileErrors.errors.length === 1 ? '' : 's'} in it; the current project is unchanged.</p>
+                <ul>
+                  ${fileErrors.errors.map((e) => html`<li data-path=${e.path}>${e.message}</li>`)}
+                </ul>
+                <form method="dialog"><button type="submit" id="file-dialog-close">Close</button></form>
+              </div>`
+            : nothing}
+        </dialog>
       </div>
       ${s.inputWarnings.length
         ? html`<details class="input-notes">

@@ -1,9 +1,10 @@
 /**
- * `<project-bar>`: presets, open, save, share link, undo, redo and the SI/US switch.
+ * `<project-bar>`: new project, demo presets, open, save, share link, undo, redo and the SI/US
+ * switch. It wraps onto several lines on a narrow screen and never overflows it.
  * Opening a file reads it with the model's `readProjectText`; a refused file reports its field
  * errors and leaves the current project untouched.
  *
- * @fires project-replace - a preset or an opened file (already validated)
+ * @fires project-replace - a new project, a preset or an opened file (already validated)
  * @fires project-file-errors - { source, errors } a file could not be opened
  * @fires units-change - { units }
  * @fires history-undo
@@ -17,6 +18,7 @@ import { readProjectText, writeProjectText } from '../../model/project-file';
 import { MIGRATED_CODE } from '../../model/validate';
 import { ProjectError } from '../../model/validate';
 import { PRESETS, presetData } from '../state/presets';
+import { newProject } from '../../model/new-project';
 import { encodeShareHash } from '../state/share-link';
 import { fire, fireReplace, fireUnits } from '../inputs/events';
 import { tokens } from '../styles/tokens';
@@ -53,8 +55,19 @@ export class ProjectBar extends LitElement {
       }
       .group {
         display: inline-flex;
+        flex-wrap: wrap;
         gap: 0.3rem;
         align-items: center;
+        max-width: 100%;
+        min-width: 0;
+      }
+      .group.demo {
+        flex: 0 1 auto;
+      }
+      .group.demo select {
+        flex: 1 1 12rem;
+        min-width: 0;
+        max-width: 100%;
       }
       .file-label {
         border: 1px solid var(--lam-ink);
@@ -79,6 +92,8 @@ export class ProjectBar extends LitElement {
         border: none;
         padding: 0;
         margin: 0;
+        min-width: 0;
+        flex-wrap: wrap;
         display: inline-flex;
         gap: 0.4rem;
         align-items: center;
@@ -93,8 +108,12 @@ export class ProjectBar extends LitElement {
         gap: 0.4rem;
         align-items: center;
       }
+      .share {
+        flex-wrap: wrap;
+      }
       .share input {
-        flex: 1;
+        flex: 1 1 12rem;
+        min-width: 0;
         font-family: var(--lam-mono);
         font-size: 0.85em;
       }
@@ -109,6 +128,10 @@ export class ProjectBar extends LitElement {
   protected override willUpdate(changed: PropertyValues<this>): void {
     // A link copied earlier carries the old project: drop it once the project changes.
     if (changed.has('project') && changed.get('project') !== undefined) this.shareLink = '';
+  }
+
+  private startNew(): void {
+    fireReplace(this, newProject(), 'New project (one layer; its placeholders and defaults are listed below the project bar)');
   }
 
   private loadPreset(e: Event): void {
@@ -162,6 +185,9 @@ export class ProjectBar extends LitElement {
   override render() {
     return html`<div class="bar">
       <span class="group">
+        <button type="button" id="new-project" @click=${this.startNew} title="A blank project with one layer; every starting value is listed for you to replace or check">New project</button>
+      </span>
+      <span class="group demo">
         <label for="preset">Demo projects</label>
         <select id="preset" @change=${this.loadPreset}>
           <option value="">Load a demo…</option>

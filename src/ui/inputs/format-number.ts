@@ -1,21 +1,12 @@
 /**
- * Number text for input fields: up to `digits` significant digits, no exponent for ordinary
- * engineering magnitudes, no trailing zeros, "−0" shown as "0".
- *     formatInputNumber(0.45000000001) // "0.45"
- *     formatInputNumber(19.685039370) // "19.685"
+ * Text for an input box by the one precision rule (`src/model/number-format.ts`): a value in
+ * the unit it is stored in is echoed as stored; a value converted for display (US units of an
+ * SI project file) is shown to 4 significant figures.
+ *     formatInputNumber(0.45000000001)      // "0.45"
+ *     formatInputNumber(8.202099737, true)  // "8.202" (2.5 m shown in feet)
  */
-export function formatInputNumber(value: number | null | undefined, digits = 6): string {
-  if (value === null || value === undefined || !Number.isFinite(value)) return '';
-  const v = Number(value.toPrecision(digits));
-  if (v === 0) return '0';
-  const abs = Math.abs(v);
-  if (abs >= 1e-4 && abs < 1e15) return String(v);
-  return v.toExponential();
-}
+import { fieldText } from '../../model/number-format';
 
-/** Display text for a result number: `digits` significant digits, "—" for none. */
-export function formatResult(value: number | null | undefined, digits = 3): string {
-  if (value === null || value === undefined || !Number.isFinite(value)) return '—';
-  const v = Number(value.toPrecision(digits));
-  return v === 0 ? '0' : String(v);
+export function formatInputNumber(value: number | null | undefined, converted = false): string {
+  return fieldText(value, converted);
 }

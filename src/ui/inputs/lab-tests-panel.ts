@@ -6,6 +6,10 @@
  *
  * Paste rule: if ANY pasted row has an error, nothing is applied and every bad row is listed
  * with its row and column (a half-applied paste is easy to miss and hard to undo by eye).
+ * Headings are recognised by meaning with their units, and a table without a header is read
+ * by column order (`model/specimens-csv.ts`); unless the text used the file's own column names
+ * unchanged, a preview shows how each column was read and the first rows, and nothing is
+ * applied until Apply (Cancel keeps the text to correct).
  *
  * @fires project-edit - a specimen field changed
  * @fires project-replace - rows added, removed or pasted
@@ -18,7 +22,8 @@ import type { UnitSystem } from '../../model/units';
 import type { Analysis, LabDetail } from '../../analysis/types';
 import { formatQuantity } from '../../model/units';
 import { defaultSpecimenId } from '../../model/defaults';
-import { parseSpecimensCsv } from '../../model/specimens-csv';
+import { parseSpecimensCsv, type SpecimensCsv } from '../../model/specimens-csv';
+import { FIELD_WORDS } from '../../model/specimen-headings';
 import { numberText } from '../../report/number-text';
 import { strengthStripSvg } from '../../report/charts/strength-strip';
 import { tokens } from '../styles/tokens';
@@ -44,6 +49,7 @@ export class LabTestsPanel extends LitElement {
     pasteText: { state: true },
     pasteProblems: { state: true },
     pasteNote: { state: true },
+    preview: { state: true },
   };
 
   project!: Project;
@@ -55,6 +61,8 @@ export class LabTestsPanel extends LitElement {
   pasteText = '';
   pasteProblems: PasteProblem[] = [];
   pasteNote = '';
+  /** A parsed paste waiting for Apply or Cancel. */
+  preview: { mode: 'append' | 'replace'; result: SpecimensCsv } | null = null;
   private strip = '';
 
   static override styles = [
@@ -126,6 +134,15 @@ export class LabTestsPanel extends LitElement {
       .problems li {
         color: #8a2a00;
       }
+      .preview {
+        border: 1px solid var(--lam-ink);
+        padding: 0.3rem 0.8rem;
+        margin: 0.4rem 0;
+        max-width: 44rem;
+      }
+      .preview table {
+        margin: 0.3rem 0;
+      }
     `,
   ];
 
@@ -184,6 +201,7 @@ export class LabTestsPanel extends LitElement {
   private applyPaste(mode: 'append' | 'replace'): void {
     const text = this.pasteText;
     this.pasteNote = '';
+    this.preview = null;
     if (text.trim() === '') {
       this.pasteProblems = [{ row: 0, column: '', message: 'nothing to paste: the box is empty' }];
       return;
@@ -205,22 +223,71 @@ export class LabTestsPanel extends LitElement {
       this.pasteProblems = [{ row: 0, column: '', message: 'no specimen rows found' }];
       return;
     }
+    if (!result.reading.exact) {
+      this.pasteProblems = [];
+      this.preview = { mode, result };
+      return;
+    }
+    this.apply(mode, result);
+  }
+
+  private apply(mode: 'append' | 'replace', result: SpecimensCsv): void {
     const existing = mode === 'append' ? structuredClone(this.project.layers[this.layerIndex].tensile.specimens) : [];
+    this.preview = null;
     this.pasteProblems = [];
     this.pasteNote = `${result.specimens.length} specimen${result.specimens.length === 1 ? '' : 's'} ${mode === 'append' ? 'added' : 'put in place of the previous rows'}.`;
     this.pasteText = '';
     this.setSpecimens([...existing, ...result.specimens], `pasted specimens (${result.specimens.length})`);
   }
 
+  private cancelPreview(): void {
+    this.preview = null;
+    this.pasteNote = 'Nothing was applied; the pasted text is kept so you can correct it.';
+  }
+
+  /** How the pasted columns were read, and the first rows in file units, before anything is applied. */
+  private renderPreview() {
+    const p = this.preview;
+    if (!p) return nothing;
+    const { reading, specimens } = p.result;
+    const sep = reading.separator === '\t' ? 'tabs' : reading.separator === ';' ? 'semicolons' : 'commas';
+    const shown = specimens.slice(0, 5);
+    const num = (v: number) => numberText(v, 4);
+    return html`<div class="preview" role="region" aria-label="How the pasted columns were read">
+      <p>
+        <strong>Check how the paste was read</strong> — ${specimens.length} row${specimens.length === 1 ? '' : 's'}, columns separated by ${sep}${reading.decimalComma ? ', decimal commas read as decimal points' : ''}.
+        ${reading.header ? 'Columns recognised from the header:' : 'No header: the columns were taken in order.'}
+      </p>
+      <ul class="columns-read">
+        ${reading.columns.map(
+          (c) => html`<li data-field=${c.field}>${c.heading} → ${FIELD_WORDS[c.field]}${c.unit ? html`, in ${c.unit}${c.factor !== 1 ? ` (converted to ${c.field === 'peakLoad_kN' ? 'kN' : 'mm'})` : c.assumed ? ' (assumed: no unit given)' : ''}` : nothing}</li>`,
+        )}
+        ${reading.ignored.length ? html`<li>Not used: ${reading.ignored.join(', ')}</li>` : nothing}
+      </ul>
+      <table aria-label="First pasted rows as read">
+        <thead><tr><th scope="col">Id</th><th scope="col" class="num">D (mm)</th><th scope="col" class="num">L (mm)</th><th scope="col" class="num">P (kN)</th><th scope="col">Valid</th></tr></thead>
+        <tbody>
+          ${shown.map((s) => html`<tr><td>${s.id}</td><td class="num">${num(s.diameter_mm)}</td><td class="num">${num(s.thickness_mm)}</td><td class="num">${num(s.peakLoad_kN)}</td><td>${s.valid ? 'yes' : 'no'}</td></tr>`)}
+        </tbody>
+      </table>
+      ${specimens.length > shown.length ? html`<p class="hint">… and ${specimens.length - shown.length} more.</p>` : nothing}
+      <div class="paste-actions">
+        <button type="button" id="paste-apply" @click=${() => this.apply(p.mode, p.result)}>Apply (${p.mode === 'append' ? 'add' : 'replace'} ${specimens.length} row${specimens.length === 1 ? '' : 's'})</button>
+        <button type="button" id="paste-cancel" @click=${this.cancelPreview}>Cancel</button>
+      </div>
+    </div>`;
+  }
+
   private stress(v: number | null | undefined): string {
-    return v === null || v === undefined || !Number.isFinite(v) ? '—' : formatQuantity(v, 'stress', this.units, 3);
+    return v === null || v === undefined || !Number.isFinite(v) ? '—' : formatQuantity(v, 'stress', this.units);
   }
 
   private renderTable(i: number) {
     const layer = this.project.layers[i];
     const lab = this.lab;
     const specs = layer.tensile.specimens;
-    const detail = (k: number) => lab?.specimens.find((s) => s.index === k) ?? null;
+    const byIndex = new Map((lab?.specimens ?? []).map((s) => [s.index, s]));
+    const detail = (k: number) => byIndex.get(k) ?? null;
     const base = `layers[${i}].tensile.specimens`;
     const errs = this.fieldErrors.filter((e) => e.path.startsWith(`layers[${i}].tensile`));
     return html`<div class="table-wrap">
@@ -257,7 +324,7 @@ export class LabTestsPanel extends LitElement {
                     <td><quantity-input compact label="Peak load of ${s.id}" path="${path}.peakLoad_kN" .value=${s.peakLoad_kN} quantity="force" units=${this.units} .error=${errFor(errs, `${path}.peakLoad_kN`)}></quantity-input></td>
                     <td>${checkboxField(this, { label: `Specimen ${s.id} broke along a central diametral fracture`, path: `${path}.valid`, value: s.valid, compact: true })}</td>
                     <td class="num">${d ? tracedValue(`detail.layers[${i}].lab.specimens[${k}].brazilian_MPa`, this.stress(d.brazilian_MPa), d.brazilian_MPa) : '—'}</td>
-                    <td class="num">${ld === null ? '—' : numberText(ld, 2)}</td>
+                    <td class="num">${ld === null ? '—' : numberText(ld)}</td>
                     <td>${d
                       ? d.accepted
                         ? html`<span class="status-used">used ✓</span>`
@@ -282,7 +349,7 @@ export class LabTestsPanel extends LitElement {
     const rule = lab.rule === 'lower5' ? 'lower 5% fractile m(1 − kn·V), EN 1990 Annex D' : 'mean of the accepted tests';
     const rep = this.analysis?.report.layers[i]?.strength;
     const d = `detail.layers[${i}].lab`;
-    const methodText = lab.method === 'brazilian' ? `Brazilian; direct = ${numberText(lab.directFactor, 2)} × Brazilian (${layer.rockClass})` : 'direct pull (no factor)';
+    const methodText = lab.method === 'brazilian' ? `Brazilian; direct = ${numberText(lab.directFactor)} × Brazilian (${layer.rockClass})` : 'direct pull (no factor)';
     return html`<table class="stats" aria-label="Test statistics of ${layer.name}">
       <tbody>
         <tr><th scope="row">Source</th><td>${lab.source === 'specimens' ? `${lab.n} accepted specimen${lab.n === 1 ? '' : 's'}` : 'value given (no specimens)'}</td></tr>
@@ -294,8 +361,8 @@ export class LabTestsPanel extends LitElement {
         </tr>
         <tr><th scope="row">Mean, direct</th><td class="num">${lab.mean_MPa === null ? '—' : tracedValue(`${d}.mean_MPa`, this.stress(lab.mean_MPa), lab.mean_MPa)}</td></tr>
         <tr><th scope="row">Standard deviation</th><td class="num">${lab.sd_MPa === null ? '—' : tracedValue(`${d}.sd_MPa`, this.stress(lab.sd_MPa), lab.sd_MPa)}</td></tr>
-        <tr><th scope="row">CoV V</th><td class="num">${lab.cov === null ? '—' : tracedValue(`${d}.cov`, numberText(lab.cov, 3), lab.cov)}</td></tr>
-        <tr><th scope="row">kn</th><td class="num">${lab.kn === null ? html`— <span class="hint">(mean rule)</span>` : numberText(lab.kn, 3)}</td></tr>
+        <tr><th scope="row">CoV V</th><td class="num">${lab.cov === null ? '—' : tracedValue(`${d}.cov`, numberText(lab.cov), lab.cov)}</td></tr>
+        <tr><th scope="row">kn</th><td class="num">${lab.kn === null ? html`— <span class="hint">(mean rule)</span>` : numberText(lab.kn)}</td></tr>
         <tr>
           <th scope="row">Characteristic, direct</th>
           <td class="num characteristic">${tracedValue(`layers[${i}].strength.characteristic_MPa`, this.stress(lab.characteristic_MPa), lab.characteristic_MPa)}</td>
@@ -317,6 +384,7 @@ export class LabTestsPanel extends LitElement {
             this.layer = Number((e.target as HTMLSelectElement).value);
             this.pasteProblems = [];
             this.pasteNote = '';
+            this.preview = null;
           }}
         >
           ${p.layers.map((l, k) => html`<option value=${k} ?selected=${k === i}>${k + 1} — ${l.name} (${l.tensile.specimens.length} specimens)</option>`)}
@@ -325,13 +393,14 @@ export class LabTestsPanel extends LitElement {
       <h3>Specimens of ${p.layers[i].name}</h3>
       ${this.renderTable(i)}
       <h3>Paste specimens</h3>
-      <label for="paste">Rows copied from a spreadsheet (comma- or tab-separated, with a header row: id, diameter_mm, thickness_mm, peakLoad_kN, valid — values in mm and kN whatever the display units)</label>
+      <label for="paste">Rows copied from a spreadsheet, separated by tabs, commas or semicolons. A header such as “Sample, Dia (mm), Thk (mm), Load (kN), Valid” is recognised, units included (mm, cm, in; kN, N, lbf); without a header the columns are id, diameter (mm), thickness (mm), peak load (kN) and optionally valid. Decimal commas are read with tab or semicolon separators.</label>
       <textarea id="paste" .value=${this.pasteText} @input=${(e: Event) => (this.pasteText = (e.target as HTMLTextAreaElement).value)} spellcheck="false"></textarea>
       <div class="paste-actions">
         <button type="button" id="paste-append" @click=${() => this.applyPaste('append')}>Add pasted rows</button>
         <button type="button" id="paste-replace" @click=${() => this.applyPaste('replace')}>Replace all rows with pasted rows</button>
       </div>
-      <p class="hint">If any pasted row has an error, nothing is applied and the bad rows are listed.</p>
+      <p class="hint">If any pasted row has an error, nothing is applied and the bad rows are listed. Unless the header uses the file's own column names, you see how the columns were read before anything is applied.</p>
+      ${this.renderPreview()}
       ${this.pasteNote ? html`<p role="status">${this.pasteNote}</p>` : nothing}
       ${this.pasteProblems.length
         ? html`<ul class="problems" role="alert">

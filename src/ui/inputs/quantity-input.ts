@@ -8,13 +8,16 @@
  * with `nullable`, an empty field means "not given" (null).
  *
  * @fires project-edit - { path, value } with the value in the file unit, on every parsable input
+ * @fires field-refused - { path, message } the text cannot be read (message null: it can again),
+ *   so the app can mark its results stale while the field holds refused text
  */
 import { LitElement, html, css, nothing, type PropertyValues } from 'lit';
 import { parseDisplayQuantity, unitLabel, toDisplay, type Quantity, type UnitSystem } from '../../model/units';
 import { tokens } from '../styles/tokens';
 import { sheet } from '../styles/sheet';
-import { fireEdit } from './events';
+import { fire, fireEdit } from './events';
 import { formatInputNumber } from './format-number';
+import { normaliseDecimalComma } from '../../model/decimal-comma';
 
 const PLAIN_NUMBER = /^\s*[-+]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][-+]?\d+)?\s*$/;
 
@@ -99,12 +102,16 @@ export class QuantityInput extends LitElement {
     `,
   ];
 
-  /** The text the field should show for `value` in the current unit system. */
+  /**
+   * The text the field should show for `value` in the current unit system, by the precision
+   * rule: as stored in the file unit (SI), to 4 significant figures when converted (US).
+   */
   private displayText(): string {
     if (this.value === null || this.value === undefined) return '';
     if (!Number.isFinite(this.value)) return '';
+    const converted = this.quantity !== '' && this.units !== 'SI';
     const shown = this.quantity ? toDisplay(this.value, this.quantity, this.units) : this.value;
-    return formatInputNumber(shown);
+    return formatInputNumber(shown, converted);
   }
 
   /** Parse the field text to a file-unit value; throws with a message naming what was expected. */
@@ -120,32 +127,44 @@ export class QuantityInput extends LitElement {
         throw new RangeError(`${this.label}: ${err instanceof Error ? err.message : String(err)}`);
       }
     }
-    if (!PLAIN_NUMBER.test(text)) {
+    let plain: string;
+    try {
+      plain = normaliseDecimalComma(text); // "0,25" → "0.25"
+    } catch (err) {
+      throw new RangeError(`${this.label}: ${err instanceof Error ? err.message : String(err)}`);
+    }
+    if (!PLAIN_NUMBER.test(plain)) {
       throw new RangeError(`${this.label}: expected a number${this.unitText ? ` (${this.unitText})` : ''}, got ${JSON.stringify(text)}`);
     }
-    return Number(text);
+    return Number(plain);
   }
 
   protected override willUpdate(changed: PropertyValues<this>): void {
     if (!this.hasRendered || changed.has('units') || changed.has('quantity')) {
-      this.text = this.displayText();
-      this.localError = '';
+      this.showValue();
       return;
     }
-    if (changed.has('value')) {
-      // Keep what the user is typing ("0." while the value is 0) unless the value really changed
-      // from outside (undo, preset, unit switch): then show the new value.
-      let current: number | null | undefined;
-      try {
-        current = this.parse(this.text);
-      } catch {
-        current = undefined;
-      }
-      if (!sameValue(current, this.value)) {
-        this.text = this.displayText();
-        this.localError = '';
-      }
+    // Keep what the user is typing ("0." while the value is 0) unless the value really changed
+    // from outside (undo, preset) or the app dropped this field's refusal: then show the value.
+    const refusalDropped = changed.has('error') && Boolean(changed.get('error')) && !this.error;
+    if ((changed.has('value') || refusalDropped) && !this.textHoldsValue()) this.showValue();
+  }
+
+  /** True when the field's text reads as the value it holds. */
+  private textHoldsValue(): boolean {
+    try {
+      return sameValue(this.parse(this.text), this.value);
+    } catch {
+      return false;
     }
+  }
+
+  /** Show the held value; a refusal the field had is over, so tell the app. */
+  private showValue(): void {
+    const wasRefused = this.localError !== '' || this.error !== '';
+    this.text = this.displayText();
+    this.localError = '';
+    if (wasRefused && this.hasRendered) fire(this, 'field-refused', { path: this.path, message: null });
   }
 
   protected override firstUpdated(): void {
@@ -159,15 +178,18 @@ export class QuantityInput extends LitElement {
       v = this.parse(this.text);
     } catch (err) {
       this.localError = err instanceof Error ? err.message : String(err);
+      fire(this, 'field-refused', { path: this.path, message: this.localError });
       return;
     }
+    if (this.localError) fire(this, 'field-refused', { path: this.path, message: null });
     this.localError = '';
     // Re-send an unchanged value when the model refused the last one, so its error clears.
     if (!sameValue(v, this.value) || this.error) fireEdit(this, this.path, v);
   }
 
+  /** A plain number stays as typed ("2.50"); a number typed with a unit ("20 ft") shows converted. */
   private onBlur(): void {
-    if (!this.localError && !this.error) this.text = this.displayText();
+    if (!this.localError && !this.error && !PLAIN_NUMBER.test(this.text)) this.text = this.displayText();
   }
 
   override render() {

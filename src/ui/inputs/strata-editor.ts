@@ -1,7 +1,9 @@
 /**
  * `<strata-editor>` — worksheet section 2: every field of every layer, one column per layer
  * (layers[0], the immediate roof, first), with add, remove and move controls, beside the
- * `<strata-column>` drawn to scale.
+ * `<strata-column>` drawn to scale. Where the host is narrower than `CARD_WIDTH_PX` (a phone)
+ * the layers are stacked cards instead, one under the other, with a line naming every layer
+ * and linking to its card, so no layer hides in a sideways scroll.
  *
  * @fires project-edit - one layer field changed
  * @fires project-replace - a layer was added, removed or moved
@@ -37,6 +39,8 @@ interface SelectRow {
 }
 type Row = NumberRow | SelectRow | { kind: 'band'; label: string; note?: string };
 
+/** Below this host width the layers are shown as stacked cards. */
+export const CARD_WIDTH_PX = 640;
 
 /** What λ counts (METHODS §7): shown next to the field in every form. */
 export const LAMBDA_HINT = 'fractures crossing the layer, along the span (not bedding partings)';
@@ -106,7 +110,29 @@ export class StrataEditor extends LitElement {
     analysis: { attribute: false },
     units: { type: String },
     fieldErrors: { attribute: false },
+    cards: { type: Boolean, reflect: true },
   };
+
+  /** True when the layers are shown as stacked cards (set from the host's width). */
+  cards = false;
+  private resizer: ResizeObserver | null = null;
+
+  override connectedCallback(): void {
+    super.connectedCallback();
+    if (typeof ResizeObserver === 'undefined') return;
+    this.resizer = new ResizeObserver((entries) => {
+      const width = entries[0]?.contentRect.width ?? 0;
+      const cards = width > 0 && width < CARD_WIDTH_PX;
+      if (cards !== this.cards) this.cards = cards;
+    });
+    this.resizer.observe(this);
+  }
+
+  override disconnectedCallback(): void {
+    super.disconnectedCallback();
+    this.resizer?.disconnect();
+    this.resizer = null;
+  }
 
   project!: Project;
   analysis: Analysis | null = null;
@@ -177,6 +203,60 @@ export class StrataEditor extends LitElement {
         font-size: 0.88em;
         color: var(--lam-muted);
       }
+      .cards {
+        flex: 1 1 100%;
+        min-width: 0;
+      }
+      .layer-index {
+        margin: 0.2rem 0 0.5rem;
+      }
+      .layer-index a {
+        display: inline-block;
+        max-width: 100%;
+        margin-right: 0.6em;
+        overflow-wrap: anywhere;
+      }
+      .card {
+        border: 1px solid var(--lam-ink);
+        border-left-width: 6px;
+        padding: 0.3rem 0.6rem 0.5rem;
+        margin: 0 0 0.8rem;
+        scroll-margin-top: 5.5rem;
+      }
+      .card h3 {
+        margin: 0.1rem 0 0.3rem;
+      }
+      .card h4 {
+        margin: 0.6rem 0 0.2rem;
+        padding: 0.1rem 0.3rem;
+        background: var(--lam-shade);
+        font-size: 0.95em;
+      }
+      .card .name input {
+        width: 100%;
+      }
+      .card .name {
+        display: block;
+      }
+      .card-field {
+        display: flex;
+        flex-wrap: wrap;
+        align-items: baseline;
+        gap: 0.1rem 0.4rem;
+        padding: 0.15rem 0;
+        border-bottom: 1px solid var(--lam-rule);
+      }
+      .card-field > .label {
+        flex: 1 1 9rem;
+        min-width: 0;
+      }
+      .card-field select {
+        max-width: 100%;
+      }
+      :host([cards]) strata-column {
+        min-width: 0;
+        flex-basis: 100%;
+      }
     `,
   ];
 
@@ -238,6 +318,53 @@ export class StrataEditor extends LitElement {
       >${note}`;
   }
 
+  /** The name field and the move/remove buttons of layer `i` (a table head cell or a card head). */
+  private layerTools(l: Layer, i: number, n: number): TemplateResult {
+    return html`<span class="tools">
+      <button type="button" title="Move one bed down, toward the opening" aria-label="Move ${l.name} down (toward the opening)" ?disabled=${i === 0} @click=${() => this.moveLayer(i, -1)}>▼ down</button>
+      <button type="button" title="Move one bed up, away from the opening" aria-label="Move ${l.name} up (away from the opening)" ?disabled=${i === n - 1} @click=${() => this.moveLayer(i, 1)}>▲ up</button>
+      <button type="button" aria-label="Remove layer ${i + 1} (${l.name})" ?disabled=${n === 1} @click=${() => this.removeLayer(i)}>Remove</button>
+    </span>`;
+  }
+
+  private position(i: number): string {
+    if (i !== 0) return '';
+    return this.project.opening.type === 'cantilever' ? ' — underside of the overhang' : ' — immediate roof';
+  }
+
+  /** Narrow screens: one card per layer, stacked, with an index of the layers at the top. */
+  private renderCards(group: (i: number) => string): TemplateResult {
+    const p = this.project;
+    const n = p.layers.length;
+    return html`<div class="cards">
+      <p class="layer-index">
+        ${n} layer${n === 1 ? '' : 's'}, listed upward from the opening:
+        ${p.layers.map((l, i) => html`<a href="#layer-card-${i}" @click=${(e: Event) => this.goToCard(e, i)}>${i + 1} ${l.name}</a>`)}
+      </p>
+      ${p.layers.map(
+        (l, i) => html`<section class="card" id="layer-card-${i}" data-layer=${i} aria-labelledby="layer-card-${i}-h">
+          <h3 id="layer-card-${i}-h">Layer ${i + 1} of ${n}${this.position(i)}${group(i)}</h3>
+          <span class="name">${textField(this, { label: `Name of layer ${i + 1}`, path: `layers[${i}].name`, value: l.name, compact: true, size: 20, error: errorFor(this.fieldErrors, `layers[${i}].name`) })}</span>
+          ${this.layerTools(l, i, n)}
+          ${ROWS.map((row) =>
+            row.kind === 'band'
+              ? html`<h4>${row.label}${row.note ? html` <span class="hint">(${row.note})</span>` : nothing}</h4>`
+              : html`<div class="card-field"><span class="label" aria-hidden="true">${row.label}</span>${this.cell(row, l, i)}</div>`,
+          )}
+        </section>`,
+      )}
+      <button type="button" class="add" @click=${this.addLayer}>+ Add a layer above</button>
+      <p class="hint">Layer 1 is the immediate roof; layers are listed upward. A new layer starts from a generic 0.5 m sedimentary bed with 3 MPa Brazilian strength — replace every value.</p>
+    </div>`;
+  }
+
+  private goToCard(e: Event, i: number): void {
+    e.preventDefault();
+    const card = this.renderRoot.querySelector<HTMLElement>(`#layer-card-${i}`);
+    card?.scrollIntoView({ block: 'start' });
+    card?.querySelector<HTMLElement>('input')?.focus({ preventScroll: true });
+  }
+
   override render() {
     const p = this.project;
     if (!p) return nothing;
@@ -246,6 +373,12 @@ export class StrataEditor extends LitElement {
       const g = this.analysis?.report.layers[i]?.group;
       return this.analysis && this.analysis.report.layers.length === n && g !== undefined ? ` · group ${g + 1}` : '';
     };
+    if (this.cards) {
+      return html`<div class="layout">
+        ${this.renderCards(group)}
+        <strata-column .project=${p} .analysis=${this.analysis} units=${this.units}></strata-column>
+      </div>`;
+    }
     return html`<div class="layout">
       <div class="table-wrap">
         <table aria-label="Roof strata, one column per layer, immediate roof first">
@@ -254,13 +387,9 @@ export class StrataEditor extends LitElement {
               <th scope="col">Field</th>
               ${p.layers.map(
                 (l, i) => html`<th scope="col" data-layer=${i}>
-                  <span class="pos">Layer ${i + 1}${i === 0 ? (p.opening.type === 'cantilever' ? ' — underside of the overhang' : ' — immediate roof') : ''}${group(i)}</span>
+                  <span class="pos">Layer ${i + 1}${this.position(i)}${group(i)}</span>
                   ${textField(this, { label: `Name of layer ${i + 1}`, path: `layers[${i}].name`, value: l.name, compact: true, size: 20, error: errorFor(this.fieldErrors, `layers[${i}].name`) })}
-                  <span class="tools">
-                    <button type="button" title="Move one bed down, toward the opening" aria-label="Move ${l.name} down (toward the opening)" ?disabled=${i === 0} @click=${() => this.moveLayer(i, -1)}>▼ down</button>
-                    <button type="button" title="Move one bed up, away from the opening" aria-label="Move ${l.name} up (away from the opening)" ?disabled=${i === n - 1} @click=${() => this.moveLayer(i, 1)}>▲ up</button>
-                    <button type="button" aria-label="Remove layer ${i + 1} (${l.name})" ?disabled=${n === 1} @click=${() => this.removeLayer(i)}>Remove</button>
-                  </span>
+                  ${this.layerTools(l, i, n)}
                 </th>`,
               )}
             </tr>

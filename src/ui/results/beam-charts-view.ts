@@ -181,8 +181,8 @@ export class BeamChartsView extends LitElement {
                   ${tracedNumber(`layers[${i}].plate.maxTension_MPa`, displayValue(lr.plate.maxTension_MPa, 'stress', u).text, displayValue(lr.plate.maxTension_MPa, 'stress', u).unit, lr.plate.maxTension_MPa)}
                   at the ${lr.plate.at}; deflection
                   ${tracedNumber(`layers[${i}].plate.deflection_mm`, displayValue(lr.plate.deflection_mm, 'deflection', u).text, displayValue(lr.plate.deflection_mm, 'deflection', u).unit, lr.plate.deflection_mm)}
-                  (β = ${tracedNumber(`layers[${i}].plate.beta`, displayValue(lr.plate.beta, null, u, 4).text, '', lr.plate.beta)},
-                  α = ${tracedNumber(`layers[${i}].plate.alpha`, displayValue(lr.plate.alpha, null, u, 4).text, '', lr.plate.alpha)}).
+                  (β = ${tracedNumber(`layers[${i}].plate.beta`, displayValue(lr.plate.beta, null, u).text, '', lr.plate.beta)},
+                  α = ${tracedNumber(`layers[${i}].plate.alpha`, displayValue(lr.plate.alpha, null, u).text, '', lr.plate.alpha)}).
                   The beam panel above shows the plane-strain strip across the short span for comparison.
                 </p>`
               : nothing}

@@ -1,11 +1,12 @@
 /**
  * A result value in the chosen display unit system: the number as text (report's number
- * formatting, so the app and the report agree) and the unit label. Display only: the
+ * formatting, so the app and the report agree: the one precision rule of
+ * model/number-format.ts) and the unit label. Display only: the
  * analysis always runs in file units.
  *     displayValue(6, 'length', 'US') // { text: "19.7", unit: "ft" }
  */
 import { toDisplay, unitLabel, type Quantity, type UnitSystem } from '../../model/units';
-import { numberText } from '../../report/number-text';
+import { numberText, PRECISION } from '../../model/number-format';
 
 export interface DisplayedValue {
   text: string;
@@ -16,7 +17,7 @@ export function displayValue(
   value: number | null | undefined,
   quantity: Quantity | null,
   units: UnitSystem,
-  significant = 3,
+  significant: number = PRECISION.result,
 ): DisplayedValue {
   if (value === null || value === undefined || !Number.isFinite(value)) {
     return { text: numberText(null), unit: quantity ? unitLabel(quantity, units) : '' };
@@ -30,7 +31,7 @@ export function displayText(
   value: number | null | undefined,
   quantity: Quantity | null,
   units: UnitSystem,
-  significant = 3,
+  significant: number = PRECISION.result,
 ): string {
   const d = displayValue(value, quantity, units, significant);
   return d.unit ? `${d.text} ${d.unit}` : d.text;

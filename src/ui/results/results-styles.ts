@@ -66,6 +66,11 @@ export const resultsStyles = css`
     gap: 0 2rem;
     align-items: start;
   }
+  /* A table wider than a phone scrolls sideways inside its own box, never past the page. */
+  .pair > div {
+    min-width: 0;
+    overflow-x: auto;
+  }
   @media (min-width: 72rem) {
     .pair {
       grid-template-columns: minmax(0, 1.15fr) minmax(0, 1fr);

@@ -20,6 +20,7 @@ import { MODE_NAME } from '../../analysis/check-labels';
 import { spanWordOf } from '../../analysis/verdict';
 import { adoptableSpan } from './adoptable-span';
 import { displayText, displayValue } from './display-value';
+import { inputSignificant } from '../../model/number-format';
 import { tracedNumber } from './traced-number';
 import { resultsStyles } from './results-styles';
 
@@ -108,8 +109,8 @@ export class SpanFinderView extends LitElement {
               <td class="note">
                 ${v === null ? (k !== 'sliding' && !counted(k) ? `counts in no layer at the current ${spanWord}` : WHY_NULL[k]) : v >= current ? `meets the target at the current ${spanWord}` : `below the current ${spanWord}: this mode fails now`}
                 ${k === 'sliding' && slidingShort
-                  ? html`<br /><strong>Sliding falls short at the current ${spanWord}</strong> (least FS ${numberText(leastSliding, 3)} against
-                      ${numberText(p.design.fsTarget.sliding, 3)}); a shorter ${spanWord} makes it worse, so it must be resolved on its own.`
+                  ? html`<br /><strong>Sliding falls short at the current ${spanWord}</strong> (least FS ${numberText(leastSliding)} against
+                      ${numberText(p.design.fsTarget.sliding)}); a shorter ${spanWord} makes it worse, so it must be resolved on its own.`
                   : nothing}
               </td>
             </tr>`;
@@ -127,7 +128,7 @@ export class SpanFinderView extends LitElement {
           </tr>
           <tr data-mode="current">
             <th scope="row">Current ${spanWord}</th>
-            <td class="num" data-role="current-span" data-si-value=${current}>${displayText(current, 'length', u, 4)}</td>
+            <td class="num" data-role="current-span" data-si-value=${current}>${displayText(current, 'length', u, inputSignificant(u !== 'SI'))}</td>
             <td class="note">
               ${adopt === null ? '' : adopt >= current ? 'within the governing largest span' : html`<strong>exceeds the governing largest span</strong>`}
             </td>
@@ -143,7 +144,7 @@ export class SpanFinderView extends LitElement {
           @click=${() => adopt !== null && this.useSpan(adopt)}
           title="Set the ${spanWord} to the governing largest ${spanWord} (rounded down to 1 mm)"
         >
-          Use this ${spanWord}${adopt !== null ? ` (${displayText(adopt, 'length', u, 4)})` : ''}
+          Use this ${spanWord}${adopt !== null ? ` (${displayText(adopt, 'length', u, inputSignificant(u !== 'SI'))})` : ''}
         </button>
         ${adopt !== null ? html`<span class="note">the governing largest ${spanWord}, rounded down to 1 mm</span>` : nothing}
       </div>

@@ -12,7 +12,7 @@ import { unsafeSVG } from 'lit/directives/unsafe-svg.js';
 import type { Project } from '../../model/types';
 import type { UnitSystem } from '../../model/units';
 import type { Analysis } from '../../analysis/types';
-import { numberText } from '../../report/number-text';
+import { PRECISION, numberText } from '../../report/number-text';
 import { strengthChainSvg } from '../../report/charts';
 import { displayValue, displayText } from './display-value';
 import { tracedNumber } from './traced-number';
@@ -91,10 +91,10 @@ export class StrengthChainView extends LitElement {
           <p class="note">
             Lab results: ${d.lab.source === 'specimens'
               ? html`${d.lab.n} accepted specimen${d.lab.n === 1 ? '' : 's'} of ${d.lab.specimens.length}
-                  (${d.lab.method} test${d.lab.method === 'brazilian' ? html`, direct = ${numberText(d.lab.directFactor, 2)} × Brazilian` : ''}),
+                  (${d.lab.method} test${d.lab.method === 'brazilian' ? html`, direct = ${numberText(d.lab.directFactor)} × Brazilian` : ''}),
                   mean ${d.lab.mean_MPa === null ? '—' : tracedNumber(`detail.layers[${i}].lab.mean_MPa`, displayValue(d.lab.mean_MPa, 'stress', u).text, displayValue(d.lab.mean_MPa, 'stress', u).unit, d.lab.mean_MPa)},
-                  CoV ${d.lab.cov === null ? '—' : tracedNumber(`detail.layers[${i}].lab.cov`, numberText(d.lab.cov, 3), '', d.lab.cov)},
-                  characteristic value by the ${d.lab.rule === 'mean' ? 'mean' : 'lower 5 % fractile'} rule${d.lab.kn !== null ? html` (kn = ${numberText(d.lab.kn, 3)})` : ''}.`
+                  CoV ${d.lab.cov === null ? '—' : tracedNumber(`detail.layers[${i}].lab.cov`, numberText(d.lab.cov), '', d.lab.cov)},
+                  characteristic value by the ${d.lab.rule === 'mean' ? 'mean' : 'lower 5 % fractile'} rule${d.lab.kn !== null ? html` (kn = ${numberText(d.lab.kn)})` : ''}.`
               : html`a tensile strength given directly (${d.lab.method}).`}
           </p>`
         : html`<p class="empty">No strength details.</p>`}
@@ -103,23 +103,23 @@ export class StrengthChainView extends LitElement {
         <tbody>
           <tr>
             <th scope="row">RQD</th>
-            <td class="num">${tracedNumber(`layers[${i}].strength.rqd`, numberText(st.rqd, 3), '%', st.rqd)}</td>
+            <td class="num">${tracedNumber(`layers[${i}].strength.rqd`, numberText(st.rqd), '%', st.rqd)}</td>
             <td class="note">Priest &amp; Hudson (1976), from the fracture frequency or joint spacing; 100 if neither is given.</td>
           </tr>
           <tr>
             <th scope="row">GSI</th>
-            <td class="num">${tracedNumber(`layers[${i}].strength.gsi`, numberText(st.gsi, 3), '', st.gsi)}</td>
-            <td class="note">1.5 × JCond89 (${input ? numberText(input.jointing.jointCondition, 3) : '—'}) + RQD/2, within 0–100 (Hoek, Carter &amp; Diederichs 2013).</td>
+            <td class="num">${tracedNumber(`layers[${i}].strength.gsi`, numberText(st.gsi), '', st.gsi)}</td>
+            <td class="note">1.5 × JCond89 (${input ? numberText(input.jointing.jointCondition, PRECISION.storedInput) : '—'}) + RQD/2, within 0–100 (Hoek, Carter &amp; Diederichs 2013).</td>
           </tr>
           ${d
             ? html`<tr>
                   <th scope="row">Hoek–Brown mb, s, a</th>
                   <td class="num">
-                    ${tracedNumber(`detail.layers[${i}].hoekBrown.mb`, numberText(d.hoekBrown.mb, 4), '', d.hoekBrown.mb)},
-                    ${tracedNumber(`detail.layers[${i}].hoekBrown.s`, numberText(d.hoekBrown.s, 4), '', d.hoekBrown.s)},
-                    ${tracedNumber(`detail.layers[${i}].hoekBrown.a`, numberText(d.hoekBrown.a, 4), '', d.hoekBrown.a)}
+                    ${tracedNumber(`detail.layers[${i}].hoekBrown.mb`, numberText(d.hoekBrown.mb), '', d.hoekBrown.mb)},
+                    ${tracedNumber(`detail.layers[${i}].hoekBrown.s`, numberText(d.hoekBrown.s), '', d.hoekBrown.s)},
+                    ${tracedNumber(`detail.layers[${i}].hoekBrown.a`, numberText(d.hoekBrown.a), '', d.hoekBrown.a)}
                   </td>
-                  <td class="note">From GSI, mi = ${input ? numberText(input.hoekBrown.mi, 3) : '—'} and D = ${input ? numberText(input.hoekBrown.disturbance, 2) : '—'} (Hoek, Carranza-Torres &amp; Corkum 2002); rock-mass tension = characteristic × s·mi/mb; rock-mass UCS ${tracedNumber(`detail.layers[${i}].hoekBrown.massUcs_MPa`, displayValue(d.hoekBrown.massUcs_MPa, 'stress', u).text, displayValue(d.hoekBrown.massUcs_MPa, 'stress', u).unit, d.hoekBrown.massUcs_MPa)}.</td>
+                  <td class="note">From GSI, mi = ${input ? numberText(input.hoekBrown.mi, PRECISION.storedInput) : '—'} and D = ${input ? numberText(input.hoekBrown.disturbance, PRECISION.storedInput) : '—'} (Hoek, Carranza-Torres &amp; Corkum 2002); rock-mass tension = characteristic × s·mi/mb; rock-mass UCS ${tracedNumber(`detail.layers[${i}].hoekBrown.massUcs_MPa`, displayValue(d.hoekBrown.massUcs_MPa, 'stress', u).text, displayValue(d.hoekBrown.massUcs_MPa, 'stress', u).unit, d.hoekBrown.massUcs_MPa)}.</td>
                 </tr>
                 <tr>
                   <th scope="row">Block size</th>
@@ -127,7 +127,7 @@ export class StrengthChainView extends LitElement {
                   <td class="note">
                     Effective size min(thickness, joint spacing, span) = ${displayText(d.blockSize.dEffRaw_mm, 'smallLength', u)},
                     ${d.blockSize.clamped ? html`<strong>clamped</strong> to the ${displayText(d.blockSize.dLab_mm, 'smallLength', u)}–${displayText(200, 'smallLength', u)} range of the size law,` : 'inside the size-law range,'}
-                    factor (d_lab/d_eff)^0.18 = ${numberText(d.blockSize.factor, 3)} (Hoek &amp; Brown 1980).
+                    factor (d_lab/d_eff)^0.18 = ${numberText(d.blockSize.factor)} (Hoek &amp; Brown 1980).
                   </td>
                 </tr>`
             : nothing}

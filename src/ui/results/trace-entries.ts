@@ -6,7 +6,7 @@
  */
 import type { TraceEntry } from '../../model/types';
 import { toDisplay, unitLabel, type UnitSystem } from '../../model/units';
-import { numberText } from '../../report/number-text';
+import { numberText, PRECISION } from '../../report/number-text';
 import { withUnit } from '../../report/unit-text';
 import { quantityOfUnit } from '../../report/format';
 
@@ -38,10 +38,10 @@ export function safeText(render: () => string, fallback: string): string {
 
 /** A traced value with its unit, plus the US equivalent in brackets when US units are shown. */
 export function valueText(value: number, unit: string, units: UnitSystem): string {
-  const base = withUnit(numberText(value, 6), unit);
+  const base = withUnit(numberText(value, PRECISION.trace), unit);
   if (units !== 'US') return base;
   const q = quantityOfUnit(unit);
   if (!q || !Number.isFinite(value)) return base;
-  return `${base} (${numberText(toDisplay(value, q, 'US'), 4)} ${unitLabel(q, 'US')})`;
+  return `${base} (${numberText(toDisplay(value, q, 'US'))} ${unitLabel(q, 'US')})`;
 }
 

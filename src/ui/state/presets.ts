@@ -1,24 +1,12 @@
 /**
- * The demo presets shipped in `presets/` (invented data), bundled as Vite JSON imports. They go
- * through the model's validation like any opened file.
+ * The demo presets shipped in `presets/` (invented data; the list lives in
+ * `model/demo-presets.ts`). They go through the model's validation like any opened file.
  */
-import coalRoom from '../../../presets/coal-room-shale.lamina.json';
-import driftLimestone from '../../../presets/drift-limestone.lamina.json';
-import quarryBench from '../../../presets/quarry-bench-overhang.lamina.json';
-import intersectionRoof from '../../../presets/intersection-limestone.lamina.json';
+import { DEMO_PRESETS, type DemoPreset } from '../../model/demo-presets';
 
-export interface Preset {
-  id: string;
-  label: string;
-  data: unknown;
-}
+export type Preset = DemoPreset;
 
-export const PRESETS: readonly Preset[] = [
-  { id: 'coal-room-shale', label: 'Coal room, laminated shale roof (beam, 3 layers)', data: coalRoom },
-  { id: 'drift-limestone', label: 'Drift in thin-bedded limestone', data: driftLimestone },
-  { id: 'quarry-bench-overhang', label: 'Sandstone quarry bench overhang (cantilever)', data: quarryBench },
-  { id: 'intersection-limestone', label: 'Four-way intersection in limestone (6 × 6 m entries, diagonal span)', data: intersectionRoof },
-];
+export const PRESETS: readonly Preset[] = DEMO_PRESETS;
 
 /** The preset loaded on a first visit. */
 export const DEMO_PRESET = PRESETS[0];

@@ -4,15 +4,35 @@
  * edit is validated by the model before it lands (a rejected edit keeps the project and sets
  * `fieldErrors`); accepted edits push undo history, autosave, and schedule the analysis
  * ~150 ms after the last edit (`flush()` runs it at once, for tests and the benchmark).
+ *
+ * Two kinds of refusal are kept apart:
+ * - a refused FIELD (`fieldErrors`): the field still holds the refused text, so its error stays
+ *   beside it until that field is accepted (or the project is replaced, undone or redone), and
+ *   `stale` is true: the results are for the last accepted values;
+ * - a refused PROJECT (a file, a link, a paste or a layer change: `fileErrors`): its errors
+ *   are listed on their own (the app shows them in a dialog) and are never attached to the
+ *   current, valid fields.
  */
 import { MIGRATED_CODE } from '../../model/validate';
 import type { Project } from '../../model/types';
 import type { Analysis, DesignChart, SpanCurve } from '../../analysis/types';
 import { setAtPath } from '../../model/project-path';
 import { UndoHistory } from './undo-history';
-import { writeAutosave, type KeyValueStorage } from './autosave';
+import { saveAutosave, type KeyValueStorage } from './autosave';
 
 export type UnitSystem = 'SI' | 'US';
+
+/**
+ * Autosave as the user must know it: `saved` (the last write succeeded, or there was nothing
+ * to write), `failed` (the browser refused the last write; the message says why and what to
+ * do), `paused` (an autosave that could not be backed up is kept untouched: `held` is its
+ * text, offered for download; nothing is written until `resumeAutosave()`).
+ */
+export interface AutosaveState {
+  status: 'saved' | 'failed' | 'paused';
+  message: string | null;
+  held: string | null;
+}
 
 export interface FieldError {
   path: string;
@@ -28,9 +48,12 @@ export interface AppState {
   chartLayer: number;
   minThickness_m: number | null;
   error: string | null;
+  /** Fields holding a refused value (unparsable text or a value the model refused). */
   fieldErrors: FieldError[];
-  /** Where the field errors came from: one field edit, or a whole project (file, preset, paste). */
-  fieldErrorsFrom: 'edit' | 'project' | null;
+  /** True while any field holds a refused value: the results are for the last accepted values. */
+  stale: boolean;
+  /** A refused file, link or paste: where it came from and every error in it. */
+  fileErrors: { source: string; errors: FieldError[] } | null;
   canUndo: boolean;
   canRedo: boolean;
   /** True between an accepted edit and the analysis that follows it. */
@@ -39,6 +62,7 @@ export interface AppState {
   inputWarnings: FieldError[];
   /** A one-line message for the user (file opened, link copied, autosave ignored …). */
   notice: string | null;
+  autosave: AutosaveState;
   /** Milliseconds spent in each step of the last analysis (for the benchmark). */
   timings: { analyse: number; curve: number; chart: number; minThickness: number };
 }
@@ -78,6 +102,8 @@ export class ProjectStore {
   private readonly history = new UndoHistory<Project>(100, 1000);
   private readonly listeners = new Set<Listener>();
   private timer: ReturnType<typeof setTimeout> | null = null;
+  /** Refused fields by the path that was edited (a refusal may name other paths too). */
+  private refused = new Map<string, FieldError[]>();
   /** True once the user picked a layer for the chart; until then it follows the governing layer. */
   private chartLayerChosen = false;
   readonly debounceMs: number;
@@ -98,12 +124,14 @@ export class ProjectStore {
       minThickness_m: null,
       error: null,
       fieldErrors: [],
-      fieldErrorsFrom: null,
+      stale: false,
+      fileErrors: null,
       canUndo: false,
       canRedo: false,
       pending: true,
       inputWarnings: checked.warnings.map(plain),
       notice: null,
+      autosave: { status: 'saved', message: null, held: null },
       timings: { analyse: 0, curve: 0, chart: 0, minThickness: 0 },
     };
     this.runAnalysis();
@@ -125,10 +153,32 @@ export class ProjectStore {
     try {
       candidate = setAtPath(this.state.project, path, value);
     } catch (err) {
-      this.set({ fieldErrors: [{ path, message: errorText(err) }], fieldErrorsFrom: 'edit' });
+      this.refuseField(path, [{ path, message: errorText(err) }]);
       return false;
     }
     return this.accept(candidate, path);
+  }
+
+  /**
+   * A field holds text that cannot be read (`message`), or no longer does (`null`). The project
+   * is unchanged either way; the field is listed in `fieldErrors` and the results marked stale.
+   */
+  markRefused(path: string, message: string | null): void {
+    if (message === null) {
+      if (this.refused.delete(path)) this.set({});
+      return;
+    }
+    this.refuseField(path, [{ path, message }]);
+  }
+
+  private refuseField(path: string, errors: FieldError[]): void {
+    this.refused.set(path, errors.map(plain));
+    this.set({});
+  }
+
+  private clearRefused(path: string | null): void {
+    if (path === null) this.refused.clear();
+    else this.refused.delete(path);
   }
 
   /** Replace the whole project (open file, preset, paste, layer add/remove/reorder). */
@@ -146,29 +196,36 @@ export class ProjectStore {
     }
     if (!checked.ok) {
       const errors = checked.errors.length > 0 ? checked.errors.map(plain) : [{ path: '', message: 'refused' }];
-      this.set({
-        fieldErrors: errors,
-        fieldErrorsFrom: key !== null ? 'edit' : 'project',
-        notice: source ? `${source}: not loaded — ${errors.length} field error${errors.length === 1 ? '' : 's'}; the current project is unchanged.` : this.state.notice,
-      });
+      if (key !== null) {
+        this.refuseField(key, errors);
+      } else {
+        this.set({
+          fileErrors: { source: source ?? 'project', errors },
+          notice: `${source ?? 'The project'}: not loaded — ${errors.length} error${errors.length === 1 ? '' : 's'}; the current project is unchanged.`,
+        });
+      }
       return false;
     }
     if (key !== null && JSON.stringify(checked.project) === JSON.stringify(this.state.project)) {
       // The same value again (e.g. retyped after a refused edit): nothing to undo or re-analyse.
-      if (this.state.fieldErrors.length) this.set({ fieldErrors: [], fieldErrorsFrom: null });
+      if (this.refused.has(key)) {
+        this.clearRefused(key);
+        this.set({});
+      }
       return true;
     }
     this.history.record(this.state.project, key);
     if (source) this.chartLayerChosen = false;
+    // A new whole project resets every field, so no field holds a refused value any more.
+    this.clearRefused(key);
     this.set({
       project: checked.project,
       inputWarnings: checked.warnings.map(plain),
-      fieldErrors: [],
-      fieldErrorsFrom: null,
+      ...(key === null ? { fileErrors: null } : {}),
       pending: true,
       notice: migrationNotice(checked.warnings) ?? (source ? `${/^(File|Demo|Project link)\b/.test(source) ? 'Loaded' : 'Applied'}: ${source}.` : this.state.notice),
     });
-    writeAutosave(this.deps.storage ?? null, checked.project);
+    this.autosave(checked.project);
     this.schedule();
     return true;
   }
@@ -185,10 +242,40 @@ export class ProjectStore {
 
   private restore(project: Project): boolean {
     this.deps.mark?.('lamina:edit');
-    this.set({ project, fieldErrors: [], fieldErrorsFrom: null, pending: true });
-    writeAutosave(this.deps.storage ?? null, project);
+    this.clearRefused(null);
+    this.set({ project, pending: true });
+    this.autosave(project);
     this.schedule();
     return true;
+  }
+
+  /** Write the project to the autosave unless paused; a refusal is shown, never swallowed. */
+  private autosave(project: Project): void {
+    const storage = this.deps.storage ?? null;
+    if (!storage || this.state.autosave.status === 'paused') return;
+    const r = saveAutosave(storage, project);
+    if (r.ok) {
+      if (this.state.autosave.status !== 'saved') this.set({ autosave: { status: 'saved', message: null, held: null } });
+      return;
+    }
+    this.set({
+      autosave: {
+        status: 'failed',
+        message: `Autosave failed: ${r.reason}. Your latest changes are not kept in this browser — use Save to keep them as a file.`,
+        held: null,
+      },
+    });
+  }
+
+  /** Keep an autosave that could not be backed up: pause autosave and hold its text for download. */
+  holdAutosave(text: string, message: string): void {
+    this.set({ autosave: { status: 'paused', message, held: text } });
+  }
+
+  /** The user kept (or gave up) the held autosave: autosave the current project again. */
+  resumeAutosave(): void {
+    this.set({ autosave: { status: 'saved', message: null, held: null } });
+    this.autosave(this.state.project);
   }
 
   setUnits(units: UnitSystem): void {
@@ -209,9 +296,14 @@ export class ProjectStore {
     this.set({ notice });
   }
 
-  /** Show errors that did not come from an edit (a file that failed to parse). */
-  setFieldErrors(errors: FieldError[], notice: string | null = null): void {
-    this.set({ fieldErrors: errors.map(plain), fieldErrorsFrom: errors.length ? 'project' : null, notice });
+  /** A file that could not be read or parsed: list its errors on their own (never on the fields). */
+  setFileErrors(source: string, errors: FieldError[], notice: string | null = null): void {
+    this.set({ fileErrors: errors.length ? { source, errors: errors.map(plain) } : null, notice });
+  }
+
+  /** The user closed the list of a refused file's errors. */
+  dismissFileErrors(): void {
+    if (this.state.fileErrors) this.set({ fileErrors: null });
   }
 
   /** Run a pending analysis now (tests, benchmark). */
@@ -282,9 +374,12 @@ export class ProjectStore {
   }
 
   private set(patch: Partial<AppState>): void {
+    const fieldErrors = [...this.refused.values()].flat();
     this.state = {
       ...this.state,
       ...patch,
+      fieldErrors,
+      stale: fieldErrors.length > 0,
       canUndo: this.history.canUndo,
       canRedo: this.history.canRedo,
     };

@@ -19,8 +19,8 @@ describe('designChartSvg', () => {
     const svg = designChartSvg(design(), 'crushing', { units: 'US', currentSpan_m: 6, currentThickness_m: 0.45 });
     expectWellFormed(svg);
     expectNoBadNumbers(svg);
-    // 6 / 0.3048 = 19.69 ft; 0.45 / 0.3048 = 1.48 ft (hand)
-    expectLabels(svg, ['Span (ft)', 'Thickness (ft)', 'current design (19.69 ft, 1.48 ft)', 'FS = target (2)']);
+    // 6 / 0.3048 = 19.685 → 19.7 ft; 0.45 / 0.3048 = 1.476 → 1.48 ft (hand; 3 significant figures)
+    expectLabels(svg, ['Span (ft)', 'Thickness (ft)', 'current design (19.7 ft, 1.48 ft)', 'FS = target (2)']);
   });
 
   it('designChartSvg renders every mode; a mode that does not apply says so', () => {

@@ -14,9 +14,9 @@ describe('fsSpanSvg', () => {
       'FS / target (log scale)',
       'FS = target (tension 4, crushing 2, sliding 1.5; deflection: δ/t = limit)',
       'tension max 1.91 m (governs)',
-      'crushing max 15.35 m',
-      'snap-through max 15.46 m',
-      'deflection max 12.58 m',
+      'crushing max 15.4 m',
+      'snap-through max 15.5 m',
+      'deflection max 12.6 m',
       'current span 6 m',
       'snaps',
       'tension (target 4)',
@@ -29,8 +29,8 @@ describe('fsSpanSvg', () => {
     const svg = fsSpanSvg(curve(), MAX_SPAN, { units: 'US' });
     expectWellFormed(svg);
     expectNoBadNumbers(svg);
-    // 1.908 / 0.3048 = 6.260 ft; 6 / 0.3048 = 19.685 ft (hand)
-    expectLabels(svg, ['Span (ft)', 'tension max 6.26 ft (governs)', 'current span 19.69 ft']);
+    // 1.908 / 0.3048 = 6.260 ft; 6 / 0.3048 = 19.685 → 19.7 ft (hand; 3 significant figures)
+    expectLabels(svg, ['Span (ft)', 'tension max 6.26 ft (governs)', 'current span 19.7 ft']);
   });
 
   it('fsSpanSvg shades the snap-through region beyond its span', () => {
@@ -51,7 +51,7 @@ describe('fsSpanSvg', () => {
     const c = curve();
     c.counts = { tension: false, crushing: true, sliding: true, deflection: true, snapThrough: true };
     const svg = fsSpanSvg(c, { ...MAX_SPAN, governing: 12.58 }, { units: 'SI' });
-    expectLabels(svg, ['tension (not counted)', 'deflection max 12.58 m (governs)']);
+    expectLabels(svg, ['tension (not counted)', 'deflection max 12.6 m (governs)']);
   });
 
   it('fsSpanSvg without a max-span report and with gaps (null FS) still renders', () => {

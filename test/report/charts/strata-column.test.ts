@@ -20,13 +20,13 @@ describe('strataColumnSvg', () => {
     expectLabels(svg, ['Height above the roof line (m)', 'span 6 m, clamped ends', 't = 0.45 m', 'Shale', 'Sandstone', 'Mudstone']);
   });
 
-  it('strataColumnSvg(..., US) labels the axis in ft and the span as 19.69 ft (6 / 0.3048, METHODS §13)', () => {
+  it('strataColumnSvg(..., US) labels the axis in ft and the span as 19.7 ft (6 / 0.3048 = 19.685 to 3 significant figures, METHODS §13)', () => {
     const svg = strataColumnSvg(project(), analysis(), { units: 'US' });
     expectWellFormed(svg);
     expectNoBadNumbers(svg);
     // 6 m / 0.3048 m/ft = 19.685 ft; 0.45 m / 0.3048 = 1.476 ft; 10 kPa / 47.880 Pa/psf
     // (1 ksf = 47.880 kPa, METHODS §13) = 208.86 psf, shown whole above 100 (hand calculation)
-    expectLabels(svg, ['Height above the roof line (ft)', 'span 19.69 ft', 't = 1.48 ft', 'surcharge 209 psf']);
+    expectLabels(svg, ['Height above the roof line (ft)', 'span 19.7 ft', 't = 1.48 ft', 'surcharge 209 psf']);
   });
 
   it('strataColumnSvg escapes a hostile layer name and title as text', () => {

@@ -23,8 +23,8 @@ describe('voussoirArchSvg', () => {
     const svg = voussoirArchSvg(stable, { units: 'US' });
     expectWellFormed(svg);
     expectNoBadNumbers(svg);
-    // 6/0.3048 = 19.69 ft; 0.2256/0.3048 = 0.740 ft; 1.348 × 145.04 = 195.5 psi → 196 (hand)
-    expectLabels(svg, ['span 19.69 ft', 'lever arm z = 0.74 ft', 'max compression fc = 196 psi', 'midspan deflection δ = 0.0929 in']);
+    // 6/0.3048 = 19.685 → 19.7 ft (3 significant figures); 0.2256/0.3048 = 0.740 ft; 1.348 × 145.04 = 195.5 psi → 196 (hand)
+    expectLabels(svg, ['span 19.7 ft', 'lever arm z = 0.74 ft', 'max compression fc = 196 psi', 'midspan deflection δ = 0.0929 in']);
   });
 
   it('voussoirArchSvg thrust line rises by z from the abutment zone to midspan (parabola apex = z·scale above the ends)', () => {

@@ -38,8 +38,8 @@ describe('valueText(value, unit, units)', () => {
     expect(valueText(11.25, 'kPa', 'SI')).toBe('11.25 kPa');
     expect(valueText(35, 'deg', 'SI')).toBe('35°');
   });
-  it('US: adds the US equivalent — 6 m is 19.69 ft (6 / 0.3048 = 19.685, METHODS §13)', () => {
-    expect(valueText(6, 'm', 'US')).toBe('6 m (19.69 ft)');
+  it('US: adds the US equivalent — 6 m is 19.7 ft (6 / 0.3048 = 19.685 to 3 significant figures, METHODS §13)', () => {
+    expect(valueText(6, 'm', 'US')).toBe('6 m (19.7 ft)');
   });
   it('US: 1 MPa is 145 psi (1 MPa = 145.04 psi, common practice; 4 significant digits → 145)', () => {
     expect(valueText(1, 'MPa', 'US')).toBe('1 MPa (145 psi)');

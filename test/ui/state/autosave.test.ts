@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { AUTOSAVE_BACKUP_KEY, AUTOSAVE_KEY, readAutosave, writeAutosave } from '../../../src/ui/state/autosave';
+import { AUTOSAVE_BACKUP_KEY, AUTOSAVE_KEY, readAutosave, setBackup, writeAutosave } from '../../../src/ui/state/autosave';
 
 function memoryStorage() {
   const m = new Map<string, string>();
@@ -15,7 +15,7 @@ describe('autosave', () => {
   it('writeAutosave then readAutosave gives the same JSON back', () => {
     const s = memoryStorage();
     expect(writeAutosave(s, { title: 'x', layers: [1] })).toBe(true);
-    expect(readAutosave(s)).toEqual({ kind: 'found', data: { title: 'x', layers: [1] } });
+    expect(readAutosave(s)).toEqual({ kind: 'found', data: { title: 'x', layers: [1] }, text: '{"title":"x","layers":[1]}' });
   });
 
   it('nothing saved (or no storage) reads as none', () => {
@@ -24,11 +24,11 @@ describe('autosave', () => {
     expect(writeAutosave(null, {})).toBe(false);
   });
 
-  it('damaged text is reported as corrupt with a notice and set aside, not thrown', () => {
+  it('damaged text is reported as corrupt with its exact text, not thrown; setBackup then moves it aside', () => {
     const s = memoryStorage();
     s.setItem(AUTOSAVE_KEY, '{"title": ');
-    const r = readAutosave(s);
-    expect(r.kind).toBe('corrupt');
+    expect(readAutosave(s)).toEqual({ kind: 'corrupt', text: '{"title": ' });
+    expect(setBackup(s, '{"title": ')).toEqual({ ok: true });
     expect(s.map.get(AUTOSAVE_BACKUP_KEY)).toBe('{"title": ');
     expect(s.map.has(AUTOSAVE_KEY)).toBe(false);
   });

@@ -100,12 +100,13 @@ describe('ProjectStore', () => {
     expect(s.edit('layers[1].thickness_m', -0.2)).toBe(false);
     expect(s.getState().project.layers[1].thickness_m).toBe(1.2);
     expect(s.getState().fieldErrors).toEqual([{ path: 'layers[1].thickness_m', message: 'must be > 0 m, got -0.2' }]);
-    expect(s.getState().fieldErrorsFrom).toBe('edit');
+    expect(s.getState().stale).toBe(true);
     s.flush();
     expect(d.calls.analyse).toBe(before);
     // retyping the unchanged value clears the error without an undo step or an analysis
     expect(s.edit('layers[1].thickness_m', 1.2)).toBe(true);
     expect(s.getState().fieldErrors).toEqual([]);
+    expect(s.getState().stale).toBe(false);
     expect(s.getState().canUndo).toBe(false);
     expect(s.getState().pending).toBe(false);
     expect(s.edit('layers[1].thickness_m', 1.0)).toBe(true);
@@ -129,21 +130,53 @@ describe('ProjectStore', () => {
     expect(s.getState().canRedo).toBe(false);
   });
 
-  it('replace with a refused project leaves the old one and lists the errors', () => {
+  it('replace with a refused project leaves the old one and lists the errors apart from the fields', () => {
     const s = new ProjectStore(deps(), twoLayers());
     const bad = twoLayers();
     bad.layers[0].thickness_m = 0;
     expect(s.replace(bad, 'bad.lamina.json')).toBe(false);
     expect(s.getState().project.layers[0].thickness_m).toBe(0.5);
-    expect(s.getState().fieldErrors[0].path).toBe('layers[0].thickness_m');
+    expect(s.getState().fileErrors?.source).toBe('bad.lamina.json');
+    expect(s.getState().fileErrors?.errors[0].path).toBe('layers[0].thickness_m');
+    // the current project's fields are valid: nothing is attached to them, nothing is stale
+    expect(s.getState().fieldErrors).toEqual([]);
+    expect(s.getState().stale).toBe(false);
     expect(s.getState().notice).toMatch(/bad\.lamina\.json: not loaded/);
-    expect(s.getState().fieldErrorsFrom).toBe('project');
+    s.dismissFileErrors();
+    expect(s.getState().fileErrors).toBeNull();
+    expect(s.replace(bad, 'bad.lamina.json')).toBe(false);
     const good = twoLayers();
     good.opening.span_m = 5;
     expect(s.replace(good, 'File good.lamina.json')).toBe(true);
     expect(s.getState().notice).toBe('Loaded: File good.lamina.json.');
+    expect(s.getState().fileErrors).toBeNull();
+  });
+
+  it('a refused field stays listed and the results stale while other fields are edited, until it is accepted', () => {
+    const s = new ProjectStore(deps(), twoLayers());
+    expect(s.edit('layers[0].thickness_m', -1)).toBe(false);
+    expect(s.edit('opening.span_m', 7)).toBe(true);
+    expect(s.getState().stale).toBe(true);
+    expect(s.getState().fieldErrors.map((e) => e.path)).toEqual(['layers[0].thickness_m']);
+    // text that cannot be read at all is reported by the field itself
+    s.markRefused('layers[1].ucs_MPa', 'UCS: expected a stress, got "abc"');
+    expect(s.getState().fieldErrors).toHaveLength(2);
+    expect(s.edit('layers[0].thickness_m', 0.6)).toBe(true);
+    expect(s.getState().stale).toBe(true);
+    s.markRefused('layers[1].ucs_MPa', null);
+    expect(s.getState().stale).toBe(false);
     expect(s.getState().fieldErrors).toEqual([]);
-    expect(s.getState().fieldErrorsFrom).toBeNull();
+  });
+
+  it('undo, redo and a replaced project reset the fields, so no field stays refused', () => {
+    const s = new ProjectStore(deps(), twoLayers());
+    s.edit('opening.span_m', 7);
+    s.markRefused('layers[1].ucs_MPa', 'UCS: expected a stress, got "abc"');
+    expect(s.undo()).toBe(true);
+    expect(s.getState().stale).toBe(false);
+    s.markRefused('layers[1].ucs_MPa', 'UCS: expected a stress, got "abc"');
+    expect(s.replace(twoLayers(), 'Demo x')).toBe(true);
+    expect(s.getState().stale).toBe(false);
   });
 
   it('units change display state only: no analysis runs', () => {

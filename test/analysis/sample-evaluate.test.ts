@@ -1,0 +1,107 @@
+import { describe, expect, it } from 'vitest';
+import { analyse } from '../../src/analysis/analyse';
+import { MODES } from '../../src/analysis/check-labels';
+import { sampleEvaluator, type SampledField } from '../../src/analysis/sample-evaluate';
+import { platesForSampling } from '../../src/analysis/sample-plates';
+import { plateCoefficients } from '../../src/mechanics/plate';
+import { projectValueAt, applySample, type Variable } from '../../src/uncertainty/variables';
+import { parsePath } from '../../src/model/project-path';
+import type { CheckRow, Project } from '../../src/model/types';
+import { presets, randomProject } from './fixtures';
+
+/** The reduction the sample path must give, taken from the full analysis' check table. */
+function reduce(rows: readonly CheckRow[]) {
+  const modeFs = MODES.map((m) => {
+    const fs = rows.filter((r) => r.mode === m && r.counts && r.fs !== null).map((r) => r.fs as number);
+    return fs.length ? Math.min(...fs) : null;
+  });
+  const counted = rows.filter((r) => r.counts && r.fs !== null);
+  return {
+    modeFs,
+    governingFs: Math.min(Infinity, ...counted.map((r) => r.fs as number)),
+    targetRatio: Math.min(Infinity, ...counted.map((r) => (r.fs as number) / r.target)),
+  };
+}
+
+/** Every eligible numeric field present in the project. */
+function presentFields(project: Project): string[] {
+  const at = projectValueAt(project);
+  const out = ['opening.span_m', 'loads.surcharge_kPa', 'loads.horizontalStress_MPa', 'support.standing_kPa'];
+  project.layers.forEach((_, i) => {
+    for (const f of ['thickness_m', 'unitWeight_kNm3', 'youngModulus_GPa', 'poisson', 'ucs_MPa', 'tensile.value_MPa',
+      'jointing.fractureFrequency_per_m', 'jointing.jointCondition', 'jointing.crossJointSpacing_m', 'jointing.jointFriction_deg']) {
+      out.push(`layers[${i}].${f}`);
+    }
+  });
+  return out.filter((p) => typeof at(p) === 'number');
+}
+
+describe('the fast per-sample path (analysis/sample-evaluate.ts)', () => {
+  const cases = [...presets().map((p) => ({ name: p.file, project: p.project })),
+    ...[1, 2, 3].map((s) => ({ name: `random slab ${s}`, project: randomProject(s, { type: 'slab' }) })),
+    ...[4, 5].map((s) => ({ name: `random beam ${s}`, project: randomProject(s, { type: 'beam' }) }))];
+
+  it.each(cases)('at the project values (zero variance) reproduces the analysis exactly: $name', ({ project }) => {
+    const paths = presentFields(project);
+    const at = projectValueAt(project);
+    const values = paths.map((p) => at(p) as number);
+    const fields: SampledField[] = paths.map((path, j) => ({ path, lower: values[j], upper: values[j] }));
+    const ev = sampleEvaluator(project, fields);
+    expect(ev.plateInterpolation).toBe(null);
+    const got = ev.evaluate(values);
+    const want = reduce(analyse(project).report.checks);
+    expect(got.governingFs).toBe(want.governingFs); // bit for bit
+    expect(got.targetRatio).toBe(want.targetRatio);
+    expect([...got.modeFs]).toEqual(want.modeFs);
+  });
+
+  it.each(cases.filter((c) => c.project.opening.type !== 'slab'))('writes each field in SI as the file would carry it (against the full analysis of the changed file): $name', ({ project }) => {
+    const at = projectValueAt(project);
+    for (const path of presentFields(project)) {
+      const v0 = at(path) as number;
+      // a 7 % change (or +0.3 where the value is 0), kept inside the field's range
+      const v = path.endsWith('poisson') ? Math.min(0.45, v0 * 1.07) : path.endsWith('jointCondition') ? Math.min(30, v0 * 0.93) : v0 === 0 ? 0.3 : v0 * 1.07;
+      const ev = sampleEvaluator(project, [{ path, lower: v, upper: v }]);
+      const changed = applySample(project, [{ keys: parsePath(path) } as Variable], [v]);
+      const want = reduce(analyse(changed).report.checks);
+      const got = ev.evaluate([v]);
+      expect(got.governingFs, path).toBe(want.governingFs);
+      expect([...got.modeFs], path).toEqual(want.modeFs);
+    }
+  }, 60_000);
+
+  it('refuses a path it cannot write, naming it', () => {
+    const { project } = presets()[0];
+    expect(() => sampleEvaluator(project, [{ path: 'layers[0].name', lower: 0, upper: 0 }])).toThrow(/layers\[0\]\.name/);
+    expect(() => sampleEvaluator(project, [{ path: 'layers[9].thickness_m', lower: 1, upper: 1 }])).toThrow(/layers\[9\]/);
+  });
+
+  it('a slab with its span sampled uses the plate interpolation, whose error is measured and holds between nodes', () => {
+    const project = randomProject(2, { type: 'slab' });
+    const s = project.opening.span_m;
+    const ev = sampleEvaluator(project, [{ path: 'opening.span_m', lower: 0.9 * s, upper: 1.1 * s }]);
+    expect(ev.plateInterpolation).not.toBe(null);
+    const err = ev.plateInterpolation!.maxRelativeError;
+    expect(err).toBeLessThan(0.01);
+    for (const f of [0.93, 0.97, 1.01, 1.06]) {
+      const got = ev.evaluate([f * s]).governingFs;
+      const exact = sampleEvaluator(project, [{ path: 'opening.span_m', lower: f * s, upper: f * s }]).evaluate([f * s]).governingFs;
+      // FS ∝ 1/β (tension) or independent of the plate: the relative error of β carries over (3× margin)
+      expect(Math.abs(got - exact) / exact).toBeLessThanOrEqual(3 * err + 1e-12);
+    }
+  });
+
+  it('plate interpolation: nodes are exact, the stated error bounds the error at other points (against the Ritz solve)', () => {
+    const plates = platesForSampling('clamped', [1.1, 2.0], [0.2, 0.3]);
+    expect(plates.nodes).toEqual({ aspect: 9, poisson: 9 });
+    const node = plates.coefficients(1.1, 0.2);
+    expect(node.beta).toBe(plateCoefficients({ aspect: 1.1, edges: 'clamped', poisson: 0.2 }).beta);
+    for (const [a, v] of [[1.33, 0.27], [1.71, 0.21], [1.95, 0.295]]) {
+      const e = plateCoefficients({ aspect: a, edges: 'clamped', poisson: v });
+      const g = plates.coefficients(a, v);
+      expect(Math.abs(g.beta - e.beta) / e.beta).toBeLessThanOrEqual(3 * plates.maxRelativeError + 1e-12);
+    }
+    // outside the grid: the exact solve
+    expect(plates.coefficients(2.5, 0.25).beta).toBe(plateCoefficients({ aspect: 2.5, edges: 'clamped', poisson: 0.25 }).beta);
+  }, 60_000);
+});
