@@ -28,8 +28,9 @@ describe('<checks-table> in the app (coal-room demo)', () => {
       }
     }
     const verdict = (await text(page.locator('checks-table [data-role="verdict"]')));
-    expect(verdict).toMatch(/^Governing: tension in Laminated grey shale, FS [\d.]+ against a target of 4 \(below ✗\)/);
-    expect(verdict).toContain('the intact beam would crack');
+    expect(verdict).toMatch(/^Governing check: tension in layer 1 “Laminated grey shale”, FS [\d.]+ against a target of 2 — it is below the target ✗/);
+    expect(verdict).toContain('As an intact beam, layer 1 “Laminated grey shale” would crack');
+    expect(verdict).toContain('post-cracking reserve');
     await renderAllSections(page);
     await page.locator('checks-table').screenshot({ path: resolve(ARTIFACTS, 'results-checks.png') });
     expect(h.problems).toEqual([]);

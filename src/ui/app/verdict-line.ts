@@ -108,9 +108,9 @@ export class VerdictLine extends LitElement {
           : html`FS ${tracedValue(`layers[${g.layerIndex}].${MODE_PATH[g.mode]}`, numberText(g.fs, 3), g.fs)} against a target of ${numberText(g.target, 3)}`;
     return html`<p data-mode=${g.mode} data-fs=${String(g.fs)} data-layer=${g.layerIndex}>
       <span class="status ${v.status}" title=${text('governing')}>${STATUS_TEXT[v.status]}</span>
-      Governing: ${MODE_NAME[g.mode]} of <strong>${g.layerIndex + 1} ${g.layer}</strong>, ${fsPart}.${tally} ${spanText}${pending}
+      Governing: ${MODE_NAME[g.mode]} of <strong>${g.layer}</strong> (layer ${g.layerIndex + 1}), ${fsPart}.${tally} ${spanText}${pending}
     </p>
-    <p class="basis">${text('intact')} ${text('cracked')}</p>`;
+    <div class="basis">${text('intact')} ${text('cracked')}</div>`;
   }
 }
 

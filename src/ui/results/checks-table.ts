@@ -68,7 +68,7 @@ export class ChecksTable extends LitElement {
       data-counts=${String(r.counts)}
       class=${view.governing ? 'governing' : ''}
     >
-      ${first ? html`<th scope="rowgroup" rowspan=${span}>${view.layer + 1} ${r.layer}</th>` : nothing}
+      ${first ? html`<th scope="rowgroup" rowspan=${span}>${r.layer}</th>` : nothing}
       <td>${MODE_LABEL[view.mode]}${view.governing ? html` <strong>(governing)</strong>` : nothing}</td>
       <td class="num">${this.value(view.demand)}</td>
       <td class="num">${this.value(view.capacity)}</td>
