@@ -17,24 +17,13 @@
 import { parsePath, withValueAt, type PathKey } from '../model/project-path';
 import { ELIGIBLE_FIELDS, eligibleField } from '../model/uncertain-fields';
 import type { FieldIssue } from '../model/validate';
-import type { Project, Specimen } from '../model/types';
+import type { Project, Specimen, UncertainVariable } from '../model/types';
 import { reduceSpecimens } from '../strength/specimens';
 import { summarise } from '../strength/statistics';
 import { DISTRIBUTION_NAMES, makeDistribution, type Distribution, type DistributionName, type DistributionParams } from './distributions';
 
-/** One uncertain input as written in the project file's `uncertainty.variables`. */
-export interface VariableSpec {
-  path: string;
-  distribution: DistributionName;
-  /** default: the project's value at `path` */
-  mean?: number;
-  cov?: number;
-  sd?: number;
-  min?: number;
-  max?: number;
-  /** triangular only */
-  mode?: number;
-}
+/** One uncertain input as written in the project file's `uncertainty.variables` (the model's type). */
+export type VariableSpec = UncertainVariable;
 
 export { ELIGIBLE_FIELDS, eligibleField, type EligibleField } from '../model/uncertain-fields';
 

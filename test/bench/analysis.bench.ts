@@ -10,6 +10,7 @@ import { parseProject } from '../../src/model/validate';
 import type { Project } from '../../src/model/types';
 import { reference, refVoussoir } from '../analysis/reference';
 import type { BenchResult } from './types';
+import { timeMedian as timeMedianOf } from './timing';
 
 /** Five invented beds over a 7 m clamped room (demo data for the benchmark). */
 export function fiveLayerProject(): Project {
@@ -29,21 +30,7 @@ export function fiveLayerProject(): Project {
   }).project;
 }
 
-const median = (xs: number[]) => {
-  const s = [...xs].sort((a, b) => a - b);
-  return s[Math.floor(s.length / 2)];
-};
-
-function timeMedian(fn: () => void, runs: number): number {
-  for (let k = 0; k < 3; k++) fn(); // warm-up
-  const times: number[] = [];
-  for (let k = 0; k < runs; k++) {
-    const t0 = performance.now();
-    fn();
-    times.push(performance.now() - t0);
-  }
-  return median(times);
-}
+const timeMedian = (fn: () => void, runs: number): number => timeMedianOf(fn, runs, 3);
 
 export async function benchAnalysis(): Promise<BenchResult[]> {
   const project = fiveLayerProject();

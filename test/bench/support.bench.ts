@@ -12,6 +12,7 @@ import { supportNeeded } from '../../src/analysis/support-needed';
 import { readProjectText } from '../../src/model/project-file';
 import type { Project } from '../../src/model/types';
 import type { BenchResult } from './types';
+import { timeMedian } from './timing';
 
 function boltedCoalRoom(): Project {
   const coal = readProjectText(readFileSync(new URL('../../presets/coal-room-shale.lamina.json', import.meta.url), 'utf8')).project;
@@ -22,18 +23,7 @@ function boltedCoalRoom(): Project {
   };
 }
 
-const median = (xs: number[]): number => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
-
-function timeMs(fn: () => unknown, runs: number): number {
-  for (let k = 0; k < 2; k++) fn();
-  const times: number[] = [];
-  for (let k = 0; k < runs; k++) {
-    const t0 = performance.now();
-    fn();
-    times.push(performance.now() - t0);
-  }
-  return median(times);
-}
+const timeMs = (fn: () => unknown, runs: number): number => timeMedian(fn, runs, 2);
 
 export async function benchSupport(): Promise<BenchResult[]> {
   const bolted = boltedCoalRoom();

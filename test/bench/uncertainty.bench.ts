@@ -17,20 +17,10 @@ import { runUncertainty } from '../../src/uncertainty/run';
 import { distribution } from '../../src/uncertainty/distributions';
 import { runMonteCarlo } from '../../src/uncertainty/monte-carlo';
 import type { BenchResult } from './types';
+import { timeMedian, timeMinMedian } from './timing';
 
 const N = 100_000;
 
-const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
-function timeMedian(fn: () => void, runs: number): number {
-  fn(); // warm-up
-  const times: number[] = [];
-  for (let k = 0; k < runs; k++) {
-    const t0 = performance.now();
-    fn();
-    times.push(performance.now() - t0);
-  }
-  return median(times);
-}
 
 export async function benchUncertainty(): Promise<BenchResult[]> {
   const distributions = [
@@ -75,17 +65,6 @@ export async function benchUncertainty(): Promise<BenchResult[]> {
   ];
 }
 
-/** min and median of `runs` timed calls after one warm-up, ms. */
-function timeMinMedian(fn: () => void, runs: number): { min: number; median: number } {
-  fn();
-  const times: number[] = [];
-  for (let k = 0; k < runs; k++) {
-    const t0 = performance.now();
-    fn();
-    times.push(performance.now() - t0);
-  }
-  return { min: Math.min(...times), median: median(times) };
-}
 
 /**
  * The full per-sample path (issue 11): `runUncertainty` on the 3-layer coal-room beam preset,

@@ -79,7 +79,7 @@ describe('app: new project and demo text', () => {
     expect(listed.some((t) => /^Layer 1 thickness 0\.5 m/.test(t))).toBe(true);
     expect(listed.some((t) => /tensile strength \(Brazilian\) 3 MPa/.test(t))).toBe(true);
     expect(await panel.locator('summary').textContent()).toMatch(/placeholders to replace/);
-    expect(await panel.locator('ul.defaults li').allTextContents()).toEqual(expect.arrayContaining([expect.stringMatching(/^FS target, tension 4/)]));
+    expect(await panel.locator('ul.defaults li').allTextContents()).toEqual(expect.arrayContaining([expect.stringMatching(/^FS target, tension 2/)]));
     expect(await reportText(page)).toContain('Placeholder values still in use');
     await page.screenshot({ path: `${OUT}/new-project-1280.png` });
 
