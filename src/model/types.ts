@@ -167,12 +167,16 @@ export type VariableDistributionName = 'normal' | 'lognormal' | 'uniform' | 'tri
 export interface UncertainVariable {
   path: string;
   distribution: VariableDistributionName;
+  /** default: the project's value at `path` */
   mean?: number;
+  /** coefficient of variation sd/|mean| (give this or `sd`) */
   cov?: number;
   sd?: number;
+  /** lower end: the range of a uniform or triangular, a truncation bound of a normal or lognormal */
   min?: number;
+  /** upper end, as `min` */
   max?: number;
-  /** triangular only */
+  /** triangular only: the most likely value (default 3·mean − min − max) */
   mode?: number;
 }
 

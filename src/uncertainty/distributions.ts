@@ -27,25 +27,14 @@
  * test/uncertainty/distributions.test.ts checks the moments against jstat 1.9.6.
  */
 import type { FieldIssue } from '../model/validate';
+import type { UncertainVariable } from '../model/types';
 import { normalCdf, normalDensity, normalQuantile } from './standard-normal';
 
 export type DistributionName = 'normal' | 'lognormal' | 'uniform' | 'triangular';
 export const DISTRIBUTION_NAMES: readonly DistributionName[] = ['normal', 'lognormal', 'uniform', 'triangular'];
 
-/** What a variable states about its distribution (any unit; `mean` defaults upstream). */
-export interface DistributionParams {
-  distribution: DistributionName;
-  mean?: number;
-  /** coefficient of variation sd/|mean| (give this or `sd`) */
-  cov?: number;
-  sd?: number;
-  /** lower end: the range of a uniform or triangular, a truncation bound of a normal or lognormal */
-  min?: number;
-  /** upper end, as `min` */
-  max?: number;
-  /** triangular only: the most likely value (default 3·mean − min − max) */
-  mode?: number;
-}
+/** What a variable states about its distribution (any unit; `mean` defaults upstream): the model's variable less its path. */
+export type DistributionParams = Omit<UncertainVariable, 'path'>;
 
 export interface Distribution {
   readonly name: DistributionName;
