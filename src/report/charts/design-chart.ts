@@ -3,7 +3,9 @@
  * target contour (FS/target = 1) bold and labelled, the region below the target hatched, and the
  * current design point marked.
  */
-import { contours, max, min, scaleLinear } from 'd3';
+import { max, min } from 'd3-array';
+import { contours } from 'd3-contour';
+import { scaleLinear } from 'd3-scale';
 import type { DesignChart } from '../../analysis/types';
 import type { Mode } from '../../model/types';
 import type { UnitSystem } from '../../model/units';

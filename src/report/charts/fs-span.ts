@@ -4,7 +4,9 @@
  * snap-through as a shaded "snaps" region. A vertical marker shows each mode's largest span and
  * another the current span.
  */
-import { line as d3line, max, min, scaleLinear, scaleLog } from 'd3';
+import { max, min } from 'd3-array';
+import { scaleLinear, scaleLog } from 'd3-scale';
+import { line as d3line } from 'd3-shape';
 import type { SpanCurve } from '../../analysis/types';
 import type { MaxSpanReport, Mode } from '../../model/types';
 import type { UnitSystem } from '../../model/units';

@@ -270,6 +270,21 @@ export class LaminaApp extends LitElement {
         max-width: 100%;
         overflow-x: auto;
       }
+      .busy-mark {
+        font-size: 0.75em;
+        font-weight: 400;
+        color: var(--lam-muted);
+        visibility: hidden;
+      }
+      h2[aria-busy='true'] .busy-mark {
+        visibility: visible;
+        animation: lam-show-late 0.25s step-end;
+      }
+      @keyframes lam-show-late {
+        from {
+          visibility: hidden;
+        }
+      }
       .num-badge {
         display: inline-block;
         min-width: 1.4em;
@@ -368,14 +383,14 @@ export class LaminaApp extends LitElement {
   }
 
   /**
-   * Test and benchmark hook: apply an edit and run the analysis at once (no debounce), then
-   * wait until every element has updated. Returns ms to that point (`rendered`) and to the
-   * next animation frame (`frame`).
+   * Test hook: apply an edit, wait for its analysis and chart (from the compute worker) and
+   * until every element has updated. Returns ms to that point (`rendered`) and to the next
+   * animation frame (`frame`).
    */
   async editNow(path: string, value: unknown): Promise<{ accepted: boolean; rendered_ms: number; frame_ms: number }> {
     const t0 = performance.now();
     const accepted = this.store.edit(path, value);
-    this.store.flush();
+    await this.store.settled();
     await this.updateComplete;
     await nextTask();
     const t1 = performance.now();
@@ -530,13 +545,19 @@ export class LaminaApp extends LitElement {
     </div>`;
   }
 
-  private heading(n: number) {
+  /**
+   * A section's heading. `busy`: the results shown are for the previous values while the
+   * analysis of the current ones is on its way; the heading says "updating…" (a mark that is
+   * always laid out and only shown, after a short delay, so nothing moves).
+   */
+  private heading(n: number, busy = false) {
     const s = SECTIONS[n - 1];
     const stale =
       n >= 4 && this.state?.stale
         ? html`<p class="stale-note" role="status"><span class="stale-word">Stale</span>results are for the last accepted values; a field above holds a refused value.</p>`
         : nothing;
-    return html`<h2 id="${s.id}-h" tabindex="-1"><span class="num-badge">${n}</span> ${s.title}</h2>${stale}`;
+    const mark = n >= 4 && n <= 6 ? html` <span class="busy-mark" aria-hidden=${busy ? 'false' : 'true'}>updating…</span>` : nothing;
+    return html`<h2 id="${s.id}-h" tabindex="-1" aria-busy=${busy ? 'true' : 'false'}><span class="num-badge">${n}</span> ${s.title}${mark}</h2>${stale}`;
   }
 
   override render() {
@@ -615,15 +636,15 @@ export class LaminaApp extends LitElement {
         <lab-tests-panel .project=${p} .analysis=${s.analysis} units=${s.units} .fieldErrors=${s.fieldErrors}></lab-tests-panel>
       </section>
       <section class="results" aria-labelledby="strength-h">
-        ${this.heading(4)}
+        ${this.heading(4, s.pending)}
         <strength-chain-view .project=${p} .analysis=${s.analysis} .units=${s.units}></strength-chain-view>
       </section>
       <section class="results" aria-labelledby="checks-h">
-        ${this.heading(5)}
+        ${this.heading(5, s.pending)}
         <checks-table .project=${p} .analysis=${s.analysis} .units=${s.units}></checks-table>
       </section>
       <section class="results" aria-labelledby="span-h">
-        ${this.heading(6)}
+        ${this.heading(6, s.pending || s.chartPending)}
         <span-finder-view
           .project=${p}
           .analysis=${s.analysis}

@@ -15,7 +15,7 @@
 import type { Project, UncertaintyReport } from '../../model/types';
 import type { ComputeRequest, ComputeResponse } from './protocol';
 import type { AnalysisOutcome, ChartOutcome, ComputeClient, RunHooks, UncertaintyRunRequest } from './types';
-import type { AnalysisFunctions } from './compute-core';
+import { analysisJob, chartJob, type AnalysisFunctions } from './jobs';
 
 export const abortError = (): DOMException => new DOMException('The uncertainty run was cancelled.', 'AbortError');
 
@@ -207,8 +207,9 @@ const macrotask = (): Promise<void> => new Promise((resolve) => setTimeout(resol
  * without it the real analysis is loaded on first use, so importing this module costs nothing.
  */
 export function createInThreadClient(fns?: AnalysisFunctions): ComputeClient {
-  const core = import('./compute-core');
-  const functions = async () => fns ?? (await core).ANALYSIS_FUNCTIONS;
+  let core: Promise<typeof import('./compute-core')> | null = null;
+  const loadCore = () => (core ??= import('./compute-core'));
+  const functions = async () => fns ?? (await loadCore()).ANALYSIS_FUNCTIONS;
   let closed = false;
   const guard = () => {
     if (closed) throw new Error('the compute client was closed');
@@ -218,17 +219,17 @@ export function createInThreadClient(fns?: AnalysisFunctions): ComputeClient {
     analyse: async (project) => {
       await macrotask();
       guard();
-      return (await core).analysisJob(project, await functions());
+      return analysisJob(project, await functions());
     },
     chart: async (project, layer) => {
       await macrotask();
       guard();
-      return (await core).chartJob(project, layer, await functions());
+      return chartJob(project, layer, await functions());
     },
     runUncertainty: (project, request, hooks) =>
       uncertaintyCall((onProgress) => {
         let stop = false;
-        const promise = core.then((c) => {
+        const promise = loadCore().then((c) => {
           guard();
           return c.uncertaintyJob(project, request, { onProgress, stopped: () => stop || closed, pause: macrotask });
         });

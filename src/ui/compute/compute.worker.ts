@@ -10,7 +10,7 @@
  * every chunk. Several runs interleave chunk by chunk.
  */
 import type { Project } from '../../model/types';
-import { analysisJob, chartJob, errorText, uncertaintyJob } from './compute-core';
+import { ANALYSIS_FUNCTIONS, analysisJob, chartJob, errorText, uncertaintyJob } from './compute-core';
 import type { ComputeRequest, ComputeResponse } from './protocol';
 
 const scope = self as unknown as DedicatedWorkerGlobalScope;
@@ -57,10 +57,10 @@ scope.onmessage = (event: MessageEvent<ComputeRequest>) => {
   const m = event.data;
   switch (m.kind) {
     case 'analyse':
-      post({ id: m.id, kind: 'result', value: analysisJob(m.project) });
+      post({ id: m.id, kind: 'result', value: analysisJob(m.project, ANALYSIS_FUNCTIONS) });
       return;
     case 'chart':
-      post({ id: m.id, kind: 'result', value: chartJob(m.project, m.layer) });
+      post({ id: m.id, kind: 'result', value: chartJob(m.project, m.layer, ANALYSIS_FUNCTIONS) });
       return;
     case 'uncertainty':
       void runUncertainty(m.id, m.project, m.request);

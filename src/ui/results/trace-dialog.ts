@@ -11,7 +11,6 @@ import { LitElement, css, html, nothing, type PropertyValues } from 'lit';
 import { customElement, property, query, state } from 'lit/decorators.js';
 import type { Report, TraceEntry } from '../../model/types';
 import type { UnitSystem } from '../../model/units';
-import { formulaText, substitutedText } from '../../report/formula-text';
 import { symbolText } from '../../report/symbol-text';
 import { relatedEntries, safeText, valueText } from './trace-entries';
 import { resultsStyles } from './results-styles';
@@ -21,6 +20,10 @@ function deepActiveElement(): HTMLElement | null {
   while (el && el.shadowRoot && el.shadowRoot.activeElement) el = el.shadowRoot.activeElement;
   return el instanceof HTMLElement ? el : null;
 }
+
+type FormulaModule = typeof import('../../report/formula-text');
+let formulaModule: Promise<FormulaModule> | null = null;
+const loadFormulas = (): Promise<FormulaModule> => (formulaModule ??= import('../../report/formula-text'));
 
 @customElement('trace-dialog')
 export class TraceDialog extends LitElement {
@@ -116,8 +119,12 @@ export class TraceDialog extends LitElement {
 
   private returnFocus: HTMLElement | null = null;
 
+  /** The formula renderer (it brings mathjs), loaded when the dialog first opens. */
+  @state() private formulas: FormulaModule | null = null;
+
   protected override willUpdate(changed: PropertyValues): void {
     if (changed.has('path') || (changed.has('open') && this.open)) this.current = this.path;
+    if (this.open && !this.formulas) void loadFormulas().then((m) => (this.formulas = m));
   }
 
   protected override updated(changed: PropertyValues): void {
@@ -158,15 +165,16 @@ export class TraceDialog extends LitElement {
 
   private entryView(entry: TraceEntry) {
     const u = this.units;
+    const f = this.formulas;
     const symbols = Object.entries(entry.values);
     return html`
       <h2 id="trace-title">${entry.label}</h2>
       <p class="note"><code data-role="trace-path">${entry.path}</code></p>
       <dl class="steps">
         <dt>Formula</dt>
-        <dd class="formula" data-role="formula">${safeText(() => formulaText(entry.formula), entry.formula)}</dd>
+        <dd class="formula" data-role="formula">${f ? safeText(() => f.formulaText(entry.formula), entry.formula) : entry.formula}</dd>
         <dt>With values</dt>
-        <dd class="formula" data-role="substituted">${safeText(() => substitutedText(entry.formula, entry.values), entry.formula)}</dd>
+        <dd class="formula" data-role="substituted" aria-busy=${f ? 'false' : 'true'}>${f ? safeText(() => f.substitutedText(entry.formula, entry.values), entry.formula) : '…'}</dd>
         <dt>Result</dt>
         <dd class="formula result" data-role="result">${valueText(entry.result, entry.unit, u)}</dd>
       </dl>

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { analyse, designChart, minimumThickness, spanCurve } from '../../../src/analysis/index';
 import { runUncertainty } from '../../../src/uncertainty/run';
 import { createInThreadClient, createWorkerClient } from '../../../src/ui/compute/client';
-import { analysisJob, chartJob, uncertaintyJob } from '../../../src/ui/compute/compute-core';
+import { ANALYSIS_FUNCTIONS, analysisJob, chartJob, uncertaintyJob } from '../../../src/ui/compute/compute-core';
 import type { ComputeRequest, ComputeResponse } from '../../../src/ui/compute/protocol';
 import type { Project } from '../../../src/model/types';
 import { presets } from '../../analysis/fixtures';
@@ -46,7 +46,7 @@ describe('compute client, in the calling thread', () => {
     });
     expect(out.analysis).toBeNull();
     expect(out.error).toBe('The analysis failed: no convergence');
-    expect(chartJob(presets()[0].project, 99).chart).toBeNull(); // out-of-range layer: no chart, no throw
+    expect(chartJob(presets()[0].project, 99, ANALYSIS_FUNCTIONS).chart).toBeNull(); // out-of-range layer: no chart, no throw
   });
 
   it('the uncertainty run in chunks gives the same numbers as the synchronous run, with progress to the total', async () => {
@@ -101,8 +101,8 @@ class FakeWorker {
     this.received.push(structuredClone(m));
     const reply = (r: ComputeResponse) => this.onmessage?.({ data: structuredClone(r) } as MessageEvent<ComputeResponse>);
     setTimeout(() => {
-      if (m.kind === 'analyse') reply({ id: m.id, kind: 'result', value: analysisJob(m.project) });
-      else if (m.kind === 'chart') reply({ id: m.id, kind: 'result', value: chartJob(m.project, m.layer) });
+      if (m.kind === 'analyse') reply({ id: m.id, kind: 'result', value: analysisJob(m.project, ANALYSIS_FUNCTIONS) });
+      else if (m.kind === 'chart') reply({ id: m.id, kind: 'result', value: chartJob(m.project, m.layer, ANALYSIS_FUNCTIONS) });
       else if (m.kind === 'cancel') this.stopped.add(m.id);
       else
         void uncertaintyJob(m.project, m.request, {
