@@ -47,6 +47,9 @@ describe('app: screenshots of each section (written to test-artifacts/)', () => 
 
   it('print media shows the caution and the report, without the inputs, buttons or navigation', async () => {
     const { page, context } = await openApp(session.browser, session.url);
+    // the browser announces a print with beforeprint; the report is built then (emulateMedia does not send it)
+    await page.evaluate(() => window.dispatchEvent(new Event('beforeprint')));
+    await page.waitForFunction(() => (document.getElementById('lamina-print-report')?.textContent ?? '').includes('Caution'), undefined, { timeout: 30_000 });
     await page.emulateMedia({ media: 'print' });
     await page.screenshot({ path: `${OUT}/app-print.png`, fullPage: false });
     const visible = await page.evaluate(() => {
