@@ -49,6 +49,12 @@ export interface AppState {
   project: Project;
   units: UnitSystem;
   analysis: Analysis | null;
+  /**
+   * The project `analysis` and `curve` were computed for: the current project once they have
+   * landed, the previous one while `pending`. Results views render against it, so what they
+   * show always belongs together (and is marked updating while `pending`).
+   */
+  resultsProject: Project | null;
   curve: SpanCurve | null;
   chart: DesignChart | null;
   chartLayer: number;
@@ -119,6 +125,7 @@ export class ProjectStore {
       project: checked.project,
       units,
       analysis: null,
+      resultsProject: null,
       curve: null,
       chart: null,
       chartLayer: 0,
@@ -340,10 +347,10 @@ export class ProjectStore {
     if (!this.chartLayerChosen && out.analysis) chartLayer = governingLayerIndex(out.analysis);
     const timings = { ...this.state.timings, ...out.timings };
     if (out.analysis) {
-      this.set({ analysis: out.analysis, curve: out.curve, error: out.error, chartLayer, pending: false, chartPending: true, timings });
+      this.set({ analysis: out.analysis, resultsProject: project, curve: out.curve, error: out.error, chartLayer, pending: false, chartPending: true, timings });
       this.requestChart(project, chartLayer);
     } else {
-      this.set({ analysis: null, curve: null, error: out.error, chartLayer, pending: false, chart: null, minThickness_m: null, chartPending: false, timings });
+      this.set({ analysis: null, resultsProject: project, curve: null, error: out.error, chartLayer, pending: false, chart: null, minThickness_m: null, chartPending: false, timings });
     }
   }
 
