@@ -636,7 +636,7 @@ function traceGrouping(p: ProjectSI, state: State, trace: TraceBuilder): Groupin
     const lowest = names[st.first];
     const entry = trace.add(`detail.grouping[${j}].with_kPa`, `Does ${names[st.layer]} bend with the group of ${lowest}? Load on ${lowest} with it`,
       `E1 * t1^3 * (${weight}) / (${stiffness})`, values, st.with * kPa, 'kPa', SOURCES.obertDuvall,
-      `Without it, ${lowest}${st.layer - st.first > 1 ? ` and the ${st.layer - st.first - 1} layer(s) above it carry` : ' carries'} ${round(st.without * kPa)} kPa on ${lowest}; with it ${round(st.with * kPa)} kPa. ` +
+      `Load on ${lowest} without it ${round(st.without * kPa)} kPa, with it ${round(st.with * kPa)} kPa. ` +
         (st.joins ? `${round(st.with * kPa)} ≥ ${round(st.without * kPa)}: ${names[st.layer]} loads the layers below and bends with them.` : `${round(st.with * kPa)} < ${round(st.without * kPa)}: ${names[st.layer]} is stiffer, separates and starts the next group.`) +
         ' Self-weights only (METHODS §2).');
     if (j === 0) entry.steps = groupingTable(steps, names);

@@ -42,11 +42,11 @@ export function voussoirSearchSteps(input: VoussoirInput): { steps: TraceSteps; 
       caption:
         'Search for the equilibrium n (least fc): a scan of n = 0.1 … 0.9, the bracket around the minimum, then false-position/bisection steps on d(n·z)/dn = 0 until the bracket is narrower than 1e-7. z at each n is the converged lever arm (largest root of z³ − z0² z + K = 0); "—" where n has no lever arm.',
       columns: [
-        { symbol: 'n', unit: '' },
-        { symbol: 'z', unit: 'm' },
-        { symbol: 'fc', unit: 'MPa' },
-        { symbol: 'n_lower', unit: '' },
-        { symbol: 'n_upper', unit: '' },
+        { symbol: 'n', label: 'n', unit: '' },
+        { symbol: 'z', label: 'z', unit: 'm' },
+        { symbol: 'fc', label: 'fc', unit: 'MPa' },
+        { symbol: 'n_lower', label: 'Bracket from n', unit: '' },
+        { symbol: 'n_upper', label: 'to n', unit: '' },
       ],
       rows: recorded.map((s) => [s.n, s.leverArm, s.maxCompression === null ? null : s.maxCompression * MPa, s.lower, s.upper]),
       stage: recorded.map((s) => STAGE_WORD[s.stage]),
@@ -68,11 +68,11 @@ export function leverArmSteps(input: VoussoirInput, n: number): TraceSteps {
       `Lever-arm iteration at n = ${n.toPrecision(6)}: from z = z0, fc = γ' s²/(4 n z), fav = fc (2/3 + n)/3, ΔL = fav L/E, next z = √((3s/8)(8 z0²/(3s) − ΔL)), until the change is below 1e-10 t` +
       ` (${total} steps${skipped > 0 ? `; steps ${HEAD_ROWS + 1}–${total - TAIL_ROWS} not shown` : ''}).`,
     columns: [
-      { symbol: 'k', unit: '' },
-      { symbol: 'z', unit: 'm' },
-      { symbol: 'fc', unit: 'MPa' },
-      { symbol: 'dL', unit: 'mm' },
-      { symbol: 'z_next', unit: 'm' },
+      { symbol: 'k', label: 'Step', unit: '' },
+      { symbol: 'z', label: 'z', unit: 'm' },
+      { symbol: 'fc', label: 'fc', unit: 'MPa' },
+      { symbol: 'dL', label: 'ΔL', unit: 'mm' },
+      { symbol: 'z_next', label: 'Next z', unit: 'm' },
     ],
     rows: shown.map((s) => [s.k, s.z, s.maxCompression * MPa, s.shortening * mm, s.next]),
     stage: shown.map((s, i) => (s.next === null ? 'no root' : i === shown.length - 1 ? 'converged' : '')),
@@ -86,10 +86,10 @@ export function groupingTable(steps: readonly GroupingStep[], names: readonly st
     caption:
       'Bending groups, built upward from the immediate roof: a layer joins the group below while the load on the group\'s lowest layer does not fall when it is added, (q_{n+1})₁ ≥ (q_n)₁; otherwise it is stiffer, separates and starts the next group.',
     columns: [
-      { symbol: 'layer', unit: '' },
-      { symbol: 'lowest', unit: '' },
-      { symbol: 'q_without', unit: 'kPa' },
-      { symbol: 'q_with', unit: 'kPa' },
+      { symbol: 'layer', label: 'Layer tested', unit: '' },
+      { symbol: 'lowest', label: 'Lowest layer of the group', unit: '' },
+      { symbol: 'q_without', label: 'Load on the lowest without it', unit: 'kPa' },
+      { symbol: 'q_with', label: 'with it', unit: 'kPa' },
     ],
     rows: steps.map((s) => [s.layer + 1, s.first + 1, s.without * kPa, s.with * kPa]),
     stage: steps.map((s) => (s.joins ? `${names[s.layer] ?? ''} joins` : `${names[s.layer] ?? ''} separates`)),

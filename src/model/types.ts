@@ -358,8 +358,8 @@ export interface TraceEntry {
  */
 export interface TraceSteps {
   caption: string;
-  /** Column symbol (as in the formulas) and unit ('' for a pure number). */
-  columns: Array<{ symbol: string; unit: string }>;
+  /** Column symbol (as in the formulas), heading and unit ('' for a pure number). */
+  columns: Array<{ symbol: string; label: string; unit: string }>;
   rows: Array<Array<number | null>>;
   /** A word per row: the stage of the search or the decision ("scan", "refine", "joins"). */
   stage: string[];
