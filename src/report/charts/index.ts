@@ -10,3 +10,4 @@ export { designChartSvg, type DesignChartOptions } from './design-chart';
 export { escapeXml, PALETTE } from './svg';
 export { fsHistogramSvg, type FsHistogramOptions } from './fs-histogram';
 export { sensitivitySvg } from './sensitivity';
+export { searchCurveSvg, type SearchCurveOptions } from './search-curve';

@@ -2,6 +2,7 @@
 import type { TraceEntry } from '../../model/types';
 import type { Block, Section } from '../document-types';
 import { traceBlock } from '../trace-block';
+import { stepsChart, stepsTable } from '../trace-steps';
 import type { SectionContext } from './context';
 
 export function traceSection(ctx: SectionContext): Section {
@@ -20,6 +21,11 @@ export function traceSection(ctx: SectionContext): Section {
       group = g;
     }
     blocks.push(traceBlock(entry, ctx.units));
+    if (entry.steps) {
+      blocks.push(stepsTable(entry.steps));
+      const chart = stepsChart(entry.steps);
+      if (chart) blocks.push(chart);
+    }
   }
   if (ctx.analysis.report.trace.length === 0) blocks.push({ kind: 'paragraph', text: 'The analysis returned no trace entries.' });
   return { id: 'trace', title: 'Calculation trace', blocks };

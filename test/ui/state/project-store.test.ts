@@ -33,6 +33,7 @@ function analyse(p: Project): Analysis {
     },
     layers: [],
     groups: [],
+    grouping: [],
     separations: [],
   };
 }
