@@ -20,13 +20,19 @@ export interface BedStiffness {
 /** Load on the lowest layer of `beds` when they all bend together: E₁t₁³ Σγt / ΣEt³. */
 export function loadOnLowest(beds: readonly BedStiffness[]): number {
   if (beds.length === 0) throw new RangeError('loadOnLowest needs at least one bed');
+  return loadOnLowestOf(beds, 0, beds.length);
+}
+
+/** `loadOnLowest` of beds[start … end − 1] (no copy: the grouping runs once per sample of an uncertainty run). */
+function loadOnLowestOf(beds: readonly BedStiffness[], start: number, end: number): number {
   let weight = 0;
   let stiffness = 0;
-  for (const b of beds) {
+  for (let i = start; i < end; i++) {
+    const b = beds[i];
     weight += b.unitWeight * b.thickness;
     stiffness += b.modulus * b.thickness ** 3;
   }
-  const lowest = beds[0];
+  const lowest = beds[start];
   return (lowest.modulus * lowest.thickness ** 3 * weight) / stiffness;
 }
 
@@ -51,8 +57,8 @@ export function groupLayers(beds: readonly BedStiffness[], record?: (step: Group
   let start = 0;
   for (let i = 0; i < beds.length; i++) {
     if (i > start) {
-      const before = loadOnLowest(beds.slice(start, i));
-      const after = loadOnLowest(beds.slice(start, i + 1));
+      const before = loadOnLowestOf(beds, start, i);
+      const after = loadOnLowestOf(beds, start, i + 1);
       record?.({ layer: i, first: start, without: before, with: after, joins: !(after < before) });
       if (after < before) {
         group += 1;

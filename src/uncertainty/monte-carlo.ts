@@ -15,7 +15,9 @@
  * - `runMonteCarloAsync(options)`: the same, yielding to the event loop between chunks, so a
  *   Web Worker can receive a cancel message and post progress;
  * - `createMonteCarloRun(options)`: a stepper (`step()` runs one chunk, `result()` at any time)
- *   for a caller that schedules the chunks itself.
+ *   for a caller that schedules the chunks itself;
+ * - `monteCarloSteps(options)`: a generator of chunks, for composing runs (`uncertaintySteps`)
+ *   that a worker drains with `drainAsync`.
  * A stopped run returns the statistics of the samples evaluated so far, `complete: false`.
  */
 import type { Distribution } from './distributions';
@@ -205,8 +207,12 @@ export function createMonteCarloRun(options: MonteCarloOptions): MonteCarloRun {
 
 const stopRequested = (options: Pick<MonteCarloOptions, 'signal' | 'shouldStop'>) => options.signal?.aborted === true || options.shouldStop?.() === true;
 
-/** Runs every sample (or until stopped) synchronously. */
-export function runMonteCarlo(options: MonteCarloOptions): MonteCarloResult {
+/**
+ * The run as a generator: each `next()` checks the stop request, evaluates one chunk and
+ * reports progress; it returns the result. `runMonteCarlo` drains it at once, a worker drains
+ * it with a yield to its event loop between chunks (`drainAsync`), so a cancel gets through.
+ */
+export function* monteCarloSteps(options: MonteCarloOptions): Generator<void, MonteCarloResult, void> {
   const run = createMonteCarloRun(options);
   while (!run.finished) {
     if (stopRequested(options)) {
@@ -215,23 +221,48 @@ export function runMonteCarlo(options: MonteCarloOptions): MonteCarloResult {
     }
     run.step();
     options.onProgress?.(run.done, run.total);
+    if (!run.finished) yield;
   }
   return run.result();
 }
 
-/** As `runMonteCarlo`, yielding to the event loop after every chunk. */
-export async function runMonteCarloAsync(options: MonteCarloOptions): Promise<MonteCarloResult> {
-  const run = createMonteCarloRun(options);
-  while (!run.finished) {
-    await new Promise<void>((resolve) => setTimeout(resolve, 0));
-    if (stopRequested(options)) {
-      run.stop();
-      break;
-    }
-    run.step();
-    options.onProgress?.(run.done, run.total);
+/** Runs a step generator to its end synchronously. */
+export function drain<T>(steps: Generator<void, T, void>): T {
+  for (;;) {
+    const r = steps.next();
+    if (r.done) return r.value;
   }
-  return run.result();
+}
+
+/**
+ * Runs a step generator, yielding to the event loop (`pause`, default a 0 ms timeout) before
+ * every step. When `stopped()` turns true between steps the generator is closed and the
+ * promise resolves to `undefined`.
+ */
+export async function drainAsync<T>(
+  steps: Generator<void, T, void>,
+  options: { pause?: () => Promise<void>; stopped?: () => boolean } = {},
+): Promise<T | undefined> {
+  const pause = options.pause ?? (() => new Promise<void>((resolve) => setTimeout(resolve, 0)));
+  for (;;) {
+    await pause();
+    if (options.stopped?.()) {
+      steps.return(undefined as T);
+      return undefined;
+    }
+    const r = steps.next();
+    if (r.done) return r.value;
+  }
+}
+
+/** Runs every sample (or until stopped) synchronously. */
+export function runMonteCarlo(options: MonteCarloOptions): MonteCarloResult {
+  return drain(monteCarloSteps(options));
+}
+
+/** As `runMonteCarlo`, yielding to the event loop before every chunk. */
+export async function runMonteCarloAsync(options: MonteCarloOptions): Promise<MonteCarloResult> {
+  return (await drainAsync(monteCarloSteps(options))) as MonteCarloResult;
 }
 
 export interface SpanProbability {
@@ -251,13 +282,22 @@ export function pfVersusSpan(
   evaluateAt: (span: number) => Evaluate,
   options: Omit<MonteCarloOptions, 'evaluate'>,
 ): SpanProbability[] {
+  return drain(pfVersusSpanSteps(spans, evaluateAt, options));
+}
+
+/** `pfVersusSpan` as a step generator (one chunk per step; see `monteCarloSteps`). */
+export function* pfVersusSpanSteps(
+  spans: readonly number[],
+  evaluateAt: (span: number) => Evaluate,
+  options: Omit<MonteCarloOptions, 'evaluate'>,
+): Generator<void, SpanProbability[], void> {
   const total = spans.length * (options.samples ?? 20000);
   let before = 0;
   const out: SpanProbability[] = [];
   for (const span of spans) {
     if (!Number.isFinite(span)) throw new RangeError(`span must be a finite number, got ${span}`);
     if (stopRequested(options)) break;
-    const result: MonteCarloResult = runMonteCarlo({
+    const result: MonteCarloResult = yield* monteCarloSteps({
       ...(options as MonteCarloOptions),
       evaluate: evaluateAt(span),
       onProgress: options.onProgress && ((done) => options.onProgress?.(before + done, total)),

@@ -20,7 +20,7 @@ import type { Mode, Project, UncertaintyReport } from '../model/types';
 import { ProjectError } from '../model/validate';
 import type { Distribution } from './distributions';
 import { form } from './form';
-import { pfVersusSpan, runMonteCarlo, type SampleOutcome } from './monte-carlo';
+import { drain, monteCarloSteps, pfVersusSpanSteps, type SampleOutcome } from './monte-carlo';
 import type { SamplingMethod } from './sampler';
 import { projectValueAt, resolveVariables, type Variable } from './variables';
 
@@ -58,6 +58,15 @@ export function uncertaintyVariables(project: Project): Variable[] {
 }
 
 export function runUncertainty(project: Project, options: UncertaintyRunOptions = {}): UncertaintyReport {
+  return drain(uncertaintySteps(project, options));
+}
+
+/**
+ * `runUncertainty` as a generator that yields after every chunk of samples, so a Web Worker
+ * can drain it with a pause between chunks (`drainAsync` in monte-carlo.ts) and a cancel
+ * message gets through. The variables are resolved (and a bad one throws) on the first step.
+ */
+export function* uncertaintySteps(project: Project, options: UncertaintyRunOptions = {}): Generator<void, UncertaintyReport, void> {
   const u = project.uncertainty;
   if (!u) throw new RangeError('the project has no uncertainty block');
   const variables = uncertaintyVariables(project);
@@ -79,7 +88,7 @@ export function runUncertainty(project: Project, options: UncertaintyRunOptions 
   const spans = curve ? curve.spans_m : [];
   const total = samples + spans.length * samplesPerSpan;
 
-  const mc = runMonteCarlo({
+  const mc = yield* monteCarloSteps({
     distributions, evaluate: outcomeAt(), modes, samples, seed, method,
     onProgress: options.onProgress && ((done) => options.onProgress?.(done, total)),
     signal: options.signal,
@@ -87,7 +96,7 @@ export function runUncertainty(project: Project, options: UncertaintyRunOptions 
   // P_f against span: the span curve's points are entry spans; the design span scales with them.
   const scale = project.opening.type === 'intersection' ? Math.hypot(1, (project.opening.length_m ?? project.opening.span_m) / project.opening.span_m) : 1;
   const bySpan = mc.complete && spans.length
-    ? pfVersusSpan(spans, (s) => outcomeAt(s * scale), {
+    ? yield* pfVersusSpanSteps(spans, (s) => outcomeAt(s * scale), {
         distributions, modes, samples: samplesPerSpan, seed, method, signal: options.signal,
         onProgress: options.onProgress && ((done) => options.onProgress?.(samples + done, total)),
       })

@@ -2,7 +2,7 @@
  * `<lamina-app>`: the worksheet shell. Holds the store (the one place the analysis runs),
  * forwards the components' events to it, and lays out the sheet top to bottom:
  * caution · verdict · 1 Opening and loads · 2 Strata · 3 Lab tests · 4 Strength chain ·
- * 5 Checks · 6 Span and thickness · 7 Report. Results elements (sections 4–7, the trace dialog)
+ * 5 Checks · 6 Support · 7 Span and thickness · 8 Report. Results elements (sections 4–8, the trace dialog)
  * are rendered by tag; if one is not registered the page still works (it stays empty).
  *
  * Under the project bar it warns of demo text left in a changed project (with a one-click
@@ -29,6 +29,7 @@ import { downloadText } from './download';
 import '../inputs/opening-loads-form';
 import '../inputs/strata-editor';
 import '../inputs/lab-tests-panel';
+import '../inputs/support-form';
 import './caution-banner';
 import './verdict-line';
 import './project-bar';
@@ -40,6 +41,7 @@ const SECTIONS = [
   { id: 'lab', title: 'Lab tests' },
   { id: 'strength', title: 'Strength chain' },
   { id: 'checks', title: 'Checks' },
+  { id: 'support', title: 'Support' },
   { id: 'span', title: 'Span and thickness' },
   { id: 'report', title: 'Report' },
 ] as const;
@@ -530,6 +532,24 @@ export class LaminaApp extends LitElement {
     </div>`;
   }
 
+  private printed: { analysis: AppState['analysis']; needed: AppState['supportNeeded']; out: AppState['analysis'] } | null = null;
+
+  /**
+   * The analysis the printed report renders: with the support needed the store found for this
+   * project (kept identical between renders, so the report is rebuilt only when either changes).
+   */
+  private reportAnalysis(s: AppState): AppState['analysis'] {
+    const a = s.analysis;
+    const n = s.supportNeeded;
+    if (this.printed && this.printed.analysis === a && this.printed.needed === n) return this.printed.out;
+    let out = a;
+    if (a && a.report.support && n && n.project === s.project) {
+      out = { ...a, report: { ...a.report, support: { ...a.report.support, needed: n.needed, neededReason: n.reason } } };
+    }
+    this.printed = { analysis: a, needed: n, out };
+    return out;
+  }
+
   private heading(n: number) {
     const s = SECTIONS[n - 1];
     const stale =
@@ -622,8 +642,13 @@ export class LaminaApp extends LitElement {
         ${this.heading(5)}
         <checks-table .project=${p} .analysis=${s.analysis} .units=${s.units}></checks-table>
       </section>
-      <section class="results" aria-labelledby="span-h">
+      <section class="results support" aria-labelledby="support-h">
         ${this.heading(6)}
+        <support-form .project=${p} units=${s.units} .fieldErrors=${s.fieldErrors}></support-form>
+        <support-view .project=${p} .analysis=${s.analysis} .units=${s.units} .needed=${s.supportNeeded} ?pending=${s.supportPending}></support-view>
+      </section>
+      <section class="results" aria-labelledby="span-h">
+        ${this.heading(7)}
         <span-finder-view
           .project=${p}
           .analysis=${s.analysis}
@@ -636,8 +661,8 @@ export class LaminaApp extends LitElement {
         <beam-charts-view .project=${p} .analysis=${s.analysis} .units=${s.units} .chart=${s.chart} .chartLayer=${s.chartLayer}></beam-charts-view>
       </section>
       <section class="print" aria-labelledby="report-h">
-        ${this.heading(7)}
-        <report-view .project=${p} .analysis=${s.analysis} .curve=${s.curve} .units=${s.units}></report-view>
+        ${this.heading(8)}
+        <report-view .project=${p} .analysis=${this.reportAnalysis(s)} .curve=${s.curve} .units=${s.units}></report-view>
       </section>
       <trace-dialog .report=${report} .path=${this.tracePath ?? ''} .units=${s.units} ?open=${this.tracePath !== null}></trace-dialog>
       <footer><caution-banner></caution-banner></footer>

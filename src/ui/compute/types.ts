@@ -28,3 +28,41 @@ export type UncertaintyRunner = (
   request: UncertaintyRunRequest,
   hooks?: RunHooks,
 ) => Promise<UncertaintyReport>;
+
+// ------------------------------------------------------------- the analysis of each edit
+// (added beside the uncertainty contract; the runner above is unchanged)
+
+import type { Analysis, DesignChart, SpanCurve } from '../../analysis/types';
+
+/** The analysis of one project: the report and details, and the FS-versus-span curve. */
+export interface AnalysisOutcome {
+  analysis: Analysis | null;
+  curve: SpanCurve | null;
+  /** the analysis failed: the message for the user (never a stack trace) */
+  error: string | null;
+  /** milliseconds spent in each step, measured where it ran */
+  timings: { analyse: number; curve: number };
+}
+
+/** The design chart and the minimum thickness of one layer. */
+export interface ChartOutcome {
+  layer: number;
+  chart: DesignChart | null;
+  minThickness_m: number | null;
+  timings: { chart: number; minThickness: number };
+}
+
+/**
+ * What the worksheet computes off the main thread. `analyse` and `chart` keep only the
+ * latest call of each waiting: a call that a later one replaced before it started resolves
+ * to `null` (the store drops it, as it drops any answer for an older project).
+ */
+export interface ComputeClient {
+  analyse(project: Project): Promise<AnalysisOutcome | null>;
+  chart(project: Project, layer: number): Promise<ChartOutcome | null>;
+  runUncertainty: UncertaintyRunner;
+  /** 'worker' or 'in-thread' (for tests and the status of the page) */
+  readonly kind: 'worker' | 'in-thread';
+  /** Ends the workers; later calls reject. */
+  dispose(): void;
+}

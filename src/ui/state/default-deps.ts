@@ -1,6 +1,7 @@
 /** The real model and analysis behind the store (tests inject fixtures instead). */
 import { validateProject } from '../../model/validate';
 import { analyse, designChart, minimumThickness, spanCurve } from '../../analysis/index';
+import { supportNeeded } from '../../analysis/support-needed';
 import type { StoreDeps } from './project-store';
 
 export function defaultDeps(storage: StoreDeps['storage'] = null): StoreDeps {
@@ -10,6 +11,7 @@ export function defaultDeps(storage: StoreDeps['storage'] = null): StoreDeps {
     spanCurve: (project) => spanCurve(project),
     designChart: (project, layer) => designChart(project, layer),
     minimumThickness,
+    supportNeeded,
     storage,
     debounceMs: 150,
     mark: (name) => {

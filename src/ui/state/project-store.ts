@@ -14,7 +14,7 @@
  *   current, valid fields.
  */
 import { MIGRATED_CODE } from '../../model/validate';
-import type { Project } from '../../model/types';
+import type { Project, SupportNeededReport } from '../../model/types';
 import type { Analysis, DesignChart, SpanCurve } from '../../analysis/types';
 import { setAtPath } from '../../model/project-path';
 import { UndoHistory } from './undo-history';
@@ -63,6 +63,14 @@ export interface AppState {
   /** A one-line message for the user (file opened, link copied, autosave ignored …). */
   notice: string | null;
   autosave: AutosaveState;
+  /**
+   * The support needed (METHODS §12 searches) for the current project, computed after the main
+   * results in a task of its own (never in the way of typing); null until then or without a
+   * `supportNeeded` dependency.
+   */
+  supportNeeded: { needed: SupportNeededReport | null; reason: string | null; project: Project } | null;
+  /** True while the support-needed searches for the current project are still to run. */
+  supportPending: boolean;
   /** Milliseconds spent in each step of the last analysis (for the benchmark). */
   timings: { analyse: number; curve: number; chart: number; minThickness: number };
 }
@@ -81,6 +89,11 @@ export interface StoreDeps {
   spanCurve(project: Project): SpanCurve;
   designChart(project: Project, layerIndex: number): DesignChart;
   minimumThickness(project: Project, layerIndex: number): number | null;
+  /**
+   * The support-needed searches (`analysis/support-needed.ts`); optional. Kept behind this one
+   * function so that it can move off the main thread with the analysis.
+   */
+  supportNeeded?(project: Project): { needed: SupportNeededReport | null; reason: string | null };
   storage?: KeyValueStorage | null;
   debounceMs?: number;
   /** Marks for the edit → results measure (performance.mark in the browser). */
@@ -102,6 +115,7 @@ export class ProjectStore {
   private readonly history = new UndoHistory<Project>(100, 1000);
   private readonly listeners = new Set<Listener>();
   private timer: ReturnType<typeof setTimeout> | null = null;
+  private supportTimer: ReturnType<typeof setTimeout> | null = null;
   /** Refused fields by the path that was edited (a refusal may name other paths too). */
   private refused = new Map<string, FieldError[]>();
   /** True once the user picked a layer for the chart; until then it follows the governing layer. */
@@ -132,6 +146,8 @@ export class ProjectStore {
       inputWarnings: checked.warnings.map(plain),
       notice: null,
       autosave: { status: 'saved', message: null, held: null },
+      supportNeeded: null,
+      supportPending: false,
       timings: { analyse: 0, curve: 0, chart: 0, minThickness: 0 },
     };
     this.runAnalysis();
@@ -313,10 +329,40 @@ export class ProjectStore {
       this.timer = null;
     }
     if (this.state.pending) this.runAnalysis();
+    if (this.state.supportPending) this.runSupportNeeded();
+  }
+
+  /** Run the support-needed searches now for the current project (also done after each analysis). */
+  requestSupportNeeded(): void {
+    if (this.state.supportNeeded?.project === this.state.project) return;
+    this.runSupportNeeded();
+  }
+
+  private runSupportNeeded(): void {
+    if (this.supportTimer !== null) {
+      clearTimeout(this.supportTimer);
+      this.supportTimer = null;
+    }
+    const find = this.deps.supportNeeded;
+    if (!find || !this.state.analysis) {
+      this.set({ supportPending: false });
+      return;
+    }
+    const project = this.state.project;
+    try {
+      const r = find(project);
+      this.set({ supportNeeded: { needed: r.needed, reason: r.reason, project }, supportPending: false });
+    } catch (err) {
+      this.set({ supportNeeded: { needed: null, reason: `the search failed: ${errorText(err)}`, project }, supportPending: false });
+    }
   }
 
   private schedule(): void {
     if (this.timer !== null) clearTimeout(this.timer);
+    if (this.supportTimer !== null) {
+      clearTimeout(this.supportTimer);
+      this.supportTimer = null;
+    }
     this.timer = setTimeout(() => {
       this.timer = null;
       this.runAnalysis();
@@ -370,7 +416,17 @@ export class ProjectStore {
     this.chartTimings = { chart: 0, minThickness: 0 };
     const extra = analysis ? this.computeChart(project, chartLayer) : { chart: null, minThickness_m: null };
     const timings = { analyse: t1 - t0, curve: t2 - t1, ...this.chartTimings };
-    this.set({ analysis, curve, error, chartLayer, pending: false, timings, ...extra });
+    const supportPending = Boolean(this.deps.supportNeeded && analysis);
+    this.set({ analysis, curve, error, chartLayer, pending: false, timings, supportPending, ...extra });
+    // The searches run in a task of their own after the results have been shown; the next
+    // edit cancels them (schedule()).
+    if (supportPending) {
+      if (this.supportTimer !== null) clearTimeout(this.supportTimer);
+      this.supportTimer = setTimeout(() => {
+        this.supportTimer = null;
+        this.runSupportNeeded();
+      }, 0);
+    }
   }
 
   private set(patch: Partial<AppState>): void {

@@ -205,3 +205,36 @@ describe('ProjectStore', () => {
     expect(failing.getState().error).toBe('The analysis failed: no convergence');
   });
 });
+
+describe('ProjectStore: the support needed runs after the results, never in their way', () => {
+  beforeEach(() => vi.useFakeTimers());
+  afterEach(() => vi.useRealTimers());
+
+  it('runs in a task of its own after each analysis, for that project; an edit cancels a search not yet run', () => {
+    const seen: number[] = [];
+    const d = deps({ supportNeeded: (p) => { seen.push(p.layers[0].thickness_m); return { needed: null, reason: 'no support needed' }; } });
+    const s = new ProjectStore(d, twoLayers());
+    expect(s.getState().supportPending).toBe(true);
+    expect(seen).toEqual([]); // not in the same task as the analysis
+    vi.advanceTimersByTime(1);
+    expect(seen).toEqual([0.5]);
+    expect(s.getState().supportNeeded?.project).toBe(s.getState().project);
+    expect(s.getState().supportPending).toBe(false);
+    s.edit('layers[0].thickness_m', 0.6);
+    vi.advanceTimersByTime(150); // the analysis; its search is queued
+    s.edit('layers[0].thickness_m', 0.7); // typing on: the queued search is dropped
+    vi.advanceTimersByTime(150);
+    expect(seen).toEqual([0.5]);
+    vi.advanceTimersByTime(1); // fake timers run a 0 ms timeout 1 ms later
+    expect(seen).toEqual([0.5, 0.7]);
+    expect(s.getState().supportNeeded?.project.layers[0].thickness_m).toBe(0.7);
+  });
+
+  it('a failing search is reported as a reason, not thrown; without the dependency nothing is pending', () => {
+    const s = new ProjectStore(deps({ supportNeeded: () => { throw new Error('boom'); } }), twoLayers());
+    s.flush();
+    expect(s.getState().supportNeeded?.reason).toBe('the search failed: boom');
+    const plain = new ProjectStore(deps(), twoLayers());
+    expect(plain.getState().supportPending).toBe(false);
+  });
+});
