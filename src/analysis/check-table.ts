@@ -71,7 +71,7 @@ export interface LayerCondition {
   slenderness: number;
 }
 
-export function layerCondition(p: ProjectSI, layer: LayerState, span: number, thickness: number, cantilever: boolean): LayerCondition {
+export function layerCondition(p: ProjectSI, layer: Pick<LayerState, 'chain'>, span: number, thickness: number, cantilever: boolean): LayerCondition {
   const slenderness = span / thickness;
   return {
     cantilever,
@@ -99,6 +99,35 @@ function finite(x: number | null | undefined): number | null {
   return x !== null && x !== undefined && Number.isFinite(x) ? x : null;
 }
 
+/**
+ * The FS of a layer's row of `mode` (null: the row has no value), the number `checkTable`
+ * shows; `limit` is the deflection limit ratio. Shared with the uncertainty run's per-sample
+ * path (`sample-evaluate.ts`), which reads the same numbers without building rows.
+ */
+export function layerRowFs(ls: LayerState, mode: Mode, limit: number): number | null {
+  const v = ls.voussoir;
+  const snapped = v !== null && v.snapThrough;
+  switch (mode) {
+    case 'tension':
+      return finite(ls.fsTension);
+    case 'crushing':
+      return snapped || !v ? null : finite(v.fsCrushing);
+    case 'sliding':
+      return snapped || !v ? null : finite(v.fsSliding);
+    case 'deflection': {
+      const ratio = v && !snapped ? v.deflectionRatio : null;
+      return finite(ratio === null ? null : deflectionFs(ratio, limit));
+    }
+    case 'snapThrough':
+      return v === null ? null : snapped ? 0 : 1;
+  }
+}
+
+/** A layer row counts when its mode counts for the layer (`countedModes`) and it has a value. */
+export function rowCounts(counted: Record<Mode, boolean>, mode: Mode, fs: number | null): boolean {
+  return counted[mode] && fs !== null;
+}
+
 /** Which modes count in each layer at the state's span (by rule, whether or not the check has a value). */
 export function countedModesAt(p: ProjectSI, state: State): Record<Mode, boolean>[] {
   const cantilever = state.ends === 'cantilever';
@@ -118,9 +147,9 @@ export function checkTable(p: ProjectSI, state: State): CheckRow[] {
     tensionCounted.push(counted.tension);
     const v = ls.voussoir;
     const unloaded = !(ls.load > 0);
-    const push = (mode: Mode, fs: number | null, demand: number | null, capacity: number | null, unit: CheckRow['unit'], why: string | null, note: string) => {
-      const value = finite(fs);
-      const counts = counted[mode] && value !== null;
+    const push = (mode: Mode, demand: number | null, capacity: number | null, unit: CheckRow['unit'], why: string | null, note: string) => {
+      const value = layerRowFs(ls, mode, limit);
+      const counts = rowCounts(counted, mode, value);
       const target = targetFor(mode, p.design);
       const reason = counts ? null : why ?? 'does not apply';
       rows.push({
@@ -141,7 +170,7 @@ export function checkTable(p: ProjectSI, state: State): CheckRow[] {
     const tensionNote = ls.fsTensionNote === 'jointedOverhang'
       ? 'cross-jointed overhang: no tensile strength and no arch, FS 0'
       : `${where}; design strength on the ${basisText}`;
-    push('tension', ls.fsTension, demand, ls.chain.design * MPa, 'MPa', tensionWhy, tensionNote);
+    push('tension', demand, ls.chain.design * MPa, 'MPa', tensionWhy, tensionNote);
 
     // Voussoir rows.
     let archWhy: string | null = null;
@@ -153,15 +182,24 @@ export function checkTable(p: ProjectSI, state: State): CheckRow[] {
     const valueWhy = snapped ? REASONS.snapped : archWhy;
     const sh = Math.max(0, p.horizontalStress) * MPa;
     const crushNote = `arch thrust fc${sh > 0 ? ` + σh ${+sh.toPrecision(3)} MPa` : ''} against the ${p.design.crushingStrength === 'lab' ? 'UCS as given' : 'rock-mass UCS σci·s^a'}`;
-    push('crushing', snapped || !v ? null : v.fsCrushing, v && !snapped ? (v.crushingDemand ?? 0) * MPa : null, v ? ls.crushingStrength * MPa : null, 'MPa', valueWhy, crushNote);
-    push('sliding', snapped || !v ? null : v.fsSliding, null, null, null, valueWhy, 'FS = fc·n·tanφ/(γ′·s), friction on the cross-joints at the abutment');
+    push('crushing', v && !snapped ? (v.crushingDemand ?? 0) * MPa : null, v ? ls.crushingStrength * MPa : null, 'MPa', valueWhy, crushNote);
+    push('sliding', null, null, null, valueWhy, 'FS = fc·n·tanφ/(γ′·s), friction on the cross-joints at the abutment');
     const ratio = v && !snapped ? v.deflectionRatio : null;
-    push('deflection', ratio === null ? null : deflectionFs(ratio, limit), ratio, v && !snapped ? limit : null, 'ratio', valueWhy, 'FS = limit/(δ/t), target 1');
-    push('snapThrough', v === null ? null : snapped ? 0 : 1, null, null, null, archWhy,
+    push('deflection', ratio, v && !snapped ? limit : null, 'ratio', valueWhy, 'FS = limit/(δ/t), target 1');
+    push('snapThrough', null, null, null, archWhy,
       snapped ? 'the beam snaps through: no compression arch can carry it' : 'an arch forms: FS shown as 1 (stands), target 1');
   });
   // Support (METHODS §12): suspended layers stop counting, bonded tension, bolt/skin/shear rows.
   return applySupportRows(p, state.support, state.layers, rows, tensionCounted);
+}
+
+/**
+ * Whether a counted row with this FS can govern: a standing arch's snap-through row (FS 1, a
+ * yes/no check that is met) never does; every other counted row can. The uncertainty run's
+ * governing FS per sample follows the same rule.
+ */
+export function canGovern(mode: CheckRow['mode'], fs: number): boolean {
+  return !(mode === 'snapThrough' && fs > 0);
 }
 
 /** The counted row with the smallest FS/target (ties: the lower layer); a standing arch's snap-through row never governs. */
@@ -170,7 +208,7 @@ export function governingRow(rows: readonly CheckRow[]): CheckRow | null {
   let bestRatio = Infinity;
   for (const r of rows) {
     if (!r.counts || r.fs === null) continue;
-    if (r.mode === 'snapThrough' && r.fs > 0) continue;
+    if (!canGovern(r.mode, r.fs)) continue;
     const ratio = r.fs / r.target;
     if (ratio < bestRatio) {
       best = r;

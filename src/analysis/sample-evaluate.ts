@@ -9,9 +9,10 @@
  * `checkTable` — the same functions `analyse` uses, so a sample at the project's own values
  * gives the deterministic FS bit for bit — and reduces the counted rows to:
  * - `modeFs[m]`: the smallest FS of mode `MODES[m]` over the counted checks (null: none counts);
- * - `governingFs`: the smallest FS over the counted checks (the sample fails when it is < 1;
- *   Infinity when nothing counts, e.g. no net load);
- * - `targetRatio`: the smallest FS/target over the counted checks (< 1: below target).
+ * - `governingFs`: the smallest FS over the counted checks that can govern (`canGovern`: not a
+ *   standing arch's snap-through row, FS 1, which would pin every standing sample at 1); the
+ *   sample fails when it is < 1; Infinity when nothing counts, e.g. no net load;
+ * - `targetRatio`: the smallest FS/target over the same checks (< 1: below target).
  *
  * Sampling `layers[i].tensile.value_MPa` on a layer with specimens empties the specimens of
  * the working copy and takes the value as a Brazilian strength: the distribution stands for the
@@ -19,15 +20,26 @@
  * apply on top (it would count the same scatter twice). `uncertainty/variables.ts`
  * `applySample` does the same on a file-unit project.
  *
+ * Without bolts, the per-sample path builds no rows: it runs `evaluate`'s parts (`chainFor`,
+ * `moduliFor`, `layerLoads`, `layerState`) and, per layer, the check table's own rules
+ * (`layerCondition`, `countedModes`, `layerRowFs`, `rowCounts`, `targetFor`), decided at each
+ * sample's values (cracked or not, block, …) exactly as `checkTable` decides them. Two things
+ * are skipped because they cannot change a counted number: a layer's strength chain is reused
+ * while none of its chain inputs is sampled and the span is the same (unit weight, modulus,
+ * ν and joint friction do not enter the chain), and the voussoir is not solved for a layer
+ * whose voussoir rows do not count at this sample. With bolts, `evaluate` and `checkTable`
+ * run in full (the support rows change which rows count).
+ *
  * A slab whose span or Poisson's ratio is sampled takes its plate coefficients from an
  * interpolation over aspect ratio and ν (sample-plates.ts) built once, over the `bounds` the
  * caller gives; its measured error is `plateInterpolation.maxRelativeError`.
  */
 import type { Mode, Project } from '../model/types';
-import { MODES } from './check-labels';
-import { checkTable } from './check-table';
-import { evaluate, STRIP_ASPECT } from './evaluate';
-import { projectToSI, type LayerSI, type ProjectSI } from './inputs';
+import type { StrengthChain } from '../strength/chain';
+import { MODES, VOUSSOIR_MODES } from './check-labels';
+import { canGovern, checkTable, countedModes, layerCondition, layerRowFs, rowCounts, targetFor } from './check-table';
+import { beamEnds, chainFor, evaluate, layerLoads, layerState, moduliFor, STRIP_ASPECT } from './evaluate';
+import { intersectionDiagonal, projectToSI, type LayerSI, type ProjectSI } from './inputs';
 import { platesForSampling, type SamplingPlates } from './sample-plates';
 
 export interface SampleFs {
@@ -56,8 +68,11 @@ type Writer = (p: ProjectSI, value: number) => void;
 
 const LAYER_FIELD = /^layers\[(\d+)\]\.(.+)$/;
 
+/** Layer fields that do not enter the layer's strength chain (`chainFor`): sampling them keeps the chain. */
+const NOT_IN_CHAIN = new Set(['unitWeight_kNm3', 'youngModulus_GPa', 'poisson', 'jointing.jointFriction_deg']);
+
 /** How one file path is written into the SI working copy. Throws on a path it does not know. */
-function writerFor(path: string, base: ProjectSI): Writer {
+function writerFor(path: string, base: ProjectSI, project: Project): Writer {
   const m = LAYER_FIELD.exec(path);
   if (m) {
     const i = Number(m[1]);
@@ -88,12 +103,20 @@ function writerFor(path: string, base: ProjectSI): Writer {
   }
   switch (path) {
     case 'opening.span_m': {
-      // Intersection: the design span is the diagonal with the wider entry w2 held (METHODS §14).
-      const w2 = base.type === 'intersection' ? Math.sqrt(Math.max(0, base.span * base.span - base.entrySpan * base.entrySpan)) : 0;
+      // Intersection: the design span is the diagonal with the other entry width held (METHODS
+      // §14), or √2 × the sampled width when the file gives no second width (as projectToSI).
+      if (project.opening.type === 'intersection') {
+        const w2 = project.opening.length_m;
+        return (p, v) => {
+          p.entrySpan = v;
+          p.span = intersectionDiagonal(v, w2 ?? v);
+          p.spanScale = p.span / v;
+        };
+      }
       return (p, v) => {
         p.entrySpan = v;
-        p.span = base.type === 'intersection' ? Math.hypot(v, w2) : v;
-        p.spanScale = p.span / v;
+        p.span = v;
+        p.spanScale = 1;
       };
     }
     case 'loads.surcharge_kPa': return (p, v) => { p.surcharge = v * 1e3; };
@@ -127,37 +150,93 @@ function samplingPlates(base: ProjectSI, fields: readonly SampledField[]): Sampl
 export function sampleEvaluator(project: Project, fields: readonly SampledField[]): SampleEvaluator {
   const base = projectToSI(project);
   const work: ProjectSI = { ...base, layers: base.layers.map((l) => ({ ...l })) };
-  const writers = fields.map((f) => writerFor(f.path, base));
+  const writers = fields.map((f) => writerFor(f.path, base, project));
   const plates = samplingPlates(base, fields);
   if (plates) work.plateSource = plates.coefficients;
   // Per-mode figures cover the span modes; support rows (bolt, skin, interlayer shear) count in the governing FS.
   const modeIndex = new Map<string, number>(MODES.map((m, k) => [m, k]));
   const modeFs: (number | null)[] = MODES.map(() => null);
   const out: SampleFs = { modeFs, governingFs: Infinity, targetRatio: Infinity };
+  const spanSampled = fields.some((f) => f.path === 'opening.span_m');
+  // Layers whose strength chain may change from sample to sample (a sampled input of the chain).
+  const chainVaries = base.layers.map((_, i) => spanSampled || fields.some((f) => {
+    const m = LAYER_FIELD.exec(f.path);
+    return m !== null && Number(m[1]) === i && !NOT_IN_CHAIN.has(m[2]);
+  }));
+  const n = base.layers.length;
+  const chains: StrengthChain[] = new Array(n);
+  const moduli: { mass: number; beam: number }[] = new Array(n);
+  let chainSpan = NaN;
+  const targets = MODES.map((m) => targetFor(m, base.design));
+  const limit = base.design.deflectionLimitRatio;
+  const cantilever = beamEnds(base) === 'cantilever';
+
+  /** The counted rows reduced, without building them (no bolts). */
+  function fast(span: number): void {
+    const p = work;
+    for (let i = 0; i < n; i++) {
+      if (chainVaries[i] || span !== chainSpan) chains[i] = chainFor(p.layers[i], span, p);
+      moduli[i] = moduliFor(p.layers[i], chains[i], p);
+    }
+    chainSpan = span;
+    const shared = layerLoads(p, moduli);
+    modeFs.fill(null);
+    let governing = Infinity;
+    let ratio = Infinity;
+    for (let i = 0; i < n; i++) {
+      const layer = p.layers[i];
+      const chain = chains[i];
+      const counted = countedModes(layerCondition(p, { chain }, span, layer.thickness, cantilever));
+      const wantVoussoir = VOUSSOIR_MODES.some((m) => counted[m]);
+      const ls = layerState(p, layer, span, chain, moduli[i], shared.groupOf[i], shared.loads[i], wantVoussoir);
+      for (let k = 0; k < MODES.length; k++) {
+        const mode = MODES[k];
+        if (!counted[mode]) continue;
+        const fs = layerRowFs(ls, mode, limit);
+        if (fs === null || !rowCounts(counted, mode, fs)) continue;
+        const cur = modeFs[k];
+        if (cur === null || fs < cur) modeFs[k] = fs;
+        if (!canGovern(mode, fs)) continue;
+        if (fs < governing) governing = fs;
+        const q = fs / targets[k];
+        if (q < ratio) ratio = q;
+      }
+    }
+    out.governingFs = governing;
+    out.targetRatio = ratio;
+  }
+
+  /** `evaluate` and the full check table (bolts: the support rows decide what counts). */
+  function full(span: number | undefined): void {
+    const state = evaluate(work, span === undefined ? {} : { span });
+    const rows = checkTable(work, state);
+    modeFs.fill(null);
+    let governing = Infinity;
+    let ratio = Infinity;
+    for (const r of rows) {
+      if (!r.counts || r.fs === null) continue;
+      const k = modeIndex.get(r.mode);
+      if (k !== undefined) {
+        const cur = modeFs[k];
+        if (cur === null || r.fs < cur) modeFs[k] = r.fs;
+      }
+      if (!canGovern(r.mode, r.fs)) continue;
+      if (r.fs < governing) governing = r.fs;
+      const q = r.fs / r.target;
+      if (q < ratio) ratio = q;
+    }
+    out.governingFs = governing;
+    out.targetRatio = ratio;
+  }
+
   return {
     modes: MODES,
     plateInterpolation: plates ? { maxRelativeError: plates.maxRelativeError, nodes: plates.nodes } : null,
     evaluate(values, span) {
       if (values.length !== writers.length) throw new RangeError(`the sample has ${values.length} values for ${writers.length} fields`);
       for (let j = 0; j < writers.length; j++) writers[j](work, values[j]);
-      const state = evaluate(work, span === undefined ? {} : { span });
-      const rows = checkTable(work, state);
-      modeFs.fill(null);
-      let governing = Infinity;
-      let ratio = Infinity;
-      for (const r of rows) {
-        if (!r.counts || r.fs === null) continue;
-        const k = modeIndex.get(r.mode);
-        if (k !== undefined) {
-          const cur = modeFs[k];
-          if (cur === null || r.fs < cur) modeFs[k] = r.fs;
-        }
-        if (r.fs < governing) governing = r.fs;
-        const q = r.fs / r.target;
-        if (q < ratio) ratio = q;
-      }
-      out.governingFs = governing;
-      out.targetRatio = ratio;
+      if (base.bolts) full(span);
+      else fast(span ?? work.span);
       return out;
     },
   };

@@ -75,10 +75,23 @@ export interface GroupDetail {
   extra_kPa: number;
 }
 
+/** One test of the bending-group formation (METHODS §2): does `layer` join the group whose lowest layer is `first`? */
+export interface GroupingDetail {
+  layer: number;
+  first: number;
+  /** Load on the lowest layer without it, kPa (self-weights only). */
+  without_kPa: number;
+  /** Load on the lowest layer with it, kPa. */
+  with_kPa: number;
+  joins: boolean;
+}
+
 export interface Analysis {
   report: Report;
   layers: LayerDetail[];
   groups: GroupDetail[];
+  /** The group-formation tests, in order (empty for one layer). */
+  grouping: GroupingDetail[];
   /** Index pairs [below, above] of adjacent layers predicted to separate (different groups). */
   separations: Array<[number, number]>;
 }

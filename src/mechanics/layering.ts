@@ -20,25 +20,46 @@ export interface BedStiffness {
 /** Load on the lowest layer of `beds` when they all bend together: E₁t₁³ Σγt / ΣEt³. */
 export function loadOnLowest(beds: readonly BedStiffness[]): number {
   if (beds.length === 0) throw new RangeError('loadOnLowest needs at least one bed');
+  return loadOnLowestOf(beds, 0, beds.length);
+}
+
+/** `loadOnLowest` of beds[start … end − 1] (no copy: the grouping runs once per sample of an uncertainty run). */
+function loadOnLowestOf(beds: readonly BedStiffness[], start: number, end: number): number {
   let weight = 0;
   let stiffness = 0;
-  for (const b of beds) {
+  for (let i = start; i < end; i++) {
+    const b = beds[i];
     weight += b.unitWeight * b.thickness;
     stiffness += b.modulus * b.thickness ** 3;
   }
-  const lowest = beds[0];
+  const lowest = beds[start];
   return (lowest.modulus * lowest.thickness ** 3 * weight) / stiffness;
 }
 
-/** Group index of every bed, layers[0] upward. */
-export function groupLayers(beds: readonly BedStiffness[]): number[] {
+/** One test of the group formation: does bed `layer` join the group that starts at `first`? */
+export interface GroupingStep {
+  /** The bed tested (index into `beds`). */
+  layer: number;
+  /** The lowest bed of the group it may join. */
+  first: number;
+  /** (q_n)₁: load on the group's lowest bed without it, Pa. */
+  without: number;
+  /** (q_{n+1})₁: load on the group's lowest bed with it, Pa. */
+  with: number;
+  /** with ≥ without: it bends with the group; otherwise it separates and starts the next group. */
+  joins: boolean;
+}
+
+/** Group index of every bed, layers[0] upward. `record`, when given, receives each test. */
+export function groupLayers(beds: readonly BedStiffness[], record?: (step: GroupingStep) => void): number[] {
   const groups: number[] = [];
   let group = 0;
   let start = 0;
   for (let i = 0; i < beds.length; i++) {
     if (i > start) {
-      const before = loadOnLowest(beds.slice(start, i));
-      const after = loadOnLowest(beds.slice(start, i + 1));
+      const before = loadOnLowestOf(beds, start, i);
+      const after = loadOnLowestOf(beds, start, i + 1);
+      record?.({ layer: i, first: start, without: before, with: after, joins: !(after < before) });
       if (after < before) {
         group += 1;
         start = i;

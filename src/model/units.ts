@@ -104,6 +104,7 @@ export type Quantity =
   | 'modulus'
   | 'unitWeight'
   | 'force'
+  | 'boltForce'
   | 'deflection';
 
 interface QuantityUnits {
@@ -126,6 +127,10 @@ export const QUANTITIES: Readonly<Record<Quantity, QuantityUnits>> = {
   modulus: { file: 'GPa', SI: 'GPa', US: 'ksi', label: { SI: 'GPa', US: 'ksi' } },
   unitWeight: { file: 'kN/m^3', SI: 'kN/m^3', US: 'lbf/ft^3', label: { SI: 'kN/m³', US: 'lbf/ft³' } },
   force: { file: 'kN', SI: 'kN', US: 'lbf', label: { SI: 'kN', US: 'lbf' } },
+  // A bolt's capacity, pretension and load: kips in US units (1 kip = 1000 lbf, exact and a
+  // mathjs unit, so "25 kip" can be typed). Not tons-force: a "ton" may be short, long or
+  // metric, and mathjs has no tonf.
+  boltForce: { file: 'kN', SI: 'kN', US: 'kip', label: { SI: 'kN', US: 'kip' } },
   deflection: { file: 'mm', SI: 'mm', US: 'in', label: { SI: 'mm', US: 'in' } },
 };
 
@@ -147,6 +152,7 @@ const US_PER_FILE_UNIT: Readonly<Record<Quantity, number>> = {
   modulus: 1e9 / (1e3 * PSI_PA), // GPa → ksi
   unitWeight: 1e3 / (LBF_N / FT_M ** 3), // kN/m³ → lbf/ft³
   force: 1e3 / LBF_N, // kN → lbf
+  boltForce: 1 / LBF_N, // kN → kip (1000 lbf)
   deflection: 1e-3 / IN_M, // mm → in
 };
 

@@ -69,12 +69,13 @@ export async function benchUncertainty(): Promise<BenchResult[]> {
 /**
  * The full per-sample path (issue 11): `runUncertainty` on the 3-layer coal-room beam preset,
  * 4 variables (thickness, unit weight and tensile value of the immediate roof, modulus of the
- * second bed), no FORM and no span points, against a plain loop of the same number of
- * `evaluate` calls on the fixed SI project (strength chains, loads, beams, voussoirs; no check
- * table, sampling or statistics). Target of the issue: 1e5 samples ≤ 1 s on one core (≈ 10 µs
- * a sample); pass here is the ratio ≤ 1.5 (the sampling path adds at most half of the evaluate
- * cost), since the absolute time depends on the machine. LAMINA_BENCH_SAMPLES lowers N for a
- * quick look.
+ * second bed), Latin hypercube, no FORM and no span points: sampling, the fast per-sample path
+ * (`analysis/sample-evaluate.ts`: evaluate's parts and the check table's counting rules at each
+ * sample) and the statistics. Target of the issue: 1e5 samples in ≤ 1 s on one core (≈ 10 µs a
+ * sample). Baseline in the same run: a plain loop of as many `evaluate` calls on the fixed SI
+ * project (strength chains, loads, beams, voussoirs; no check table, sampling or statistics),
+ * i.e. what a sample cost when each one ran the whole evaluation. Each timed batch is two runs
+ * (≥ 1 s); figures are per 1e5 samples. LAMINA_BENCH_SAMPLES lowers N for a quick look.
  */
 function benchAnalysisSamples(): BenchResult[] {
   const n = Number(process.env.LAMINA_BENCH_SAMPLES ?? 100_000);
@@ -90,23 +91,26 @@ function benchAnalysisSamples(): BenchResult[] {
   };
   const project = parseProject(raw).project;
   const si = projectToSI(project);
+  const batch = 2;
+  const per1e5 = 1e5 / (batch * n);
   let sink = 0;
   const run = timeMinMedian(() => {
-    sink += runUncertainty(project, { spanPoints: 0, form: false }).pf;
+    for (let b = 0; b < batch; b++) sink += runUncertainty(project, { spanPoints: 0, form: false }).pf;
   }, 5);
   const loop = timeMinMedian(() => {
-    for (let i = 0; i < n; i++) sink += evaluate(si).layers.length;
+    for (let i = 0; i < batch * n; i++) sink += evaluate(si).layers.length;
   }, 5);
   if (sink === -1) console.log(sink);
   const ratio = run.median / loop.median;
+  const median1e5 = run.median * per1e5;
   return [{
-    name: `Uncertainty run, ${n} samples of the 3-layer coal-room beam, 4 variables (${((run.median * 1e3) / n).toFixed(1)} µs a sample; issue target 1e5 in ≤ 1 s: ${run.median * (1e5 / n) <= 1000 ? 'met' : 'not met'} on this machine)`,
-    median_us: run.median * 1e3,
-    min_us: run.min * 1e3,
-    baseline: `plain evaluate loop ${loop.median.toFixed(0)} ms (min ${loop.min.toFixed(0)} ms)`,
+    name: `Uncertainty run, 1e5 samples of the 3-layer coal-room beam, 4 variables (${(median1e5 / 100).toFixed(1)} µs a sample, median)`,
+    median_us: median1e5 * 1e3,
+    min_us: run.min * per1e5 * 1e3,
+    baseline: `a plain loop of 1e5 evaluate calls, ${(loop.median * per1e5).toFixed(0)} ms (min ${(loop.min * per1e5).toFixed(0)} ms)`,
     ratio,
-    target: 'ratio ≤ 1.5 against the plain evaluate loop',
-    pass: ratio <= 1.5,
+    target: 'issue: 1e5 samples in ≤ 1 s on one core (median); ratio shown against the plain evaluate loop',
+    pass: median1e5 <= 1000,
   }];
 }
 

@@ -140,11 +140,20 @@ describe('display unit systems', () => {
     const m = create({ unitDependencies, createUnitDependencies }, {});
     m.createUnit('psf', '1 lbf/ft^2');
     m.createUnit('ksi', '1000 psi');
+    // mathjs's own kip is 4448.2216 N (8 digits, 3.4e-9 off); the definition is 1000 lbf exactly.
+    m.createUnit('kip', '1000 lbf', { override: true });
     for (const q of Object.keys(QUANTITIES) as Quantity[]) {
       const { file, US } = QUANTITIES[q];
       // 1e-9: mathjs stores psi rounded to 6894.75729 Pa (9 digits); units.ts derives it from lbf and in.
       expectClose(toDisplay(1, q, 'US'), m.unit(1, file).toNumber(US), 1e-9);
     }
+  });
+
+  it('a bolt force typed in kips: "25 kip" is 111.206 kN (25 × 1000 × 4.4482216153 N, 1 lbf = 0.45359237 kg × 9.80665 m/s²)', () => {
+    expectClose(parseDisplayQuantity('25 kip', 'boltForce', 'US'), 25 * 4.4482216152605, 1e-12);
+    expectClose(parseDisplayQuantity('25', 'boltForce', 'US'), 25 * 4.4482216152605, 1e-12);
+    expectClose(parseDisplayQuantity('2 kips', 'boltForce', 'SI'), 2 * 4.4482216152605, 1e-12);
+    expect(unitLabel('boltForce', 'US')).toBe('kip');
   });
 
   it('SI display units are the file units (factor 1)', () => {

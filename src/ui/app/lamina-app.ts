@@ -2,7 +2,7 @@
  * `<lamina-app>`: the worksheet shell. Holds the store (the one place the analysis runs),
  * forwards the components' events to it, and lays out the sheet top to bottom:
  * caution · verdict · 1 Opening and loads · 2 Strata · 3 Lab tests · 4 Strength chain ·
- * 5 Checks · 6 Span and thickness · 7 Report. Results elements (sections 4–7, the trace dialog)
+ * 5 Checks · 6 Support · 7 Span and thickness · 8 Uncertainty (a study run in a worker) · 9 Report. Results elements (sections 4–9, the trace dialog)
  * are rendered by tag; if one is not registered the page still works (it stays empty).
  *
  * Under the project bar it warns of demo text left in a changed project (with a one-click
@@ -29,10 +29,14 @@ import { downloadText } from './download';
 import '../inputs/opening-loads-form';
 import '../inputs/strata-editor';
 import '../inputs/lab-tests-panel';
+import '../inputs/support-form';
 import './caution-banner';
 import './verdict-line';
 import './project-bar';
 import './verdict-chip';
+import '../uncertainty/uncertainty-section';
+import { workerRunner } from '../uncertainty/worker-runner';
+import type { UncertaintyRunner } from '../compute/types';
 
 const SECTIONS = [
   { id: 'opening', title: 'Opening and loads' },
@@ -40,9 +44,14 @@ const SECTIONS = [
   { id: 'lab', title: 'Lab tests' },
   { id: 'strength', title: 'Strength chain' },
   { id: 'checks', title: 'Checks' },
+  { id: 'support', title: 'Support' },
   { id: 'span', title: 'Span and thickness' },
+  { id: 'uncertainty', title: 'Uncertainty' },
   { id: 'report', title: 'Report' },
 ] as const;
+
+/** Sections showing analysis results (their heading says "updating…" while the next analysis runs). */
+const RESULT_SECTIONS = ['strength', 'checks', 'support', 'span'] as const;
 
 const nextFrame = (): Promise<void> => new Promise((resolve) => requestAnimationFrame(() => resolve()));
 const nextTask = (): Promise<void> =>
@@ -62,6 +71,8 @@ export class LaminaApp extends LitElement {
   store!: ProjectStore;
   state!: AppState;
   tracePath: string | null = null;
+  /** Runs the uncertainty study off the main thread (a worker, started on the first run). */
+  runner: UncertaintyRunner = workerRunner();
   private unsubscribe: (() => void) | null = null;
   private lastAnalysis: unknown = null;
   private firstResultsMarked = false;
@@ -258,6 +269,11 @@ export class LaminaApp extends LitElement {
       section.print {
         content-visibility: auto;
         contain-intrinsic-size: auto 900px;
+      }
+      /* The uncertainty section updates while off screen (a run's progress and result); chromium
+         left its updated parts without layout boxes under content-visibility: auto. */
+      section.study {
+        content-visibility: visible;
       }
       section > h2 {
         scroll-margin-top: 9rem;
@@ -558,6 +574,24 @@ export class LaminaApp extends LitElement {
     </div>`;
   }
 
+  private printed: { analysis: AppState['analysis']; needed: AppState['supportNeeded']; out: AppState['analysis'] } | null = null;
+
+  /**
+   * The analysis the printed report renders: with the support needed the store found for this
+   * project (kept identical between renders, so the report is rebuilt only when either changes).
+   */
+  private reportAnalysis(s: AppState): AppState['analysis'] {
+    const a = s.analysis;
+    const n = s.supportNeeded;
+    if (this.printed && this.printed.analysis === a && this.printed.needed === n) return this.printed.out;
+    let out = a;
+    if (a && a.report.support && n && n.project === (s.resultsProject ?? s.project)) {
+      out = { ...a, report: { ...a.report, support: { ...a.report.support, needed: n.needed, neededReason: n.reason } } };
+    }
+    this.printed = { analysis: a, needed: n, out };
+    return out;
+  }
+
   /**
    * A section's heading. `busy`: the results shown are for the previous values while the
    * analysis of the current ones is on its way; the heading says "updating…" (a mark that is
@@ -569,7 +603,7 @@ export class LaminaApp extends LitElement {
       n >= 4 && this.state?.stale
         ? html`<p class="stale-note" role="status"><span class="stale-word">Stale</span>results are for the last accepted values; a field above holds a refused value.</p>`
         : nothing;
-    const mark = n >= 4 && n <= 6 ? html` <span class="busy-mark" aria-hidden=${busy ? 'false' : 'true'}>updating…</span>` : nothing;
+    const mark = (RESULT_SECTIONS as readonly string[]).includes(s.id) ? html` <span class="busy-mark" aria-hidden=${busy ? 'false' : 'true'}>updating…</span>` : nothing;
     return html`<h2 id="${s.id}-h" tabindex="-1" aria-busy=${busy ? 'true' : 'false'}><span class="num-badge">${n}</span> ${s.title}${mark}</h2>${stale}`;
   }
 
@@ -659,8 +693,13 @@ export class LaminaApp extends LitElement {
         ${this.heading(5, s.pending)}
         <checks-table .project=${rp} .analysis=${s.analysis} .units=${s.units}></checks-table>
       </section>
+      <section class="results support" aria-labelledby="support-h">
+        ${this.heading(6, s.pending || s.supportPending)}
+        <support-form .project=${p} units=${s.units} .fieldErrors=${s.fieldErrors}></support-form>
+        <support-view .project=${rp} .analysis=${s.analysis} .units=${s.units} .needed=${s.supportNeeded} ?pending=${s.supportPending}></support-view>
+      </section>
       <section class="results" aria-labelledby="span-h">
-        ${this.heading(6, s.pending || s.chartPending)}
+        ${this.heading(7, s.pending || s.chartPending)}
         <span-finder-view
           .project=${rp}
           .analysis=${s.analysis}
@@ -672,9 +711,13 @@ export class LaminaApp extends LitElement {
         ></span-finder-view>
         <beam-charts-view .project=${rp} .analysis=${s.analysis} .units=${s.units} .chart=${s.chart} .chartLayer=${s.chartLayer}></beam-charts-view>
       </section>
+      <section class="results study" aria-labelledby="uncertainty-h">
+        ${this.heading(SECTIONS.findIndex((x) => x.id === 'uncertainty') + 1)}
+        <uncertainty-section .project=${p} .runner=${this.runner} .units=${s.units} .fieldErrors=${s.fieldErrors}></uncertainty-section>
+      </section>
       <section class="print" aria-labelledby="report-h">
-        ${this.heading(7)}
-        <report-view .project=${rp} .analysis=${s.analysis} .curve=${s.curve} .units=${s.units}></report-view>
+        ${this.heading(SECTIONS.findIndex((x) => x.id === 'report') + 1)}
+        <report-view .project=${rp} .analysis=${this.reportAnalysis(s)} .curve=${s.curve} .units=${s.units}></report-view>
       </section>
       <trace-dialog .report=${report} .path=${this.tracePath ?? ''} .units=${s.units} ?open=${this.tracePath !== null}></trace-dialog>
       <footer><caution-banner></caution-banner></footer>

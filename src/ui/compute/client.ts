@@ -14,8 +14,8 @@
  */
 import type { Project, UncertaintyReport } from '../../model/types';
 import type { ComputeRequest, ComputeResponse } from './protocol';
-import type { AnalysisOutcome, ChartOutcome, ComputeClient, RunHooks, UncertaintyRunRequest } from './types';
-import { analysisJob, chartJob, type AnalysisFunctions } from './jobs';
+import type { AnalysisOutcome, ChartOutcome, ComputeClient, RunHooks, SupportOutcome, UncertaintyRunRequest } from './types';
+import { analysisJob, chartJob, supportJob, type AnalysisFunctions } from './jobs';
 
 export const abortError = (): DOMException => new DOMException('The uncertainty run was cancelled.', 'AbortError');
 
@@ -160,7 +160,15 @@ export const defaultWorkerFactory: WorkerFactory = () =>
  * could not start); every waiting call is rejected with the reason.
  */
 export function createWorkerClient(makeWorker: WorkerFactory = defaultWorkerFactory, onFailure?: (err: Error) => void): ComputeClient {
-  const edits = new WorkerChannel(makeWorker(), onFailure);
+  // The edit worker starts on the first analysis (a client used only for runs starts none).
+  let editChannel: WorkerChannel | null = null;
+  const edits = {
+    call: (...args: Parameters<WorkerChannel['call']>) => {
+      if (closed) return { id: 0, promise: Promise.reject(new Error('the compute client was closed')) };
+      editChannel ??= new WorkerChannel(makeWorker(), onFailure);
+      return editChannel.call(...args);
+    },
+  };
   let runs: WorkerChannel | null = null;
   let closed = false;
   const runChannel = (): WorkerChannel => {
@@ -175,10 +183,12 @@ export function createWorkerClient(makeWorker: WorkerFactory = defaultWorkerFact
   const chart = new LatestOnly<[Project, number], ChartOutcome>(
     ([project, layer]) => edits.call({ kind: 'chart', project, layer }).promise as Promise<ChartOutcome>,
   );
+  const support = new LatestOnly<Project, SupportOutcome>((project) => edits.call({ kind: 'support', project }).promise as Promise<SupportOutcome>);
   return {
     kind: 'worker',
     analyse: (project) => analyse.call(project),
     chart: (project, layer) => chart.call([project, layer]),
+    supportNeeded: (project) => support.call(project),
     runUncertainty: (project: Project, request: UncertaintyRunRequest, hooks?: RunHooks) =>
       uncertaintyCall((onProgress) => {
         let channel: WorkerChannel;
@@ -192,7 +202,7 @@ export function createWorkerClient(makeWorker: WorkerFactory = defaultWorkerFact
       }, hooks),
     dispose: () => {
       closed = true;
-      edits.terminate();
+      editChannel?.terminate();
       runs?.terminate();
       runs = null;
     },
@@ -225,6 +235,11 @@ export function createInThreadClient(fns?: AnalysisFunctions): ComputeClient {
       await macrotask();
       guard();
       return chartJob(project, layer, await functions());
+    },
+    supportNeeded: async (project) => {
+      await macrotask();
+      guard();
+      return supportJob(project, await functions());
     },
     runUncertainty: (project, request, hooks) =>
       uncertaintyCall((onProgress) => {
@@ -269,6 +284,7 @@ export function createComputeClient(makeWorker: WorkerFactory = defaultWorkerFac
     },
     analyse: (project) => retry((c) => c.analyse(project)),
     chart: (project, layer) => retry((c) => c.chart(project, layer)),
+    supportNeeded: (project) => retry((c) => c.supportNeeded(project)),
     runUncertainty: (project, request, hooks) => current.runUncertainty(project, request, hooks),
     dispose: () => {
       current.dispose();

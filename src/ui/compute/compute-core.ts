@@ -6,11 +6,12 @@
  * analysis types hold numbers, strings, arrays and plain objects only).
  */
 import { analyse, designChart, minimumThickness, spanCurve } from '../../analysis/index';
+import { supportNeeded } from '../../analysis/support-needed';
 import type { Project, UncertaintyReport } from '../../model/types';
 import { drainAsync } from '../../uncertainty/monte-carlo';
 import { uncertaintySteps } from '../../uncertainty/run';
 import { errorText } from './errors';
-import { analysisJob, chartJob, type AnalysisFunctions } from './jobs';
+import { analysisJob, chartJob, supportJob, type AnalysisFunctions } from './jobs';
 import type { UncertaintyRunRequest } from './types';
 
 
@@ -19,9 +20,10 @@ export const ANALYSIS_FUNCTIONS: AnalysisFunctions = {
   spanCurve: (project) => spanCurve(project),
   designChart: (project, layer) => designChart(project, layer),
   minimumThickness,
+  supportNeeded: (project) => supportNeeded(project),
 };
 
-export { errorText, analysisJob, chartJob, type AnalysisFunctions };
+export { errorText, analysisJob, chartJob, supportJob, type AnalysisFunctions };
 
 /**
  * The project's uncertainty run, one chunk of samples per step with `pause()` between steps

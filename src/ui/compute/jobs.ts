@@ -5,7 +5,7 @@
 import type { Analysis, DesignChart, SpanCurve } from '../../analysis/types';
 import type { Project } from '../../model/types';
 import { errorText } from './errors';
-import type { AnalysisOutcome, ChartOutcome } from './types';
+import type { AnalysisOutcome, ChartOutcome, SupportOutcome } from './types';
 
 /** The analysis functions the jobs call (tests pass fixtures). */
 export interface AnalysisFunctions {
@@ -13,6 +13,7 @@ export interface AnalysisFunctions {
   spanCurve(project: Project): SpanCurve;
   designChart(project: Project, layerIndex: number): DesignChart;
   minimumThickness(project: Project, layerIndex: number): number | null;
+  supportNeeded(project: Project): SupportOutcome;
 }
 
 const now = (): number => (typeof performance !== 'undefined' ? performance.now() : Date.now());
@@ -57,3 +58,12 @@ export function chartJob(project: Project, layer: number, fns: AnalysisFunctions
   return { layer, chart, minThickness_m, timings: { chart: t1 - t0, minThickness: now() - t1 } };
 }
 
+
+export function supportJob(project: Project, fns: AnalysisFunctions): SupportOutcome {
+  try {
+    const r = fns.supportNeeded(project);
+    return { needed: r.needed, reason: r.reason };
+  } catch (err) {
+    return { needed: null, reason: `the search failed: ${errorText(err)}` };
+  }
+}

@@ -13,6 +13,9 @@ import type { Report, TraceEntry } from '../../model/types';
 import type { UnitSystem } from '../../model/units';
 import { symbolText } from '../../report/symbol-text';
 import { relatedEntries, safeText, valueText } from './trace-entries';
+import { unsafeSVG } from 'lit/directives/unsafe-svg.js';
+import type { TraceSteps } from '../../model/types';
+import { stepsChart, stepsTable } from '../../report/trace-steps';
 import { resultsStyles } from './results-styles';
 
 function deepActiveElement(): HTMLElement | null {
@@ -98,6 +101,23 @@ export class TraceDialog extends LitElement {
       ol.related li[aria-current='true'] button {
         font-weight: 700;
         text-decoration: none;
+      }
+      .steps-box {
+        max-height: 18em;
+        overflow: auto;
+        border: 1px solid var(--rule, #ccc);
+        margin: 0.4em 0;
+      }
+      figure[data-role='steps-chart'] {
+        margin: 0.4em 0;
+      }
+      .steps-box td,
+      .steps-box th {
+        padding: 0.1em 0.5em;
+        white-space: nowrap;
+      }
+      .steps-box tr[aria-current='true'] td {
+        font-weight: 700;
       }
       .nav {
         display: flex;
@@ -197,13 +217,34 @@ export class TraceDialog extends LitElement {
         <dd class="source" data-role="source">${entry.source}</dd>
         ${entry.note ? html`<dt>Note</dt><dd data-role="note">${entry.note}</dd>` : nothing}
       </dl>
+      ${entry.steps ? this.stepsView(entry.steps) : nothing}
     `;
+  }
+
+  /** The recorded iteration: its chart (the n search) and the table of its steps. */
+  private stepsView(steps: TraceSteps) {
+    const table = stepsTable(steps);
+    const chart = stepsChart(steps);
+    return html`<h3>Steps (${steps.rows.length})</h3>
+      ${chart ? html`<figure data-role="steps-chart">${unsafeSVG(chart.svg)}<figcaption class="note">${chart.caption}</figcaption></figure>` : nothing}
+      <p class="note" data-role="steps-caption">${table.caption}</p>
+      <div class="steps-box" tabindex="0" role="region" aria-label="Steps">
+        <table data-role="steps">
+          <thead><tr>${table.columns.map((c) => html`<th scope="col" class=${c.numeric ? 'num' : ''}>${c.title}</th>`)}</tr></thead>
+          <tbody>
+            ${table.rows.map(
+              (row, r) => html`<tr aria-current=${r === steps.marked ? 'true' : 'false'}>${row.map((c) => html`<td class=${c.numeric ? 'num' : ''}>${c.text}</td>`)}</tr>`,
+            )}
+          </tbody>
+        </table>
+      </div>`;
   }
 
   override render() {
     const trace = this.report?.trace ?? [];
     const entry = trace.find((t) => t.path === this.current);
-    const related = relatedEntries(trace, this.current);
+    // The steps the opened number uses (stays the same list while stepping through it).
+    const related = relatedEntries(trace, this.path || this.current);
     const k = related.findIndex((t) => t.path === this.current);
     return html`<dialog aria-labelledby="trace-title" @close=${this.onClose}>
       ${this.open
@@ -220,7 +261,7 @@ export class TraceDialog extends LitElement {
                     traced by the analysis.
                   </p>`}
             ${related.length
-              ? html`<h3>Related steps (${related.length})</h3>
+              ? html`<h3>Steps this number uses (${related.length})</h3>
                   <ol class="related" data-role="related">
                     ${related.map(
                       (t) => html`<li aria-current=${t.path === this.current ? 'true' : 'false'}>

@@ -18,7 +18,7 @@
  *   current, valid fields.
  */
 import { MIGRATED_CODE } from '../../model/validate';
-import type { Project } from '../../model/types';
+import type { Project, SupportNeededReport } from '../../model/types';
 import type { Analysis, DesignChart, SpanCurve } from '../../analysis/types';
 import type { AnalysisOutcome, ChartOutcome, ComputeClient } from '../compute/types';
 import { setAtPath } from '../../model/project-path';
@@ -77,6 +77,14 @@ export interface AppState {
   /** A one-line message for the user (file opened, link copied, autosave ignored …). */
   notice: string | null;
   autosave: AutosaveState;
+  /**
+   * The support needed (METHODS §12 searches) for the current project, computed after the main
+   * results in a task of its own (never in the way of typing); null until then or without a
+   * `supportNeeded` dependency.
+   */
+  supportNeeded: { needed: SupportNeededReport | null; reason: string | null; project: Project } | null;
+  /** True while the support-needed searches for the current project are still to run. */
+  supportPending: boolean;
   /** Milliseconds spent in each step of the last analysis (for the benchmark). */
   timings: { analyse: number; curve: number; chart: number; minThickness: number };
 }
@@ -91,8 +99,12 @@ export type ValidationOutcome =
 
 export interface StoreDeps {
   validate(input: unknown): ValidationOutcome;
-  /** Runs the analysis (the worker client in the browser, the in-thread client in tests). */
-  compute: Pick<ComputeClient, 'analyse' | 'chart'>;
+  /**
+   * Runs the analysis (the worker client in the browser, the in-thread client in tests); with
+   * `supportNeeded`, also the support-needed searches (`analysis/support-needed.ts`) after
+   * each analysis.
+   */
+  compute: Pick<ComputeClient, 'analyse' | 'chart'> & Partial<Pick<ComputeClient, 'supportNeeded'>>;
   storage?: KeyValueStorage | null;
   /** Marks for the edit → results measure (performance.mark in the browser). */
   mark?: (name: string) => void;
@@ -111,6 +123,7 @@ export class ProjectStore {
   /** Sequence number of the latest analysis request; answers to older ones are dropped. */
   private seq = 0;
   private chartSeq = 0;
+  private supportSeq = 0;
   private settledWaiters: Array<() => void> = [];
   /** Refused fields by the path that was edited (a refusal may name other paths too). */
   private refused = new Map<string, FieldError[]>();
@@ -141,6 +154,8 @@ export class ProjectStore {
       inputWarnings: checked.warnings.map(plain),
       notice: null,
       autosave: { status: 'saved', message: null, held: null },
+      supportNeeded: null,
+      supportPending: false,
       timings: { analyse: 0, curve: 0, chart: 0, minThickness: 0 },
     };
     this.requestAnalysis();
@@ -331,6 +346,7 @@ export class ProjectStore {
     const seq = ++this.seq;
     const project = this.state.project;
     this.chartSeq++; // a chart on its way belongs to an older project
+    this.supportSeq++; // so does a support search
     this.deps.compute.analyse(project).then(
       (out) => {
         if (out !== null && seq === this.seq) this.landAnalysis(project, out);
@@ -347,11 +363,32 @@ export class ProjectStore {
     if (!this.chartLayerChosen && out.analysis) chartLayer = governingLayerIndex(out.analysis);
     const timings = { ...this.state.timings, ...out.timings };
     if (out.analysis) {
-      this.set({ analysis: out.analysis, resultsProject: project, curve: out.curve, error: out.error, chartLayer, pending: false, chartPending: true, timings });
+      const supportPending = Boolean(this.deps.compute.supportNeeded);
+      this.set({ analysis: out.analysis, resultsProject: project, curve: out.curve, error: out.error, chartLayer, pending: false, chartPending: true, supportPending, timings });
       this.requestChart(project, chartLayer);
+      // after the results and the chart, in the same worker: never in their way
+      if (supportPending) this.requestSupport(project);
     } else {
-      this.set({ analysis: null, resultsProject: project, curve: null, error: out.error, chartLayer, pending: false, chart: null, minThickness_m: null, chartPending: false, timings });
+      this.set({ analysis: null, resultsProject: project, curve: null, error: out.error, chartLayer, pending: false, chart: null, minThickness_m: null, chartPending: false, supportPending: false, timings });
     }
+  }
+
+  /** Run the support-needed searches for the current project unless its answer is already there. */
+  requestSupportNeeded(): void {
+    if (this.state.supportNeeded?.project === this.state.project || !this.state.analysis || this.state.pending) return;
+    this.set({ supportPending: true });
+    this.requestSupport(this.state.project);
+  }
+
+  private requestSupport(project: Project): void {
+    const find = this.deps.compute.supportNeeded;
+    if (!find) return;
+    const seq = ++this.supportSeq;
+    const landed = (r: { needed: SupportNeededReport | null; reason: string | null } | null) => {
+      if (r === null || seq !== this.supportSeq || project !== this.state.project) return;
+      this.set({ supportNeeded: { needed: r.needed, reason: r.reason, project }, supportPending: false });
+    };
+    find(project).then(landed, (err: unknown) => landed({ needed: null, reason: `the search failed: ${errorText(err)}` }));
   }
 
   private requestChart(project: Project, layer: number): void {

@@ -36,11 +36,13 @@ function analyse(p: Project): Analysis {
     },
     layers: [],
     groups: [],
+    grouping: [],
     separations: [],
   };
 }
 
 function deps(extra: Partial<AnalysisFunctions> = {}) {
+  const withSupport = Boolean(extra.supportNeeded);
   const storage = new Map<string, string>();
   const calls = { analyse: 0, chart: [] as number[] };
   const fns: AnalysisFunctions = {
@@ -48,13 +50,15 @@ function deps(extra: Partial<AnalysisFunctions> = {}) {
     spanCurve: (p) => ({ spans_m: [1], fs: {} as never, targets: {} as never, counts: {} as never, currentSpan_m: p.opening.span_m }),
     designChart: (_p, layer) => { calls.chart.push(layer); return { layer } as never; },
     minimumThickness: () => 0.3,
+    supportNeeded: () => ({ needed: null, reason: null }),
     ...extra,
-  };
+  } as AnalysisFunctions;
   if (extra.analyse) fns.analyse = (p) => { calls.analyse++; return extra.analyse!(p); };
   const d: StoreDeps & { storage: Storage; calls: typeof calls } = {
     calls,
     validate,
-    compute: createInThreadClient(fns),
+    // without a supportNeeded fixture the store gets no support search (as a client without it)
+    compute: withSupport ? createInThreadClient(fns) : (({ analyse, chart }) => ({ analyse, chart }))(createInThreadClient(fns)),
     storage: {
       getItem: (k: string) => storage.get(k) ?? null,
       setItem: (k: string, v: string) => void storage.set(k, v),
@@ -279,5 +283,33 @@ describe('ProjectStore', () => {
     const broken = new ProjectStore({ validate, compute: { analyse: () => Promise.reject(new Error('worker gone')), chart: () => Promise.reject(new Error('worker gone')) } }, twoLayers());
     await broken.settled();
     expect(broken.getState().error).toBe('The analysis failed: worker gone');
+  });
+});
+
+describe('ProjectStore: the support needed runs after the results, never in their way', () => {
+  it('runs after each analysis (after its chart, in the same worker), for that project; an answer for an older project is dropped', async () => {
+    const seen: number[] = [];
+    const d = deps({ supportNeeded: (p) => { seen.push(p.layers[0].thickness_m); return { needed: null, reason: 'no support needed' }; } });
+    const s = new ProjectStore(d, twoLayers());
+    expect(seen).toEqual([]); // not with the edit: after the analysis has landed
+    await s.settled();
+    await expect.poll(() => s.getState().supportPending).toBe(false);
+    expect(seen).toEqual([0.5]);
+    expect(s.getState().supportNeeded?.project).toBe(s.getState().project);
+    s.edit('layers[0].thickness_m', 0.6);
+    s.edit('layers[0].thickness_m', 0.7); // typing on: only the last value's results and search count
+    await s.settled();
+    await expect.poll(() => s.getState().supportNeeded?.project.layers[0].thickness_m).toBe(0.7);
+    expect(s.getState().supportNeeded?.project).toBe(s.getState().project);
+    expect(s.getState().supportPending).toBe(false);
+  });
+
+  it('a failing search is reported as a reason, not thrown; without the dependency nothing is pending', async () => {
+    const s = new ProjectStore(deps({ supportNeeded: () => { throw new Error('boom'); } }), twoLayers());
+    await s.settled();
+    await expect.poll(() => s.getState().supportNeeded?.reason).toBe('the search failed: boom');
+    const plain = new ProjectStore(deps(), twoLayers());
+    await plain.settled();
+    expect(plain.getState().supportPending).toBe(false);
   });
 });
