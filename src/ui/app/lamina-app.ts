@@ -34,7 +34,6 @@ import './caution-banner';
 import './verdict-line';
 import './project-bar';
 import './verdict-chip';
-import '../uncertainty/uncertainty-section';
 import { workerRunner } from '../uncertainty/worker-runner';
 import type { UncertaintyRunner } from '../compute/types';
 
@@ -391,6 +390,9 @@ export class LaminaApp extends LitElement {
     // "first results after navigation" (performance marks count from the navigation).
     if (!this.firstResultsMarked) {
       this.firstResultsMarked = true;
+      // The uncertainty section (far down the sheet) is not in the first load: its element is
+      // defined once the first results are on screen, and upgrades in place.
+      void import('../uncertainty/uncertainty-section');
       setTimeout(() => {
         try {
           performance.mark('lamina:first-results');
