@@ -390,15 +390,15 @@ export class LaminaApp extends LitElement {
     // "first results after navigation" (performance marks count from the navigation).
     if (!this.firstResultsMarked) {
       this.firstResultsMarked = true;
-      // The uncertainty section (far down the sheet) is not in the first load: its element is
-      // defined once the first results are on screen, and upgrades in place.
-      void import('../uncertainty/uncertainty-section');
       setTimeout(() => {
         try {
           performance.mark('lamina:first-results');
         } catch {
           /* the timeline is optional */
         }
+        // The uncertainty section (far down the sheet) is not in the first load: its element
+        // is defined once the first results are on screen, and upgrades in place.
+        void import('../uncertainty/uncertainty-section');
       }, 0);
     }
     try {
