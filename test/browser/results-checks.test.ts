@@ -44,6 +44,8 @@ describe('<checks-table> in the app (coal-room demo)', () => {
     const dialog = page.locator('trace-dialog dialog[open]');
     await dialog.waitFor();
     expect(await text(page.locator('trace-dialog [data-role="trace-path"]'))).toBe('layers[0].elastic.fsTension');
+    // the formula renderer (mathjs) loads when the dialog first opens
+    await page.locator('trace-dialog [data-role="substituted"][aria-busy="false"]').waitFor({ timeout: 20_000 });
     const formula = await text(page.locator('trace-dialog [data-role="formula"]'));
     expect(formula.length).toBeGreaterThan(0);
     expect(formula).not.toContain('*'); // rendered, not the raw mathjs text

@@ -286,13 +286,17 @@ export class LaminaApp extends LitElement {
         max-width: 100%;
         overflow-x: auto;
       }
-      .busy-mark {
+      /* "updating…" after a results heading while its results are for the previous values:
+         always laid out (so nothing moves), shown only when busy and after a short delay (no
+         flicker for a quick update); a pseudo-element, so it is not part of the heading's text. */
+      h2.results-h::after {
+        content: ' updating…';
         font-size: 0.75em;
         font-weight: 400;
         color: var(--lam-muted);
         visibility: hidden;
       }
-      h2[aria-busy='true'] .busy-mark {
+      h2.results-h[aria-busy='true']::after {
         visibility: visible;
         animation: lam-show-late 0.25s step-end;
       }
@@ -605,8 +609,8 @@ export class LaminaApp extends LitElement {
       n >= 4 && this.state?.stale
         ? html`<p class="stale-note" role="status"><span class="stale-word">Stale</span>results are for the last accepted values; a field above holds a refused value.</p>`
         : nothing;
-    const mark = (RESULT_SECTIONS as readonly string[]).includes(s.id) ? html` <span class="busy-mark" aria-hidden=${busy ? 'false' : 'true'}>updating…</span>` : nothing;
-    return html`<h2 id="${s.id}-h" tabindex="-1" aria-busy=${busy ? 'true' : 'false'}><span class="num-badge">${n}</span> ${s.title}${mark}</h2>${stale}`;
+    const results = (RESULT_SECTIONS as readonly string[]).includes(s.id);
+    return html`<h2 id="${s.id}-h" class=${results ? 'results-h' : ''} tabindex="-1" aria-busy=${busy ? 'true' : 'false'}><span class="num-badge">${n}</span> ${s.title}</h2>${stale}`;
   }
 
   override render() {
