@@ -176,6 +176,7 @@ export class UncertaintySection extends LitElement {
         },
       });
       if (this.abort !== abort) return;
+      performance.mark('lamina:uncertainty-result'); // the result is here; rendering it follows
       this.last = { result, key };
       this.run = { kind: 'done', result, key };
     } catch (err) {
