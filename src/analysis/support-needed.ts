@@ -241,3 +241,19 @@ export function supportNeeded(project: Project, hints: SupportNeededHints = {}):
     reason: null,
   };
 }
+
+/**
+ * The governing FS/target of the whole check table (support rows included) against span, with
+ * the support as given and without it, strength chains held at the current span (METHODS §11);
+ * null where no check counts; capped at 1e6. For the "with this support" curve of the span
+ * finder and the report. Spans in the entered scale (entry width for an intersection).
+ */
+export function supportMarginCurve(project: Project, spans_m: readonly number[], chains?: StrengthChain[]): { withSupport: (number | null)[]; unsupported: (number | null)[] } {
+  const held = chains ?? evaluate(projectToSI(project)).layers.map((l) => l.chain);
+  const bare: Project = { ...project, support: { standing_kPa: 0, bolts: null } };
+  const at = (p: Project, s: number): number | null => {
+    const m = countedMargin(rowsOf(withSpan(p, s), held));
+    return Number.isFinite(m) ? Math.min(m, 1e6) : null;
+  };
+  return { withSupport: spans_m.map((s) => at(project, s)), unsupported: spans_m.map((s) => at(bare, s)) };
+}
