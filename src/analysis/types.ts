@@ -144,6 +144,20 @@ export interface DesignChart {
   targets: Record<Mode, number>;
   /** Whether the mode counts for this layer at the project's span and thickness (check table). */
   counts: Record<Mode, boolean>;
+  /**
+   * Where the project has support: at some thicknesses of this layer, the largest span in the
+   * chart's range at which every counted check of the whole check table meets its target, with
+   * the support as given and without it (null: none in the range passes; the top of the range
+   * where all of it passes). Absent or null without support.
+   */
+  support?: DesignSupportCurve | null;
+}
+
+/** Largest passing span against the layer's thickness, with and without the project's support. */
+export interface DesignSupportCurve {
+  thicknesses_m: number[];
+  withSupport_m: (number | null)[];
+  unsupported_m: (number | null)[];
 }
 
 /** Bending-stress field over a slab (for contour plots). */

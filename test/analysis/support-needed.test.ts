@@ -26,6 +26,9 @@ import fc from 'fast-check';
 import { analyse, analyseWithSupportNeeded } from '../../src/analysis/analyse';
 import { NO_SUPPORT_NEEDED, supportMarginCurve, supportNeeded, supportPasses } from '../../src/analysis/support-needed';
 import { spanCurve } from '../../src/analysis/span-curve';
+import { designChart } from '../../src/analysis/design-chart';
+import { evaluate } from '../../src/analysis/evaluate';
+import { projectToSI } from '../../src/analysis/inputs';
 import { readProjectText } from '../../src/model/project-file';
 import { defaultProject } from '../../src/model/defaults';
 import type { BoltPattern, CheckRow, Project } from '../../src/model/types';
@@ -268,4 +271,28 @@ describe('the "with this support" curve of the span curve', () => {
   it('is absent without support', () => {
     expect(spanCurve({ ...bolted(7), support: { standing_kPa: 0, bolts: null } }).support).toBe(null);
   });
+});
+
+describe('the design chart with this support', () => {
+  it('gives, per thickness, a span that passes with the support (and one 1/200 of the range longer that does not)', () => {
+    const p = bolted(7);
+    const chart = designChart(p, 1);
+    const sc = chart.support!;
+    expect(sc.thicknesses_m).toHaveLength(8);
+    const hi = Math.max(...chart.spans_m);
+    const tol = (hi - Math.min(...chart.spans_m)) / 200;
+    for (const k of [0, 3, 7]) {
+      const t = sc.thicknesses_m[k];
+      const pt: Project = { ...p, layers: p.layers.map((l, i) => (i === 1 ? { ...l, thickness_m: t } : l)) };
+      const chains = evaluate(projectToSI(pt)).layers.map((l) => l.chain);
+      const at = (q: Project, s: number) => supportPasses({ ...q, opening: { ...q.opening, span_m: s } }, chains);
+      for (const [q, s] of [[pt, sc.withSupport_m[k]], [{ ...pt, support: { standing_kPa: 0, bolts: null } }, sc.unsupported_m[k]]] as const) {
+        if (s === null) continue;
+        expect(at(q, s)).toBe(true);
+        if (s < hi) expect(at(q, s + tol)).toBe(false);
+      }
+    }
+    // without support there is no such curve
+    expect(designChart({ ...p, support: { standing_kPa: 0, bolts: null } }, 1).support).toBe(null);
+  }, 60_000);
 });
