@@ -1,4 +1,4 @@
-/** Section 6: the full calculation trace, every entry, grouped by layer. */
+/** Appendix B: the full calculation trace, every entry once, grouped by layer, with the steps of each iteration. */
 import type { TraceEntry } from '../../model/types';
 import type { Block, Section } from '../document-types';
 import { traceBlock } from '../trace-block';
@@ -28,7 +28,7 @@ export function traceSection(ctx: SectionContext): Section {
     }
   }
   if (ctx.analysis.report.trace.length === 0) blocks.push({ kind: 'paragraph', text: 'The analysis returned no trace entries.' });
-  return { id: 'trace', title: 'Calculation trace', blocks };
+  return { id: 'trace', title: 'Appendix B — Calculation trace', appendix: true, blocks };
 }
 
 /** Layer index an entry belongs to (`layers[i].…` or `detail.layers[i].…`); whole-roof entries sort last. */
