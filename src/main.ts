@@ -31,7 +31,7 @@ export interface LaminaTestHook {
   state(): AppState;
   store: ProjectStore;
   app: LaminaApp;
-  /** Edit and analyse at once (no debounce); resolves once the results have rendered. */
+  /** Edit, and resolve once its analysis (from the worker) has rendered. */
   editNow(path: string, value: unknown): Promise<{ accepted: boolean; rendered_ms: number; frame_ms: number }>;
 }
 
@@ -45,7 +45,9 @@ declare global {
 function boot(): void {
   const storage = browserStorage();
   const first = initialProject(location.hash, storage, validateProject);
-  const store = new ProjectStore(defaultDeps(storage), first.project);
+  // One compute client: its edit worker analyses each edit, its run worker runs the studies.
+  const deps = defaultDeps(storage);
+  const store = new ProjectStore(deps, first.project);
   if (first.source === 'link') {
     // The project now lives in the autosave; drop the hash so a reload keeps later edits.
     writeAutosave(storage, first.project);
@@ -58,6 +60,7 @@ function boot(): void {
 
   const app = document.createElement('lamina-app');
   app.store = store;
+  app.runner = deps.compute.runUncertainty;
   const mount = document.getElementById('app') ?? document.body;
   mount.replaceChildren(app);
   // A project link pasted into the address bar of an open worksheet replaces the project

@@ -5,8 +5,9 @@
  * reported number and every warning found on the way.
  */
 import type { LayerReport, Project, Report, VoussoirReport, Warning } from '../model/types';
-import type { Analysis, GroupDetail, LabDetail, LayerDetail, StrengthStep } from './types';
-import { evaluate, plateAspect, type LayerState, type State } from './evaluate';
+import type { Analysis, GroupDetail, GroupingDetail, LabDetail, LayerDetail, StrengthStep } from './types';
+import { evaluate, groupingSteps, plateAspect, voussoirInputFor, type LayerState, type State } from './evaluate';
+import { groupingTable, leverArmSteps, voussoirSearchSteps } from './iteration-trace';
 import { projectToSI, type LayerSI, type ProjectSI } from './inputs';
 import { allCountedMeet, BLOCK_RATIO, checkTable, DEEP_BEAM_RATIO, governingOf } from './check-table';
 import { MODE_SHORT } from './check-labels';
@@ -17,6 +18,7 @@ import { specimenOutcomes } from '../strength/specimens';
 import { empiricalReport, supportReport } from './support-report';
 import { suspensionOf } from './support';
 import { supportNeeded } from './support-needed';
+import type { StrengthChain } from '../strength/chain';
 
 const MPa = 1e-6;
 const kPa = 1e-3;
@@ -27,6 +29,11 @@ const mm = 1e3;
 const LARGE_DEFLECTION_RATIO = 0.1;
 
 export function analyse(project: Project): Analysis {
+  return analyseWithState(project).analysis;
+}
+
+/** The analysis and the strength chains it used (the support-needed searches hold them fixed). */
+function analyseWithState(project: Project): { analysis: Analysis; chains: StrengthChain[] } {
   const p = projectToSI(project);
   const state = evaluate(p);
   const warnings: Warning[] = [];
@@ -49,6 +56,7 @@ export function analyse(project: Project): Analysis {
   });
 
   groupWarnings(p, state, warnings);
+  const grouping = traceGrouping(p, state, trace);
   traceGroups(p, state, groups, trace);
   supportWarnings(p, state, warnings);
 
@@ -154,7 +162,7 @@ export function analyse(project: Project): Analysis {
     warnings,
     trace: trace.entries,
   };
-  return { report, layers: details, groups, separations };
+  return { analysis: { report, layers: details, groups, grouping, separations }, chains: state.layers.map((l) => l.chain) };
 }
 
 /**
@@ -162,8 +170,8 @@ export function analyse(project: Project): Analysis {
  * (METHODS §12): for the CLI's support command and the report's support section.
  */
 export function analyseWithSupportNeeded(project: Project): Analysis {
-  const a = analyse(project);
-  const n = supportNeeded(project);
+  const { analysis: a, chains } = analyseWithState(project);
+  const n = supportNeeded(project, { chains, rows: a.report.checks });
   const support = a.report.support ?? { bolts: null, needed: null, neededReason: null };
   return { ...a, report: { ...a.report, support: { ...support, needed: n.needed, neededReason: n.reason } } };
 }
@@ -549,8 +557,12 @@ function voussoirReport(base: string, layer: LayerSI, ls: LayerState, state: Sta
   const t: [number, string] = [layer.thickness, 'm'];
   const n: [number, string] = [v.n, ''];
   const note = p.type === 'slab' ? 'Slab: plane-strain beam on the short span (conservative).' : undefined;
-  trace.add(`${base}.voussoir.n`, `Compression-zone depth ratio of ${layer.name}`, 'n', { n }, v.n, '', SOURCES.voussoir,
+  const nEntry = trace.add(`${base}.voussoir.n`, `Compression-zone depth ratio of ${layer.name}`, 'n', { n }, v.n, '', SOURCES.voussoir,
     'The equilibrium n minimises fc over (0, 1) (bracketed search, same minimum as a 0.01 sweep or better).');
+  const input = voussoirInputFor(layer, state.span, layer.thickness, ls.effectiveUnitWeight, ls.modulusMass, ls.crushingStrength, p.horizontalStress);
+  const search = voussoirSearchSteps(input);
+  // The recorded search is the reported one (same kernel, same input); attach it only then.
+  if (search && search.n === v.n) nEntry.steps = search.steps;
   trace.add(`detail.${base}.voussoirSteps.initialLeverArm_m`, `Initial lever arm z0, ${layer.name}`, 't * (1 - 2 * n / 3)', { t, n }, v.initialLeverArm, 'm', SOURCES.voussoir);
   trace.add(`detail.${base}.voussoirSteps.arcLength_m`, `Arch length L, ${layer.name}`, 's + 8 * z0^2 / (3 * s)', { s, z0: [v.initialLeverArm, 'm'] }, v.arcLength, 'm', SOURCES.voussoir);
   trace.add(`${base}.voussoir.maxCompression_MPa`, `Maximum arch compression fc, ${layer.name}`, 'gamma_e * s^2 / (4 * n * z)', { gamma_e: [ls.effectiveUnitWeight * kPa, 'kN/m^3'], s, n, z: [v.leverArm, 'm'] },
@@ -558,8 +570,9 @@ function voussoirReport(base: string, layer: LayerSI, ls: LayerState, state: Sta
   trace.add(`detail.${base}.voussoirSteps.averageStress_MPa`, `Average arch stress fav, ${layer.name}`, 'fc * (2 / 3 + n) / 3', { fc: [v.maxCompression * MPa, 'MPa'], n }, v.averageStress * MPa, 'MPa', SOURCES.voussoir);
   trace.add(`detail.${base}.voussoirSteps.shortening_mm`, `Elastic arch shortening ΔL, ${layer.name}`, 'fav * L / Em', { fav: [v.averageStress * MPa, 'MPa'], L: [v.arcLength, 'm'], Em: [ls.modulusMass * GPa, 'GPa'] },
     v.shortening * mm, 'mm', SOURCES.voussoir, layer.modulusBasis === 'intact' ? 'Em: rock-mass modulus (Hoek & Diederichs 2006).' : 'Em: modulus as given (rock mass).');
-  trace.add(`${base}.voussoir.leverArm_m`, `Lever arm z, ${layer.name}`, 'sqrt((3 * s / 8) * (8 * z0^2 / (3 * s) - dL))', { s, z0: [v.initialLeverArm, 'm'], dL: [v.shortening * mm, 'mm'] }, v.leverArm, 'm', SOURCES.voussoir,
+  const zEntry = trace.add(`${base}.voussoir.leverArm_m`, `Lever arm z, ${layer.name}`, 'sqrt((3 * s / 8) * (8 * z0^2 / (3 * s) - dL))', { s, z0: [v.initialLeverArm, 'm'], dL: [v.shortening * mm, 'mm'] }, v.leverArm, 'm', SOURCES.voussoir,
     'Converged value of the iteration (the largest root of z³ − z0² z + K = 0).');
+  if (nEntry.steps) zEntry.steps = leverArmSteps(input, v.n);
   trace.add(`${base}.voussoir.deflection_mm`, `Voussoir midspan deflection, ${layer.name}`, 'z0 - z', { z0: [v.initialLeverArm, 'm'], z: [v.leverArm, 'm'] }, v.deflection * mm, 'mm', SOURCES.voussoir);
   trace.add(`${base}.voussoir.deflectionRatio`, `Deflection ratio δ/t, ${layer.name}`, 'delta / t', { delta: [v.deflection * mm, 'mm'], t }, v.deflectionRatio, '', SOURCES.voussoir,
     `Limit ${p.design.deflectionLimitRatio}: δ/t ≈ 0.1 marks the onset of non-linear response, ≈ 0.25 is ultimate.`);
@@ -610,6 +623,31 @@ function groupWarnings(p: ProjectSI, state: State, warnings: Warning[]): void {
         message: `Bed separation predicted between ${p.layers[i - 1].name} and ${p.layers[i].name}: the upper bed is stiffer and does not load the layers below (it starts bending group ${state.layers[i].group + 1}).` });
     }
   }
+}
+
+/** Each test of the group formation as a trace entry: the load on the group's lowest layer with the next layer added. */
+function traceGrouping(p: ProjectSI, state: State, trace: TraceBuilder): GroupingDetail[] {
+  const steps = groupingSteps(p, state.layers.map((ls) => ({ beam: ls.modulusBeam })));
+  const names = p.layers.map((l) => l.name);
+  steps.forEach((st, j) => {
+    const idx = Array.from({ length: st.layer - st.first + 1 }, (_, k) => st.first + k);
+    const values: Record<string, [number, string]> = {};
+    idx.forEach((i, k) => {
+      values[`g${k + 1}`] = [p.layers[i].unitWeight * kPa, 'kN/m^3'];
+      values[`t${k + 1}`] = [p.layers[i].thickness, 'm'];
+      values[`E${k + 1}`] = [state.layers[i].modulusBeam * GPa, 'GPa'];
+    });
+    const weight = idx.map((_, k) => `g${k + 1} * t${k + 1}`).join(' + ');
+    const stiffness = idx.map((_, k) => `E${k + 1} * t${k + 1}^3`).join(' + ');
+    const lowest = names[st.first];
+    const entry = trace.add(`detail.grouping[${j}].with_kPa`, `Does ${names[st.layer]} bend with the group of ${lowest}? Load on ${lowest} with it`,
+      `E1 * t1^3 * (${weight}) / (${stiffness})`, values, st.with * kPa, 'kPa', SOURCES.obertDuvall,
+      `Load on ${lowest} without it ${round(st.without * kPa)} kPa, with it ${round(st.with * kPa)} kPa. ` +
+        (st.joins ? `${round(st.with * kPa)} ≥ ${round(st.without * kPa)}: ${names[st.layer]} loads the layers below and bends with them.` : `${round(st.with * kPa)} < ${round(st.without * kPa)}: ${names[st.layer]} is stiffer, separates and starts the next group.`) +
+        ' Self-weights only (METHODS §2).');
+    if (j === 0) entry.steps = groupingTable(steps, names);
+  });
+  return steps.map((st) => ({ layer: st.layer, first: st.first, without_kPa: st.without * kPa, with_kPa: st.with * kPa, joins: st.joins }));
 }
 
 function traceGroups(p: ProjectSI, state: State, groups: GroupDetail[], trace: TraceBuilder): void {

@@ -4,9 +4,9 @@
  * report from it; the span, thickness and chart searches call it (or its parts) many times.
  */
 import { elasticBeam, type BeamEnds, type BeamResult } from '../mechanics/beam';
-import { groupLayers, shareLoads, type SharedLoads } from '../mechanics/layering';
+import { groupLayers, shareLoads, type GroupingStep, type SharedLoads } from '../mechanics/layering';
 import { plateCoefficients, type PlateCoefficients } from '../mechanics/plate';
-import { solveVoussoir, type VoussoirResult } from '../mechanics/voussoir';
+import { solveVoussoir, type VoussoirInput, type VoussoirRecorder, type VoussoirResult } from '../mechanics/voussoir';
 import { rockMassModulus } from '../strength/rock-mass-modulus';
 import { strengthChain, type StrengthChain } from '../strength/chain';
 import type { LayerSI, ProjectSI } from './inputs';
@@ -133,17 +133,23 @@ export function voussoirFor(
   modulus: number,
   crushingStrength: number,
   horizontalStress: number,
+  record?: VoussoirRecorder,
 ): VoussoirResult | null {
   if (!(effectiveUnitWeight > 0)) return null;
-  return solveVoussoir({
-    span,
-    thickness,
-    unitWeight: effectiveUnitWeight,
-    modulus,
-    ucs: crushingStrength,
-    frictionDeg: layer.jointFriction,
-    horizontalStress,
-  });
+  return solveVoussoir(voussoirInputFor(layer, span, thickness, effectiveUnitWeight, modulus, crushingStrength, horizontalStress), record);
+}
+
+/** The voussoir kernel's input for one layer (see `voussoirFor`). */
+export function voussoirInputFor(
+  layer: LayerSI,
+  span: number,
+  thickness: number,
+  effectiveUnitWeight: number,
+  modulus: number,
+  crushingStrength: number,
+  horizontalStress: number,
+): VoussoirInput {
+  return { span, thickness, unitWeight: effectiveUnitWeight, modulus, ucs: crushingStrength, frictionDeg: layer.jointFriction, horizontalStress };
 }
 
 export function evaluate(p: ProjectSI, options: EvaluateOptions = {}): State {
@@ -157,6 +163,19 @@ export function evaluate(p: ProjectSI, options: EvaluateOptions = {}): State {
     return layerState(p, layer, span, chains[i], moduli[i], shared.groupOf[i], shared.loads[i], wantVoussoir);
   });
   return { span, ends, shared, layers, support: supportState(p, span, ends, layers) };
+}
+
+/**
+ * The tests of the bending-group formation (METHODS §2) as `layerLoads` makes them, with bed
+ * indices of the whole roof: every bed from the immediate roof up, or, where layers hang from
+ * bolts, the beds from the anchor layer up (the hanging ones are groups of their own).
+ */
+export function groupingSteps(p: ProjectSI, moduli: readonly { beam: number }[]): GroupingStep[] {
+  const beds = p.layers.map((layer, i) => ({ unitWeight: layer.unitWeight, thickness: layer.thickness, modulus: moduli[i].beam }));
+  const offset = suspensionOf(p)?.anchorLayer ?? 0;
+  const steps: GroupingStep[] = [];
+  groupLayers(beds.slice(offset), (s) => steps.push({ ...s, layer: s.layer + offset, first: s.first + offset }));
+  return steps;
 }
 
 /** Groups and shared loads (they depend on thickness, unit weight and modulus, not on the span). */

@@ -16,8 +16,9 @@ import { withThickness } from './design-chart';
 import { evaluate } from './evaluate';
 import { projectToSI } from './inputs';
 
-export const THICKNESS_MIN_M = 0.01;
-export const THICKNESS_TOLERANCE_M = 1e-3;
+import { THICKNESS_MIN_M, THICKNESS_TOLERANCE_M } from './thickness-limits';
+
+export { THICKNESS_MIN_M, THICKNESS_TOLERANCE_M };
 
 export function minimumThickness(project: Project, layerIndex: number): number | null {
   const p = projectToSI(project);

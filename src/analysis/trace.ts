@@ -11,7 +11,7 @@ export type TraceValues = Record<string, [number, string]>;
 export class TraceBuilder {
   readonly entries: TraceEntry[] = [];
 
-  add(path: string, label: string, formula: string, values: TraceValues, result: number, unit: string, source: string, note?: string): void {
+  add(path: string, label: string, formula: string, values: TraceValues, result: number, unit: string, source: string, note?: string): TraceEntry {
     const entry: TraceEntry = {
       path,
       label,
@@ -23,6 +23,7 @@ export class TraceBuilder {
     };
     if (note) entry.note = note;
     this.entries.push(entry);
+    return entry;
   }
 }
 

@@ -11,7 +11,7 @@ export interface ParsedArgs {
 }
 
 const VALUE_FLAGS = new Set(['--html', '--csv', '--units', '--rock', '--layer', '--samples', '--seed']);
-const BOOLEAN_FLAGS = new Set(['--json', '--jsonl', '--markdown', '--help', '-h']);
+const BOOLEAN_FLAGS = new Set(['--json', '--jsonl', '--markdown', '--no-trace', '--help', '-h']);
 
 export function parseArgs(argv: readonly string[]): ParsedArgs {
   const positional: string[] = [];

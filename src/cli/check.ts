@@ -62,6 +62,11 @@ export async function runCheck(args: ParsedArgs, io: Io): Promise<ExitCode> {
   if ((typeof html === 'string' || typeof csv === 'string') && !single) {
     throw new UsageError('--html and --csv write the report of one project file; give exactly one file');
   }
+  // --no-trace prints the summary report without its appendix (the calculation trace).
+  const trace = !args.flags['--no-trace'];
+  if (!trace && format !== 'markdown' && typeof html !== 'string') {
+    throw new UsageError('--no-trace shortens the calculation report: use it with --markdown or --html');
+  }
   // The calculation report renders trace formulas with mathjs: load it only when asked for.
   const reports = format === 'markdown' || typeof html === 'string' ? await import('./report-output') : null;
 
@@ -75,7 +80,7 @@ export async function runCheck(args: ParsedArgs, io: Io): Promise<ExitCode> {
   };
 
   for (const source of sources) {
-    const entry = checkOne(source, io, { units, format, single, html, csv, reports, sampling });
+    const entry = checkOne(source, io, { units, format, single, html, csv, reports, sampling, trace });
     worst = worstExit(worst, entry.exit);
     if (entry.status === 'meets') tally.meets++;
     else if (entry.status === 'below') tally.below++;
@@ -92,6 +97,8 @@ export async function runCheck(args: ParsedArgs, io: Io): Promise<ExitCode> {
 }
 
 interface CheckOptions {
+  /** Include the report's appendix (strength chain, calculation trace, methods). */
+  trace: boolean;
   units: UnitSystem;
   format: Format;
   single: boolean;
@@ -135,7 +142,7 @@ function checkOne(source: InputSource, io: Io, o: CheckOptions): CheckEntry {
   // An acceptable P_f in the file counts like a check: not shown to be met → exit 1.
   const exit = meetsTargets(project, analysis.report) && u?.meetsAcceptablePf !== false ? EXIT_MEETS : EXIT_BELOW;
   const curve = o.reports || typeof o.csv === 'string' ? spanCurve(project) : null;
-  const doc = () => o.reports!.reportDocument({ project, analysis, curve: curve!, text, units: o.units, version: laminaVersion() });
+  const doc = () => o.reports!.reportDocument({ project, analysis, curve: curve!, text, units: o.units, version: laminaVersion(), trace: o.trace });
   if (typeof o.html === 'string') writeOutput(io, '--html', o.html, o.reports!.renderHtml(doc()));
   if (typeof o.csv === 'string') {
     writeOutput(io, '--csv', o.csv, resultsCsv(analysis, o.units, project));

@@ -4,8 +4,8 @@ import { CAUTION } from '../model/caution';
 export const USAGE = `Lamina — roof and overhang checks for excavations in bedded rock
 
 Usage:
-  lamina check FILE... [--json | --jsonl | --markdown] [--html OUT.html] [--csv OUT.csv] [--units SI|US]
-               [--samples N] [--seed S]
+  lamina check FILE... [--json | --jsonl | --markdown] [--html OUT.html] [--no-trace] [--csv OUT.csv]
+               [--units SI|US] [--samples N] [--seed S]
       Full analysis of each project file: strength chain, elastic / layered / voussoir /
       slab checks, governing mode and the largest span per mode. FILE may be a pattern
       ("presets/*.lamina.json", expanded by lamina itself) or - for standard input.
@@ -31,8 +31,11 @@ Options:
   --json           check: the lamina-report/2 JSON of one file; with several files an
                    array of {file, status, exit, report | errors}; openings: an array
   --jsonl          as --json, one JSON document per line (per file, or per opening)
-  --markdown       print the calculation report as Markdown
+  --markdown       print the calculation report as Markdown: a summary (verdict, inputs,
+                   check table, key charts, warnings), then the appendix (layer results,
+                   strength chain, the full calculation trace, methods)
   --html OUT.html  write the self-contained HTML calculation report (one file)
+  --no-trace       with --markdown or --html: the summary alone, without the appendix
   --csv OUT.csv    check: write the per-layer results to OUT.csv and the FS-versus-span
                    curve to OUT-span.csv (one file); openings: the results table
   --units SI|US    units for human-readable output and CSV (default SI)

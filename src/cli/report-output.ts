@@ -16,10 +16,12 @@ export interface ReportInputs {
   text: string;
   units: UnitSystem;
   version: string;
+  /** Include the appendix (default true). */
+  trace?: boolean;
 }
 
-export function reportDocument({ project, analysis, curve, text, units, version }: ReportInputs): ReportDocument {
-  return buildReportDocument({ project, analysis, curve, projectText: text, units, version, date: new Date().toISOString().slice(0, 10) });
+export function reportDocument({ project, analysis, curve, text, units, version, trace }: ReportInputs): ReportDocument {
+  return buildReportDocument({ project, analysis, curve, projectText: text, units, version, date: new Date().toISOString().slice(0, 10), trace: trace ?? true });
 }
 
 export { renderHtml, renderMarkdown };

@@ -39,13 +39,13 @@ export function supportLines(project: Project, report: Report, units: UnitSystem
   if (s && b) {
     const layerName = (i: number) => `${i + 1} ${project.layers[i].name}`;
     lines.push(
-      `Bolts: ${formatQuantity(b.length_m, 'length', units)} long, ${formatQuantity(b.capacity_kN, 'force', units)} each at ${formatQuantity(b.spacingAcross_m, 'length', units)} × ${formatQuantity(b.spacingAlong_m, 'length', units)}, anchorage ${formatQuantity(b.anchorage_m, 'length', units)}, ${b.action === 'suspension' ? 'suspension' : 'beam building'}`,
+      `Bolts: ${formatQuantity(b.length_m, 'length', units)} long, ${formatQuantity(b.capacity_kN, 'boltForce', units)} each at ${formatQuantity(b.spacingAcross_m, 'length', units)} × ${formatQuantity(b.spacingAlong_m, 'length', units)}, anchorage ${formatQuantity(b.anchorage_m, 'length', units)}, ${b.action === 'suspension' ? 'suspension' : 'beam building'}`,
     );
     const r = s.bolts;
     if (r) {
       lines.push(`  anchor layer: ${r.anchorLayer === null ? 'none credited (the anchorage zone crosses an interface)' : layerName(r.anchorLayer)}`);
       if (r.suspended.length) {
-        lines.push(`  suspended: ${r.suspended.map(layerName).join(', ')}; load per bolt ${formatQuantity(r.load_kN, 'force', units)}, FS per bolt ${fs(r.fsBolt)} (target ${numberText(project.design.fsTarget.bolt, 3)})`);
+        lines.push(`  suspended: ${r.suspended.map(layerName).join(', ')}; load per bolt ${formatQuantity(r.load_kN, 'boltForce', units)}, FS per bolt ${fs(r.fsBolt)} (target ${numberText(project.design.fsTarget.bolt, 3)})`);
       }
       if (r.composite) {
         lines.push(`  composite beam: ${r.composite.credited ? 'credited (bonded tension counts)' : 'not credited (unbonded tension counts)'}; least interlayer shear FS ${fs(r.composite.fsShear)} (target ${numberText(project.design.fsTarget.bolt, 3)})`);

@@ -36,8 +36,22 @@ function loadOnLowestOf(beds: readonly BedStiffness[], start: number, end: numbe
   return (lowest.modulus * lowest.thickness ** 3 * weight) / stiffness;
 }
 
-/** Group index of every bed, layers[0] upward. */
-export function groupLayers(beds: readonly BedStiffness[]): number[] {
+/** One test of the group formation: does bed `layer` join the group that starts at `first`? */
+export interface GroupingStep {
+  /** The bed tested (index into `beds`). */
+  layer: number;
+  /** The lowest bed of the group it may join. */
+  first: number;
+  /** (q_n)₁: load on the group's lowest bed without it, Pa. */
+  without: number;
+  /** (q_{n+1})₁: load on the group's lowest bed with it, Pa. */
+  with: number;
+  /** with ≥ without: it bends with the group; otherwise it separates and starts the next group. */
+  joins: boolean;
+}
+
+/** Group index of every bed, layers[0] upward. `record`, when given, receives each test. */
+export function groupLayers(beds: readonly BedStiffness[], record?: (step: GroupingStep) => void): number[] {
   const groups: number[] = [];
   let group = 0;
   let start = 0;
@@ -45,6 +59,7 @@ export function groupLayers(beds: readonly BedStiffness[]): number[] {
     if (i > start) {
       const before = loadOnLowestOf(beds, start, i);
       const after = loadOnLowestOf(beds, start, i + 1);
+      record?.({ layer: i, first: start, without: before, with: after, joins: !(after < before) });
       if (after < before) {
         group += 1;
         start = i;

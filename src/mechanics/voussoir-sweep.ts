@@ -41,16 +41,32 @@ export function solveVoussoirSweep(input: VoussoirInput): VoussoirResult {
   return voussoirResultAt(input, bestN, bestZ, iterations);
 }
 
+/** One step of the lever-arm iteration: from z (with fc and ΔL at z) to the next z. */
+export interface LeverArmStep {
+  /** Step number, 1 … */
+  k: number;
+  /** z at the start of the step, m (z0 at k = 1). */
+  z: number;
+  /** fc = γ's²/(4nz), Pa. */
+  maxCompression: number;
+  /** ΔL = fav·L/E, m. */
+  shortening: number;
+  /** √((3s/8)(8z0²/(3s) − ΔL)), m; null where the radicand is negative (no lever arm). */
+  next: number | null;
+}
+
 /**
  * Lever arm z at a given n by the published fixed-point iteration from z = z0 (see
  * `solveVoussoirSweep`); `leverArm` is null where the radicand turns negative or the iteration
- * does not settle within 500 steps. Inputs are not validated here (the caller does).
+ * does not settle within 500 steps. Inputs are not validated here (the caller does). `record`,
+ * when given, receives each step (for the calculation trace).
  *     leverArmByIteration({ span: 6, thickness: 0.45, unitWeight: 25e3, modulus: 8e9,
  *                           ucs: 40e6, frictionDeg: 35 }, 0.74).leverArm // ≈ 0.2256 m
  */
 export function leverArmByIteration(
   input: VoussoirInput,
   n: number,
+  record?: (step: LeverArmStep) => void,
 ): { leverArm: number | null; iterations: number } {
   const { span: s, thickness: t, unitWeight: g, modulus: E } = input;
   const z0 = t * (1 - (2 * n) / 3);
@@ -62,8 +78,12 @@ export function leverArmByIteration(
     const fav = (fc * (2 / 3 + n)) / 3;
     const dL = (fav * L) / E;
     const radicand = rise2 - ((3 * s) / 8) * dL;
-    if (!(radicand > 0)) return { leverArm: null, iterations: k };
+    if (!(radicand > 0)) {
+      record?.({ k, z, maxCompression: fc, shortening: dL, next: null });
+      return { leverArm: null, iterations: k };
+    }
     const zNext = Math.sqrt(radicand);
+    record?.({ k, z, maxCompression: fc, shortening: dL, next: zNext });
     const step = Math.abs(zNext - z);
     z = zNext;
     if (step < RELATIVE_TOLERANCE * t) return { leverArm: z, iterations: k };

@@ -84,6 +84,36 @@ const N_TOLERANCE = 1e-7;
 /** Hard cap on refinement steps (the tolerance is reached well before). */
 const MAX_REFINE_STEPS = 100;
 
+/** One trial n of the equilibrium search, as `solveVoussoir` records it when asked. */
+export interface VoussoirSearchStep {
+  /** "scan": the coarse scan n = 0.1 … 0.9; "walk": the bracket walk from n = 0.75; "refine": a false-position/bisection trial; "result": the equilibrium n. */
+  stage: 'scan' | 'walk' | 'refine' | 'result';
+  n: number;
+  /** Lever arm z at n, m (null: no real lever arm at this n). */
+  leverArm: number | null;
+  /** fc = γ's²/(4nz) at n, Pa (null where there is no lever arm). */
+  maxCompression: number | null;
+  /** The bracket [lower, upper] holding the equilibrium after this step (the scan: the whole range). */
+  lower: number;
+  upper: number;
+}
+
+/** Receives each step of the search (optional argument of `solveVoussoir`). */
+export type VoussoirRecorder = (step: VoussoirSearchStep) => void;
+
+/**
+ * fc(n) = γ's²/(4nz(n)) at each n (null where n has no lever arm), z from the closed form of
+ * the published iteration (`leverArmAt`). For the chart of the search. SI: Pa.
+ */
+export function compressionCurve(input: VoussoirInput, ns: readonly number[]): Array<{ n: number; maxCompression: number | null }> {
+  validateVoussoirInput(input);
+  const { span: s, unitWeight: g } = input;
+  return ns.map((n) => {
+    const z = leverArmAt(input, n);
+    return { n, maxCompression: z !== null && z > 0 ? (g * s * s) / (4 * n * z) : null };
+  });
+}
+
 /** Throws RangeError naming the first invalid field. NaN-safe. */
 export function validateVoussoirInput(input: VoussoirInput): void {
   const { span, thickness, unitWeight, modulus, ucs, frictionDeg } = input;
@@ -197,16 +227,27 @@ export function leverArmAt(input: VoussoirInput, n: number): number | null {
  * point is feasible, the least h = K/Kc is found the same way (root of d ln h/dn): h ≤ 1 there
  * means a narrow feasible window; h > 1 means snap-through (no n in (0,1) has a lever arm).
  * SI: m, N/m³, Pa → m, Pa. FS crushing = σc/(fc + σh) (σh ≥ 0; METHODS §3a); FS sliding = fc·n·tanφ/(γ's).
+ * `record`, when given, receives every trial n with its lever arm, fc and the bracket after it
+ * (for the calculation trace); the search itself is the same with or without it.
  * Sources: Diederichs & Kaiser (1999); Brady & Brown (2004) §8.4.
  *     solveVoussoir({ span: 6, thickness: 0.45, unitWeight: 25e3, modulus: 8e9,
  *                     ucs: 40e6, frictionDeg: 35 })
  *     // n ≈ 0.740, leverArm ≈ 0.2256 m, maxCompression ≈ 1.3475e6 Pa, deflection ≈ 2.36e-3 m
  */
-export function solveVoussoir(input: VoussoirInput): VoussoirResult {
+export function solveVoussoir(input: VoussoirInput, record?: VoussoirRecorder): VoussoirResult {
   validateVoussoirInput(input);
   const { span: s, thickness: t, unitWeight: g, modulus: E } = input;
   const kScale = ((3 * s) / 8) * ((g * s * s) / (4 * E)); // K = kScale·L·c, c = (2/3 + n)/(3n)
   let evaluations = 0;
+  // Only when recording: the lever arm and fc at a trial n (same closed form as the search).
+  const note = record
+    ? (stage: VoussoirSearchStep['stage'], n: number, lower: number, upper: number): void => {
+        const h = loadRatio(s, t, kScale, n);
+        const z = h <= 1 ? leverArmFromRatio(t, n, h) : null;
+        const ok = z !== null && z > 0;
+        record({ stage, n, leverArm: ok ? z : null, maxCompression: ok ? (g * s * s) / (4 * n * z) : null, lower, upper });
+      }
+    : null;
 
   // Coarse scan of h (cheap, no trig): which scan points have a lever arm, and the least h.
   let first = 0; // first and last feasible scan index (the feasible window is an interval)
@@ -223,6 +264,7 @@ export function solveVoussoir(input: VoussoirInput): VoussoirResult {
       minH = h;
       jMinH = i;
     }
+    note?.('scan', i / GRID, 0, 1);
   }
   evaluations += GRID - 1;
 
@@ -326,6 +368,12 @@ export function solveVoussoir(input: VoussoirInput): VoussoirResult {
     }
   }
 
+  if (note) {
+    // The bracket the walk (or the least-h search) found, at its ends that have a lever arm.
+    if (a > 0 && a < 1) note('walk', a, a, b);
+    if (b > 0 && b < 1 && b !== a) note('walk', b, a, b);
+  }
+
   // Safeguarded false position (Illinois) on D over [a, b]; bisect while an end is unknown.
   // One end always has a lever arm and the feasible window is an interval, so a trial n
   // without one lies beyond the window on the side of the unknown end.
@@ -340,6 +388,7 @@ export function solveVoussoir(input: VoussoirInput): VoussoirResult {
     else slope = Da === Infinity ? Infinity : -Infinity;
     if (slope === 0) {
       a = b = m;
+      note?.('refine', m, a, b);
       break;
     }
     if (slope > 0) {
@@ -353,6 +402,7 @@ export function solveVoussoir(input: VoussoirInput): VoussoirResult {
       if (side === 1 && Da < Infinity) Da /= 2;
       side = 1;
     }
+    note?.('refine', m, a, b);
   }
 
   // The refined root, on its feasible side.
@@ -365,6 +415,7 @@ export function solveVoussoir(input: VoussoirInput): VoussoirResult {
   evaluations++;
   const z = h <= 1 ? leverArmFromRatio(t, n, h) : NaN;
   if (!(z > 0)) return snapThroughResult(evaluations);
+  note?.('result', n, a, b);
   return voussoirResultAt(input, n, z, evaluations);
 }
 

@@ -347,6 +347,26 @@ export interface TraceEntry {
   unit: string;
   source: string;
   note?: string;
+  /** The steps of an iterative search or test behind the result (n search, lever arm, bending groups). */
+  steps?: TraceSteps;
+}
+
+/**
+ * The recorded steps of an iteration behind a trace entry, as the kernel did them: one row per
+ * step, each value in the column's unit (null where it does not exist, e.g. no lever arm at a
+ * trial n). `curve` is a function of the search variable for a chart (fc against n).
+ */
+export interface TraceSteps {
+  caption: string;
+  /** Column symbol (as in the formulas), heading and unit ('' for a pure number). */
+  columns: Array<{ symbol: string; label: string; unit: string }>;
+  rows: Array<Array<number | null>>;
+  /** A word per row: the stage of the search or the decision ("scan", "refine", "joins"). */
+  stage: string[];
+  /** Row of the result (the minimum, the converged value). */
+  marked: number | null;
+  /** Points [x, y] of the searched function (y null where it does not exist), in the units of the first two numeric columns. */
+  curve?: Array<[number, number | null]>;
 }
 
 /** The bolt pattern's results (METHODS §12; DESIGN "Contract changes in v2"). */

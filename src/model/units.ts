@@ -1,52 +1,22 @@
 /**
- * Units at the boundary: the ONE module that owns mathjs for units. Text typed into a form
- * field (`20 ft`, `2500 psi`, `160 lbf/ft^3`) is parsed with a strict pattern and converted
- * with `math.unit(value, unit)`; user text is never evaluated as an expression.
- * Display conversions (SI ↔ US customary) use plain factors from the unit definitions below
- * (no mathjs), so formatting a number never loads the unit machinery: the command line and
- * any other caller that only displays values do not pay for mathjs (the bundler drops it when
- * `parseQuantity` is not reachable; mathjs is free of import side effects).
+ * Units at the boundary. Text typed into a form field (`20 ft`, `2500 psi`, `160 lbf/ft^3`) is
+ * parsed with a strict pattern and converted through the unit table of `unit-table.ts` (the
+ * units the app accepts, with SI prefixes on m, g, N, Pa and bar); user text is never
+ * evaluated as an expression. No mathjs here: the worksheet's first load stays small, and
+ * test/model/units.test.ts checks every unit of the table against mathjs's own definitions.
+ * Display conversions (SI ↔ US customary) use plain factors from the definitions below.
  *
- * Custom units defined here: psf = lbf/ft², ksf = 1000 lbf/ft², ksi = 1000 psi,
- * pcf = lbf/ft³, kcf = 1000 lbf/ft³. mathjs supplies psi = 6894.757 Pa, lbf = 4.448222 N,
- * ft = 0.3048 m, in = 0.0254 m (METHODS §13: 1 psi = 6894.757 Pa; 1 lbf/ft³ = 0.157087 kN/m³;
- * 1 ft = 0.3048 m; 1 ksf = 47.880 kPa).
+ * Units: psf = lbf/ft², ksf = 1000 lbf/ft², ksi = 1000 psi, pcf = lbf/ft³, kcf = 1000 lbf/ft³;
+ * psi = lbf/in² = 6894.757 Pa, lbf = 4.448222 N, ft = 0.3048 m, in = 0.0254 m (METHODS §13:
+ * 1 psi = 6894.757 Pa; 1 lbf/ft³ = 0.157087 kN/m³; 1 ft = 0.3048 m; 1 ksf = 47.880 kPa).
  *
  *     parseQuantity('20 ft', 'm')   // 6.096
  *     parseQuantity('2500 psi', 'MPa') // 17.2369
  *     parseQuantity('0.45', 'm')    // 0.45 (a bare number is already in the given unit)
  */
-import { create, createUnitDependencies, unitDependencies, type Unit } from 'mathjs';
 import { normaliseDecimalComma } from './decimal-comma';
 import { MISSING, PRECISION, numberText } from './number-format';
-
-const CUSTOM_UNITS: ReadonlyArray<[string, string]> = [
-  ['psf', '1 lbf/ft^2'],
-  ['ksf', '1000 lbf/ft^2'],
-  ['ksi', '1000 psi'],
-  ['pcf', '1 lbf/ft^3'],
-  ['kcf', '1000 lbf/ft^3'],
-];
-
-type UnitMath = ReturnType<typeof createUnitMath>;
-
-// Only the unit machinery (not `all`): keeps the app bundle small and leaves no expression
-// evaluator in this module at all.
-function createUnitMath() {
-  const m = create({ unitDependencies, createUnitDependencies }, {});
-  for (const [name, definition] of CUSTOM_UNITS) {
-    if (!m.Unit.isValuelessUnit(name)) m.createUnit(name, definition);
-  }
-  return m;
-}
-
-let unitMath: UnitMath | undefined;
-
-/** The one mathjs instance, created on first use (parsing only). */
-function mathUnits(): UnitMath {
-  unitMath ??= createUnitMath();
-  return unitMath;
-}
+import { unitValue, type UnitValue } from './unit-table';
 
 /** Thrown on unparsable text or a quantity of the wrong dimension. */
 export class UnitError extends Error {
@@ -70,12 +40,12 @@ const DIMENSIONS: ReadonlyArray<{ probe: string; name: string; example: string }
   { probe: 'rad', name: 'an angle', example: '30 deg' },
 ];
 
-function dimensionOf(siUnit: string): { name: string; example: string } {
-  const math = mathUnits();
-  const target = math.unit(1, siUnit);
-  for (const d of DIMENSIONS) if (target.equalBase(math.unit(1, d.probe))) return d;
+function dimensionOf(target: UnitValue, siUnit: string): { name: string; example: string } {
+  for (const d of DIMENSIONS) if (sameDimension(target, unitValue(d.probe)!)) return d;
   return { name: `a quantity in ${siUnit}`, example: `1 ${siUnit}` };
 }
+
+const sameDimension = (a: UnitValue, b: UnitValue): boolean => a.dimension.every((x, i) => x === b.dimension[i]);
 
 /** Accept the pretty forms people type: ³ ², `·` for a product, `m3` for `m^3`. */
 function normaliseUnit(text: string): string {
@@ -96,14 +66,6 @@ function tidy(x: number): number {
   return v === 0 ? 0 : v;
 }
 
-function toUnit(value: number, unitText: string): Unit | undefined {
-  try {
-    return mathUnits().unit(value, unitText);
-  } catch {
-    return undefined;
-  }
-}
-
 /**
  * Parse `text` (a number, optionally followed by a unit) and return it in `siUnit`
  * (e.g. 'm', 'mm', 'MPa', 'kPa', 'GPa', 'kN/m^3', 'kN'). A bare number is taken as already
@@ -112,9 +74,9 @@ function toUnit(value: number, unitText: string): Unit | undefined {
  *     parseQuantity('160 lbf/ft^3', 'kN/m^3') // 25.134
  */
 export function parseQuantity(text: string, siUnit: string): number {
-  const target = toUnit(1, siUnit);
+  const target = unitValue(siUnit);
   if (!target) throw new RangeError(`parseQuantity: unknown target unit ${JSON.stringify(siUnit)}`);
-  const dim = dimensionOf(siUnit);
+  const dim = dimensionOf(target, siUnit);
   const expected = `expected ${dim.name} (e.g. ${dim.example}), got ${JSON.stringify(String(text))}`;
   if (typeof text !== 'string') throw new UnitError(expected);
   const m = QUANTITY.exec(normaliseDecimalComma(text)); // "2,5 m" → "2.5 m"; "1,250" throws (ambiguous)
@@ -123,9 +85,9 @@ export function parseQuantity(text: string, siUnit: string): number {
   if (!Number.isFinite(value)) throw new UnitError(expected);
   const unitText = m[2]?.trim();
   if (!unitText) return value;
-  const unit = toUnit(value, normaliseUnit(unitText));
-  if (!unit || !unit.equalBase(target)) throw new UnitError(expected);
-  const result = tidy(unit.toNumber(siUnit));
+  const unit = unitValue(normaliseUnit(unitText));
+  if (!unit || !sameDimension(unit, target)) throw new UnitError(expected);
+  const result = tidy((value * unit.factor) / target.factor);
   if (!Number.isFinite(result)) throw new UnitError(expected);
   return result;
 }
@@ -142,6 +104,7 @@ export type Quantity =
   | 'modulus'
   | 'unitWeight'
   | 'force'
+  | 'boltForce'
   | 'deflection';
 
 interface QuantityUnits {
@@ -164,6 +127,10 @@ export const QUANTITIES: Readonly<Record<Quantity, QuantityUnits>> = {
   modulus: { file: 'GPa', SI: 'GPa', US: 'ksi', label: { SI: 'GPa', US: 'ksi' } },
   unitWeight: { file: 'kN/m^3', SI: 'kN/m^3', US: 'lbf/ft^3', label: { SI: 'kN/m³', US: 'lbf/ft³' } },
   force: { file: 'kN', SI: 'kN', US: 'lbf', label: { SI: 'kN', US: 'lbf' } },
+  // A bolt's capacity, pretension and load: kips in US units (1 kip = 1000 lbf, exact and a
+  // mathjs unit, so "25 kip" can be typed). Not tons-force: a "ton" may be short, long or
+  // metric, and mathjs has no tonf.
+  boltForce: { file: 'kN', SI: 'kN', US: 'kip', label: { SI: 'kN', US: 'kip' } },
   deflection: { file: 'mm', SI: 'mm', US: 'in', label: { SI: 'mm', US: 'in' } },
 };
 
@@ -185,6 +152,7 @@ const US_PER_FILE_UNIT: Readonly<Record<Quantity, number>> = {
   modulus: 1e9 / (1e3 * PSI_PA), // GPa → ksi
   unitWeight: 1e3 / (LBF_N / FT_M ** 3), // kN/m³ → lbf/ft³
   force: 1e3 / LBF_N, // kN → lbf
+  boltForce: 1 / LBF_N, // kN → kip (1000 lbf)
   deflection: 1e-3 / IN_M, // mm → in
 };
 

@@ -110,6 +110,7 @@ export type SectionId =
   | 'checks'
   | 'trace'
   | 'assumptions'
+  | 'warnings'
   | 'charts'
   | 'uncertainty'
   | 'closing';
@@ -118,6 +119,8 @@ export interface Section {
   id: SectionId;
   title: string;
   blocks: Block[];
+  /** Part of the appendix (the full calculation), which a summary report leaves out. */
+  appendix?: boolean;
 }
 
 export interface ReportDocument {
@@ -128,6 +131,8 @@ export interface ReportDocument {
     version: string;
     hash: string;
     units: 'SI' | 'US';
+    /** Whether the appendix (strength chain in full, calculation trace, methods) is included. */
+    appendix: boolean;
   };
   sections: Section[];
 }

@@ -57,9 +57,15 @@ export const REPORT_CSS = `
 .lamina-report figure.lr-chart svg { width: 100%; height: auto; max-height: 14cm; }
 .lamina-report figcaption { font-style: italic; font-size: .92em; }
 @media print {
-  .lamina-report { max-width: none; padding: 0; font-size: 9.5pt; }
-  .lamina-report section.lr-section { break-before: page; }
-  .lamina-report section.lr-section-header, .lamina-report section.lr-section-verdict { break-before: auto; }
+  .lamina-report { max-width: none; padding: 0; font-size: 9pt; line-height: 1.35; }
+  .lamina-report h2 { margin: 1em 0 .4em; }
+  .lamina-report h3 { margin: .8em 0 .3em; }
+  .lamina-report dl.lr-kv { grid-template-columns: 20% 30% 20% 30%; gap: .1em .6em; }
+  .lamina-report table { margin: .2em 0 .6em; font-size: .86em; }
+  .lamina-report th, .lamina-report td { padding: .1em .3em; }
+  .lamina-report figure.lr-chart { margin: .4em 0 .6em; }
+  .lamina-report section:not(.lr-appendix) figure.lr-chart svg { max-height: 6.3cm; }
+  .lamina-report section.lr-appendix-first { break-before: page; }
   .lamina-report h2, .lamina-report h3, .lamina-report h4 { break-after: avoid; }
   .lamina-report thead { display: table-header-group; }
   .lamina-report tr, .lamina-report .lr-callout { break-inside: avoid; }
@@ -111,14 +117,16 @@ function blockHtml(block: Block): string {
   }
 }
 
-function sectionHtml(section: Section): string {
+function sectionHtml(section: Section, index: number, sections: readonly Section[]): string {
   const blocks = section.blocks.map(blockHtml).join('\n');
-  return `<section class="lr-section lr-section-${section.id}" id="lr-${section.id}" aria-labelledby="lr-${section.id}-title">\n<h2 id="lr-${section.id}-title">${escapeHtml(section.title)}</h2>\n${blocks}\n</section>`;
+  // The appendix starts on a new page; the summary runs on without page breaks.
+  const first = section.appendix && !sections[index - 1]?.appendix ? ' lr-appendix lr-appendix-first' : section.appendix ? ' lr-appendix' : '';
+  return `<section class="lr-section lr-section-${section.id}${first}" id="lr-${section.id}" aria-labelledby="lr-${section.id}-title">\n<h2 id="lr-${section.id}-title">${escapeHtml(section.title)}</h2>\n${blocks}\n</section>`;
 }
 
 /** The report as an `<article>` (no `<html>`/`<head>`), for embedding next to REPORT_CSS. */
 export function renderHtmlBody(doc: ReportDocument): string {
-  return `<article class="lamina-report" lang="en">\n<h1>${escapeHtml(doc.title)}</h1>\n${doc.sections.map(sectionHtml).join('\n')}\n</article>`;
+  return `<article class="lamina-report" lang="en">\n<h1>${escapeHtml(doc.title)}</h1>\n${doc.sections.map((s, i, all) => sectionHtml(s, i, all)).join('\n')}\n</article>`;
 }
 
 /**

@@ -1,8 +1,9 @@
 /**
  * Builds the one structured report model from a project and its analysis; Markdown, HTML and
- * the app all render this model. Sections, in order: header (with the caution), verdict,
- * inputs, strength chain, checks, calculation trace, assumptions and warnings, charts, and the
- * caution again at the end.
+ * the app all render this model. Two parts: the summary — header (with the caution), verdict,
+ * inputs, checks, support (where given), key charts, uncertainty (where run), warnings — and,
+ * unless `trace: false`, the appendix — A strength chain, B calculation trace (every entry
+ * once), C methods, assumptions and limits — then the caution again at the end.
  *
  *     const doc = buildReportDocument({ project, analysis, curve, units: 'SI', version: '0.1.0' });
  *     renderMarkdown(doc); renderHtml(doc);
@@ -13,7 +14,7 @@ import { projectHash, writeProjectText } from '../model/project-file';
 import type { Project } from '../model/types';
 import type { UnitSystem } from '../model/units';
 import type { ReportDocument, Section } from './document-types';
-import { assumptionsSection } from './sections/assumptions';
+import { assumptionsSection, warningsSection } from './sections/assumptions';
 import { chartsSection } from './sections/charts';
 import { checksSection } from './sections/checks';
 import type { SectionContext } from './sections/context';
@@ -36,6 +37,8 @@ export interface ReportInput {
   date?: string;
   /** Lamina version (the CLI/app read it from package.json). */
   version?: string;
+  /** Include the appendix (strength chain, calculation trace, methods); default true. */
+  trace?: boolean;
 }
 
 export function buildReportDocument(input: ReportInput): ReportDocument {
@@ -54,6 +57,7 @@ export function buildReportDocument(input: ReportInput): ReportDocument {
     version: input.version ?? 'unknown',
     hash: projectHash(input.projectText ?? writeProjectText(project)),
     units,
+    appendix: input.trace ?? true,
   };
   return {
     schema: 'lamina-report-document/1',
@@ -63,14 +67,13 @@ export function buildReportDocument(input: ReportInput): ReportDocument {
       headerSection(ctx, meta),
       verdictSection(ctx),
       inputsSection(ctx),
-      strengthSection(ctx),
       checksSection(ctx),
       // Only where the project gives support or Q ratings.
       ...([supportSection(ctx)].filter((x): x is Section => x !== null)),
-      traceSection(ctx),
-      assumptionsSection(ctx),
       chartsSection(ctx),
       ...[uncertaintySection(ctx)].filter((s) => s !== null),
+      warningsSection(ctx),
+      ...(meta.appendix ? [strengthSection(ctx), traceSection(ctx), assumptionsSection()] : []),
       closingSection(),
     ],
   };

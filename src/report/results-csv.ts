@@ -10,7 +10,7 @@
  *     resultsCsv(analysis, 'SI', project)  // "layer,layer_name,mode,demand_MPa,…"
  *     spanCurveCsv(curve, 'US')            // "span_ft,fs_tension,…"
  */
-import { csvFormat } from 'd3';
+import { csvFormat } from 'd3-dsv';
 import type { Analysis, SpanCurve } from '../analysis/types';
 import type { Mode, Project } from '../model/types';
 import { displayUnit, fileUnit, toDisplay, unitLabel, type UnitSystem } from '../model/units';

@@ -7,7 +7,7 @@
  * One sort and one pass: 1e5 samples bin in a few milliseconds.
  *     fsHistogram(Float64Array.of(0.8, 1.2, 1.3, 40), 4) // bins over [0.8, 39.4], above: 1
  */
-import { quantileSorted, ticks } from 'd3';
+import { quantileSorted, ticks } from 'd3-array';
 
 export interface HistogramBin {
   x0: number;

@@ -15,7 +15,7 @@
  * (the smallest value, 1.16e-10, is Φ(−6.35)).
  *     const u = seededUniform(1); u(); u(); // the same two numbers on every run
  */
-import { randomLcg } from 'd3';
+import { randomLcg } from 'd3-random';
 
 const HALF_STEP = 2 ** -33;
 

@@ -23,7 +23,7 @@ function evaluateEntry(formula: string, values: Record<string, { value: number; 
 /** Reads `layers[0].strength.lab_MPa` from the report, or `detail.layers[0].hoekBrown.mb` from the details. */
 function valueAt(analysis: Analysis, path: string): unknown {
   const detail = path.startsWith('detail.');
-  let node: unknown = detail ? { layers: analysis.layers, groups: analysis.groups } : analysis.report;
+  let node: unknown = detail ? { layers: analysis.layers, groups: analysis.groups, grouping: analysis.grouping } : analysis.report;
   const keys = (detail ? path.slice(7) : path).match(/[^.[\]]+/g) ?? [];
   for (const k of keys) node = (node as Record<string, unknown>)?.[k];
   return node;

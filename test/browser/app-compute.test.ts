@@ -111,3 +111,45 @@ describe('compute client in chromium', () => {
     await context.close();
   });
 });
+
+describe('the worksheet on the worker', () => {
+  it('first results come from the worker; fast typing ends on the results of the last value, and results are never shown as current for another project', async () => {
+    const { page, context, errors } = await openApp(session.browser, session.url);
+    await loadClient(page);
+    // every state the store publishes: not pending ⇒ the results are the current project's
+    await page.evaluate(() => {
+      const w = window as unknown as { __violations: string[] };
+      w.__violations = [];
+      const hook = window.__lamina!;
+      hook.store.subscribe((s) => {
+        if (!s.pending && s.analysis && s.resultsProject !== s.project) w.__violations.push(`results of another project shown as current (thickness ${s.project.layers[0].thickness_m})`);
+      });
+    });
+    const field = page.locator('quantity-input[path="layers[0].thickness_m"] input');
+    await field.click();
+    await page.keyboard.press('End');
+    // six keys with no wait: each value is posted at once; older answers are dropped
+    for (const key of ['1', '2', 'Backspace', '7', '5', 'Backspace']) await page.keyboard.press(key);
+    const typed = Number(await field.inputValue());
+    await page.waitForFunction((t) => {
+      const s = window.__lamina!.state();
+      return !s.pending && !s.chartPending && s.project.layers[0].thickness_m === t;
+    }, typed, { timeout: 30_000 });
+    const out = await page.evaluate(async () => {
+      const s = window.__lamina!.state();
+      const local = await window.__computeClient!.createInThreadClient().analyse(s.project);
+      return {
+        violations: (window as unknown as { __violations: string[] }).__violations,
+        same: JSON.stringify(local?.analysis?.report) === JSON.stringify(s.analysis?.report),
+        resultsCurrent: s.resultsProject === s.project,
+      };
+    });
+    expect(out).toEqual({ violations: [], same: true, resultsCurrent: true });
+    // the verdict shows the governing FS of the last value
+    const fs = Number(await page.locator('verdict-line p').getAttribute('data-fs'));
+    const want = await page.evaluate(() => window.__lamina!.state().analysis!.report.governing!.fs);
+    expect(fs).toBe(want);
+    expect(errors).toEqual([]);
+    await context.close();
+  });
+});

@@ -89,3 +89,14 @@ export function appSession(): AppSession {
   });
   return session;
 }
+
+/**
+ * Open the report section (it is built only when shown, printed or downloaded) and wait until
+ * the report of the current values is in it.
+ */
+export async function showReport(page: Page): Promise<void> {
+  const toggle = page.locator('report-view [data-role="toggle"]');
+  await toggle.waitFor({ timeout: 20_000 });
+  if ((await toggle.getAttribute('aria-expanded')) !== 'true') await toggle.click();
+  await page.locator('report-view [data-role="report"] article.lamina-report').waitFor({ timeout: 30_000 });
+}

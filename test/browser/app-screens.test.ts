@@ -8,7 +8,7 @@ const OUT = 'test-artifacts';
 const session = appSession();
 beforeAll(() => mkdir(OUT, { recursive: true }));
 
-const SECTIONS = ['opening', 'strata', 'lab', 'strength', 'checks', 'span', 'report'];
+const SECTIONS = ['opening', 'strata', 'lab', 'strength', 'checks', 'support', 'span', 'report'];
 
 describe('app: screenshots of each section (written to test-artifacts/)', () => {
   it('top of the sheet and every section of the demo, SI and US', async () => {
@@ -47,6 +47,9 @@ describe('app: screenshots of each section (written to test-artifacts/)', () => 
 
   it('print media shows the caution and the report, without the inputs, buttons or navigation', async () => {
     const { page, context } = await openApp(session.browser, session.url);
+    // the browser announces a print with beforeprint; the report is built then (emulateMedia does not send it)
+    await page.evaluate(() => window.dispatchEvent(new Event('beforeprint')));
+    await page.waitForFunction(() => (document.getElementById('lamina-print-report')?.textContent ?? '').includes('Caution'), undefined, { timeout: 30_000 });
     await page.emulateMedia({ media: 'print' });
     await page.screenshot({ path: `${OUT}/app-print.png`, fullPage: false });
     const visible = await page.evaluate(() => {

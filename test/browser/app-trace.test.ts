@@ -29,6 +29,35 @@ describe('app: traces, keyboard and links in an open page', () => {
     await context.close();
   });
 
+  it('the trace of n shows the search: its fc(n) chart with the minimum, the table of trials; the beam tension lists only what it uses', async () => {
+    const { page, context, errors } = await openApp(session.browser, session.url);
+    await waitForResults(page);
+    const show = (path: string) =>
+      page.locator('lamina-app').evaluate((el, p) => el.dispatchEvent(new CustomEvent('show-trace', { detail: { path: p }, bubbles: true, composed: true })), path);
+    await show('layers[0].voussoir.n');
+    const dialog = page.locator('lamina-app trace-dialog');
+    await expect.poll(() => dialog.getAttribute('open')).not.toBeNull();
+    await expect.poll(() => dialog.locator('[data-role="steps"] tbody tr').count()).toBeGreaterThan(9); // 9 scan points and the refinement
+    expect(await dialog.locator('[data-role="steps-chart"] svg').count()).toBe(1);
+    expect(await dialog.locator('[data-role="steps-chart"]').textContent()).toContain('minimum: n =');
+    expect(await dialog.locator('[data-role="steps"] tr[aria-current="true"]').textContent()).toContain('minimum');
+    await page.keyboard.press('Escape');
+    await expect.poll(() => dialog.getAttribute('open')).toBeNull();
+
+    await show('layers[0].voussoir.leverArm_m');
+    await expect.poll(() => dialog.locator('[data-role="steps"] tr[aria-current="true"]').textContent()).toContain('converged');
+    await page.keyboard.press('Escape');
+
+    await show('layers[0].elastic.maxTension_MPa');
+    await expect.poll(() => dialog.getAttribute('open')).not.toBeNull();
+    const related = await dialog.locator('[data-role="related"] button').evaluateAll((bs) => bs.map((b) => b.getAttribute('data-path') ?? ''));
+    expect(related).toContain('layers[0].load_kPa');
+    expect(related.some((p) => p.includes('.lab.'))).toBe(false); // no Brazilian disc
+    expect(related.length).toBeLessThan(12);
+    expect(errors).toEqual([]);
+    await context.close();
+  });
+
   it('the section navigation moves focus to the chosen section heading', async () => {
     const { page, context } = await openApp(session.browser, session.url);
     await page.locator('lamina-app nav a', { hasText: '3 Lab tests' }).click();

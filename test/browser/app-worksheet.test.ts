@@ -6,7 +6,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { mkdir } from 'node:fs/promises';
 import type { Page } from 'playwright-core';
-import { fieldFor, openApp, projectJson, waitForResults, appSession } from './app-page';
+import { fieldFor, openApp, projectJson, waitForResults, appSession, showReport } from './app-page';
 import { CAUTION_SHORT } from '../../src/model/caution';
 import { NEW_PROJECT_DESCRIPTION } from '../../src/model/new-project';
 
@@ -16,6 +16,7 @@ beforeAll(() => mkdir(OUT, { recursive: true }));
 
 const state = (page: Page) => page.evaluate(() => window.__lamina!.state());
 const reportText = async (page: Page): Promise<string> => {
+  await showReport(page);
   const frame = page.locator('report-view [data-role="report"]');
   await expect.poll(() => frame.count(), { timeout: 20_000 }).toBe(1);
   return (await frame.textContent()) ?? '';

@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { resolve } from 'node:path';
+import { showReport } from './app-page';
 import { ARTIFACTS, editNow, focusedPath, startHarness, type Harness, text, renderAllSections, shadowText } from './results-harness';
 
 const MODES = ['tension', 'crushing', 'sliding', 'deflection', 'snapThrough'];
@@ -82,7 +83,7 @@ describe('<checks-table> in the app (coal-room demo)', () => {
     const page = await h.open();
     const evil = '<img src=x onerror=alert(1)>';
     expect(await editNow(page, 'layers[0].name', evil)).toBe(true);
-    await page.waitForTimeout(300); // let the report build in idle time
+    await showReport(page); // the report and its print copy are built when shown
     const injected = await page.evaluate(() => {
       const root = document.querySelector('lamina-app')!.shadowRoot!;
       let count = 0;
@@ -124,13 +125,13 @@ describe('<checks-table> in the app (coal-room demo)', () => {
         const w = (window as any).__lamina;
         const project = await (await fetch(`/presets/${name}.lamina.json`)).json();
         if (!w.store.replace(project, 'test')) throw new Error('preset refused');
-        w.store.flush();
+        await w.store.settled();
       }, preset);
       await page.waitForFunction((name) => {
         const s = (window as any).__lamina.state();
         return s.analysis && !s.pending && s.project.title.length > 0 && name.length > 0;
       }, preset);
-      await page.locator('report-view [data-role="report"] article').waitFor({ timeout: 20_000 });
+      await showReport(page);
       for (const tag of ['strength-chain-view', 'checks-table', 'span-finder-view', 'beam-charts-view', 'report-view']) {
         const shown = await shadowText(page.locator(tag));
         expect(shown.length, tag).toBeGreaterThan(100);

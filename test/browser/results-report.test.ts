@@ -3,6 +3,7 @@ import { readFileSync, writeFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { CAUTION } from '../../src/model/caution';
 import { ARTIFACTS, startHarness, type Harness, text, renderAllSections } from './results-harness';
+import { showReport } from './app-page';
 
 let h: Harness;
 beforeAll(async () => {
@@ -16,7 +17,7 @@ type Page = import('playwright-core').Page;
 const state = (page: Page) => page.evaluate(() => (window as any).__lamina.state());
 
 async function reportReady(page: Page): Promise<void> {
-  await page.locator('report-view [data-role="report"] article.lamina-report').waitFor({ timeout: 20_000 });
+  await showReport(page);
 }
 
 /** Count PDF page objects: "/Type /Page" not followed by "s" (that would be the /Pages tree). */
@@ -112,6 +113,49 @@ describe('<report-view> in the app (coal-room demo)', () => {
     });
     await page.locator('report-view [data-role="print"]').click();
     expect(await page.evaluate(() => (window as any).__printed)).toBe(1);
+    expect(h.problems).toEqual([]);
+  });
+
+  it('the report is not built until it is shown: no report element and an empty print copy before, the report after', async () => {
+    const page = await h.open();
+    const before = await page.evaluate(() => ({
+      report: document.querySelector('lamina-app')!.shadowRoot!.querySelector('report-view')!.shadowRoot!.querySelectorAll('[data-role="report"], article').length,
+      printCopy: document.getElementById('lamina-print-report')?.innerHTML.length ?? -1,
+    }));
+    expect(before).toEqual({ report: 0, printCopy: 0 });
+    await showReport(page);
+    expect(await page.locator('report-view [data-role="toggle"]').getAttribute('aria-expanded')).toBe('true');
+    expect(await text(page.locator('report-view [data-role="report"]'))).toContain(CAUTION);
+    // hiding it removes it from the page
+    await page.locator('report-view [data-role="toggle"]').click();
+    await expect.poll(() => page.locator('report-view [data-role="report"]').count()).toBe(0);
+    expect(h.problems).toEqual([]);
+  });
+
+  it('"Print / Save as PDF" with the report closed builds the report first, then prints it', async () => {
+    const page = await h.open();
+    await page.evaluate(() => {
+      (window as any).__printedText = null;
+      window.print = () => {
+        (window as any).__printedText = document.getElementById('lamina-print-report')?.textContent ?? '';
+      };
+    });
+    await page.locator('report-view [data-role="print"]').click();
+    await page.waitForFunction(() => (window as any).__printedText !== null, undefined, { timeout: 30_000 });
+    const printed = ((await page.evaluate(() => (window as any).__printedText)) as string).replace(/\s+/g, ' ');
+    expect(printed).toContain(CAUTION);
+    const s = await state(page);
+    for (const layer of s.project.layers) expect(printed).toContain(layer.name);
+    expect(h.problems).toEqual([]);
+  });
+
+  it("the browser's own print (beforeprint) fills the print copy with the report of the current values", async () => {
+    const page = await h.open();
+    await page.evaluate(() => window.dispatchEvent(new Event('beforeprint')));
+    // at once when the report code is loaded; otherwise a note now and the report once it loads
+    await expect
+      .poll(async () => (await page.evaluate(() => document.getElementById('lamina-print-report')?.textContent ?? '')).replace(/\s+/g, ' '), { timeout: 30_000 })
+      .toContain(CAUTION);
     expect(h.problems).toEqual([]);
   });
 

@@ -30,6 +30,9 @@ describe('<span-finder-view> in the app (coal-room demo)', () => {
     }
     const governing = page.locator('span-finder-view tr[data-mode="governing"] button.traced');
     expect(Number(await governing.getAttribute('data-path') === 'maxSpan_m.governing' ? await governing.getAttribute('data-si-value') : NaN)).toBe(spans.governing);
+    // the chart is drawn once the view is scrolled near
+    await page.locator('span-finder-view').scrollIntoViewIfNeeded();
+    await page.locator('span-finder-view [data-role="fs-span-chart"] svg').waitFor({ timeout: 20_000 });
     expect(await page.locator('span-finder-view [data-role="fs-span-chart"] svg').count()).toBe(1);
     await renderAllSections(page);
     await page.locator('span-finder-view').screenshot({ path: resolve(ARTIFACTS, 'results-span.png') });
@@ -73,7 +76,8 @@ describe('<span-finder-view> in the app (coal-room demo)', () => {
     await page.waitForFunction(() => (window as any).__lamina.state().units === 'US');
     await page.locator('span-finder-view').evaluate((el: any) => el.updateComplete);
     expect((await text(page.locator('span-finder-view tr[data-mode="tension"] td.num')))).toMatch(/\sft$/);
-    expect(await text(page.locator('span-finder-view [data-role="fs-span-chart"]'))).toContain('Span (ft)');
+    await page.locator('span-finder-view').scrollIntoViewIfNeeded();
+    await expect.poll(() => text(page.locator('span-finder-view [data-role="fs-span-chart"]')), { timeout: 20_000 }).toContain('Span (ft)');
     expect(await text(page.locator('span-finder-view [data-role="use-span"]'))).toMatch(/ft\)$/);
     expect(JSON.stringify((await state(page)).analysis.report)).toBe(before);
     expect(h.problems).toEqual([]);
@@ -93,9 +97,42 @@ describe('<span-finder-view> in the app (coal-room demo)', () => {
 });
 
 describe('<beam-charts-view> in the app', () => {
+  it('off-screen charts are drawn only when scrolled near, in a place held at their size (nothing moves)', async () => {
+    const page = await h.open({ width: 1280, height: 700 });
+    const boxes = () =>
+      page.evaluate(() => {
+        const view = document.querySelector('lamina-app')!.shadowRoot!.querySelector('beam-charts-view')!.shadowRoot!;
+        return ['beam-profile', 'design-chart'].map((role) => {
+          const el = view.querySelector<HTMLElement>(`[data-role="${role}"]`);
+          return { role, pending: el?.hasAttribute('data-pending') ?? null, svg: el?.querySelector('svg') !== null && el !== null, height: el?.getBoundingClientRect().height ?? 0, width: el?.getBoundingClientRect().width ?? 0 };
+        });
+      });
+    // far below the first screen: held places, no drawing
+    await page.evaluate(() => {
+      const root = document.querySelector('lamina-app')!.shadowRoot!;
+      const style = document.createElement('style');
+      style.textContent = 'section { content-visibility: visible !important; }'; // lay the sheet out to measure it
+      root.appendChild(style);
+    });
+    const before = await boxes();
+    for (const b of before) expect(b).toMatchObject({ pending: true, svg: false });
+    await page.locator('beam-charts-view').scrollIntoViewIfNeeded();
+    await page.locator('beam-charts-view [data-role="design-chart"] svg').waitFor({ timeout: 20_000 });
+    await page.locator('beam-charts-view [data-role="beam-profile"] svg').waitFor({ timeout: 20_000 });
+    const after = await boxes();
+    for (let k = 0; k < after.length; k++) {
+      expect(after[k]).toMatchObject({ pending: false, svg: true });
+      expect(after[k].width).toBeCloseTo(before[k].width, 0);
+      expect(Math.abs(after[k].height - before[k].height), after[k].role).toBeLessThanOrEqual(1);
+    }
+    expect(h.problems).toEqual([]);
+  });
+
   it('draws the beam profile, the voussoir arch and the design chart; a slab adds the stress contours', async () => {
     const page = await h.open();
+    await page.locator('beam-charts-view').scrollIntoViewIfNeeded();
     for (const role of ['beam-profile', 'voussoir-arch', 'design-chart']) {
+      await page.locator(`beam-charts-view [data-role="${role}"] svg`).waitFor({ timeout: 20_000 });
       expect(await page.locator(`beam-charts-view [data-role="${role}"] svg`).count(), role).toBe(1);
     }
     expect(await page.locator('beam-charts-view [data-role="slab-contour"]').count()).toBe(0);
@@ -103,9 +140,7 @@ describe('<beam-charts-view> in the app', () => {
       const w = (window as any).__lamina;
       const p = JSON.parse(JSON.stringify(w.state().project));
       p.opening = { ...p.opening, type: 'slab', length_m: 9 };
-      const ok = w.store.replace(p, 'test');
-      w.store.flush();
-      return ok;
+      return w.store.replace(p, 'test');
     });
     expect(accepted).toBe(true);
     await page.waitForFunction(() => (window as any).__lamina.state().project.opening.type === 'slab');

@@ -16,6 +16,9 @@ describe('<strength-chain-view> in the app (coal-room demo)', () => {
   it('shows for every layer the six steps with traced values, reasons and sources, and the step chart', async () => {
     const page = await h.open();
     const s = await page.evaluate(() => (window as any).__lamina.state());
+    // the step charts are drawn once the view is scrolled near
+    await page.locator('strength-chain-view').scrollIntoViewIfNeeded();
+    await page.locator('strength-chain-view .chart svg').first().waitFor({ timeout: 20_000 });
     for (let i = 0; i < s.project.layers.length; i++) {
       const section = page.locator(`strength-chain-view section[data-layer="${i}"]`);
       expect((await section.locator('h3').textContent())?.trim()).toBe(s.project.layers[i].name);
@@ -56,7 +59,8 @@ describe('<strength-chain-view> in the app (coal-room demo)', () => {
     expect(await text()).toMatch(/MPa$/);
     await page.locator('project-bar input[type="radio"][value="US"]').check();
     await expect.poll(text).toMatch(/psi$/);
-    expect(await page.locator('strength-chain-view section[data-layer="0"] .chart').textContent()).toContain('psi');
+    await page.locator('strength-chain-view').scrollIntoViewIfNeeded();
+    await expect.poll(async () => (await page.locator('strength-chain-view section[data-layer="0"] .chart').textContent()) ?? '', { timeout: 20_000 }).toContain('psi');
     expect(h.problems).toEqual([]);
   });
 });

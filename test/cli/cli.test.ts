@@ -36,6 +36,39 @@ describe('lamina CLI', () => {
     expect(f.out()).toContain(CAUTION);
     expect(f.out()).toContain('check');
   });
+  it('--help documents --no-trace next to the report options and still carries the caution', async () => {
+    const f = fakeIo();
+    expect(await run(['--help'], f.io)).toBe(0);
+    expect(f.out()).toMatch(/--no-trace\s+with --markdown or --html: the summary alone, without the appendix/);
+    expect(f.out()).toContain(CAUTION);
+  });
+  it('check --markdown --no-trace prints the summary with both cautions and no appendix; without it the trace appendix is there, each entry once', async () => {
+    const file = presetFiles().find((x) => x.includes('coal-room'))!;
+    const full = fakeIo();
+    await run(['check', file, '--markdown'], full.io);
+    const short = fakeIo();
+    expect([0, 1]).toContain(await run(['check', file, '--markdown', '--no-trace'], short.io));
+    expect(full.out()).toContain('## Appendix B — Calculation trace');
+    expect(short.out()).not.toContain('## Appendix');
+    expect(short.out()).toContain('## Checks');
+    expect(short.out()).toContain('Summary only');
+    expect(short.out().split(CAUTION).length - 1).toBe(2); // first and last block
+    // every trace entry (its path in code) once in the full report
+    const paths = [...full.out().matchAll(/^\*\*.*\*\* — `([^`]+)`$/gm)].map((m) => m[1]);
+    expect(paths.length).toBeGreaterThan(40);
+    expect(new Set(paths).size).toBe(paths.length);
+    expect(short.out().length).toBeLessThan(full.out().length / 3);
+  });
+  it('check --html OUT --no-trace writes the summary; --no-trace alone is a usage error (exit 2)', async () => {
+    const file = presetFiles().find((x) => x.includes('coal-room'))!;
+    const f = fakeIo();
+    await run(['check', file, '--html', 'out.html', '--no-trace'], f.io);
+    expect(f.written['out.html']).toContain('lr-section-checks');
+    expect(f.written['out.html']).not.toContain('lr-section-trace');
+    const g = fakeIo();
+    expect(await run(['check', file, '--no-trace'], g.io)).toBe(2);
+    expect(g.err()).toContain('--no-trace');
+  });
   it('no command is a usage error (exit 2) that still shows the usage', async () => {
     const f = fakeIo();
     expect(await run([], f.io)).toBe(2);

@@ -8,6 +8,9 @@ import { readFileSync } from 'node:fs';
 import { run, type Io } from '../../src/cli/main';
 import { CAUTION } from '../../src/model/caution';
 import { presetFiles } from '../analysis/fixtures';
+import { analyse } from '../../src/analysis/analyse';
+import { readProjectText } from '../../src/model/project-file';
+import { buildReportDocument } from '../../src/report/report-document';
 
 function fakeIo(files: Record<string, string>) {
   const out: string[] = [];
@@ -84,5 +87,22 @@ describe('report support section', () => {
     const g = fakeIo({});
     await run(['check', presetFiles().find((x) => x.includes('coal-room'))!, '--markdown'], g.io);
     expect(g.out()).not.toContain('Load per bolt');
+  }, 60_000);
+
+  it('the report draws the bolts in the strata (one bolt group per bolt: 7 m at 1.2 m → 6 bolts, hand geometry)', () => {
+    const project = readProjectText(bolted).project;
+    const doc = buildReportDocument({ project, analysis: analyse(project), curve: null, projectText: bolted, units: 'SI', version: '0.1.0', date: '2026-12-02' });
+    const section = doc.sections.find((x) => x.id === 'support');
+    const chart = section?.blocks.find((b) => b.kind === 'chart');
+    const svg = chart?.kind === 'chart' ? chart.svg : '';
+    expect(svg.match(/<g class="bolt">/g)).toHaveLength(6);
+    expect(svg).toContain('suspended from the bolts');
+  });
+
+  it('--units US shows bolt capacity and load in kips (18 kN / 4.448222 kN per kip = 4.05 kip; METHODS §13 lbf)', async () => {
+    const f = fakeIo({ 'b.lamina.json': bolted });
+    await run(['support', 'b.lamina.json', '--units', 'US'], f.io);
+    expect(f.out()).toContain('load per bolt 4.05 kip');
+    expect(f.out()).toContain('22.5 kip each'); // 100 kN / 4.448222
   }, 60_000);
 });

@@ -13,6 +13,7 @@ import {
 } from '../../src/model/units';
 import { create, createUnitDependencies, unitDependencies } from 'mathjs';
 import { expectClose } from '../helpers/expect-close';
+import { UNIT_TABLE, unitValue } from '../../src/model/unit-table';
 
 // METHODS §13 factors: 1 psi = 6894.757 Pa; 1 lbf/ft³ = 0.157087 kN/m³; 1 ft = 0.3048 m;
 // 1 ksf = 47.880 kPa. Common practice: 1 MPa = 145.04 psi.
@@ -139,11 +140,20 @@ describe('display unit systems', () => {
     const m = create({ unitDependencies, createUnitDependencies }, {});
     m.createUnit('psf', '1 lbf/ft^2');
     m.createUnit('ksi', '1000 psi');
+    // mathjs's own kip is 4448.2216 N (8 digits, 3.4e-9 off); the definition is 1000 lbf exactly.
+    m.createUnit('kip', '1000 lbf', { override: true });
     for (const q of Object.keys(QUANTITIES) as Quantity[]) {
       const { file, US } = QUANTITIES[q];
       // 1e-9: mathjs stores psi rounded to 6894.75729 Pa (9 digits); units.ts derives it from lbf and in.
       expectClose(toDisplay(1, q, 'US'), m.unit(1, file).toNumber(US), 1e-9);
     }
+  });
+
+  it('a bolt force typed in kips: "25 kip" is 111.206 kN (25 × 1000 × 4.4482216153 N, 1 lbf = 0.45359237 kg × 9.80665 m/s²)', () => {
+    expectClose(parseDisplayQuantity('25 kip', 'boltForce', 'US'), 25 * 4.4482216152605, 1e-12);
+    expectClose(parseDisplayQuantity('25', 'boltForce', 'US'), 25 * 4.4482216152605, 1e-12);
+    expectClose(parseDisplayQuantity('2 kips', 'boltForce', 'SI'), 2 * 4.4482216152605, 1e-12);
+    expect(unitLabel('boltForce', 'US')).toBe('kip');
   });
 
   it('SI display units are the file units (factor 1)', () => {
@@ -193,5 +203,31 @@ describe('display unit systems', () => {
     expect(() => toDisplay(1, 'length', 'imperial' as 'US')).toThrow(RangeError);
     expect(() => unitLabel('length', 'metric' as 'SI')).toThrow(RangeError);
     expect(() => formatQuantity(1, 'length', 'SI', 0)).toThrow(RangeError);
+  });
+});
+
+describe('the unit table of the field reader (no mathjs in the app) against mathjs, the registry library', () => {
+  const math = create({ unitDependencies, createUnitDependencies }, {});
+  for (const [n, d] of [['psf', '1 lbf/ft^2'], ['ksf', '1000 lbf/ft^2'], ['ksi', '1000 psi'], ['pcf', '1 lbf/ft^3'], ['kcf', '1000 lbf/ft^3']]) math.createUnit(n, d);
+  const siOf = (u: string) => {
+    const x = math.unit(1, u).toSI();
+    return { factor: x.toNumber(), dims: x.formatUnits() };
+  };
+  const symbols = [
+    ...Object.keys(UNIT_TABLE),
+    'mm', 'cm', 'km', 'dm', 'um', 'dam', 'kg', 'kN', 'MN', 'GN', 'kPa', 'MPa', 'GPa', 'hPa', 'mbar', 'kbar',
+    'kN/m^3', 'N/m^3', 'lbf/ft^3', 'N/mm^2', 'kN/m^2', 'lbf/in^2', 'kN m^-3', 'kN/m m', 'kN/m/m', 'kN*m', 'm^2/m', 'ft^1', 'lbf / ft^3',
+  ];
+  it.each(symbols)('%s: the same factor to SI base units (to 1e-8; mathjs rounds kip to 8 digits) and the same dimension', (u) => {
+    const ours = unitValue(u)!;
+    expect(ours).toBeDefined();
+    const ref = siOf(u);
+    expectClose(ours.factor, ref.factor, 1e-8);
+    // the same dimension: a unit of the same SI base units, factor 1, gives the same SI form
+    const probe = `${ours.dimension[0] ? `m^${ours.dimension[0]}` : ''} ${ours.dimension[1] ? `kg^${ours.dimension[1]}` : ''} ${ours.dimension[2] ? `s^${ours.dimension[2]}` : ''} ${ours.dimension[3] ? `rad^${ours.dimension[3]}` : ''}`.trim();
+    expect(siOf(probe).dims).toBe(ref.dims);
+  });
+  it.each(['KN', 'mpa', 'Mpa', 'kpa', 'kft', 'kpsi', 'klbf', 'kN.m', 'm^', '^2', 'furlongs', 'cdeg'])('%s is refused (mathjs refuses it too, or it is a prefix on a unit that takes none here)', (u) => {
+    expect(unitValue(u)).toBeUndefined();
   });
 });

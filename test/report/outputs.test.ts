@@ -46,11 +46,11 @@ describe('every output', () => {
       const text = htmlText(html);
       expect(text.split(CAUTION).length - 1).toBe(2);
       expect(md.indexOf(CAUTION)).toBeLessThan(md.indexOf('## Verdict'));
-      expect(md.lastIndexOf(CAUTION)).toBeGreaterThan(md.indexOf('## Charts'));
+      expect(md.lastIndexOf(CAUTION)).toBeGreaterThan(md.indexOf('## Appendix B'));
     }
   });
   it('the Markdown and the HTML name each layer and each mode, and the sections appear in order', () => {
-    const titles = ['Verdict', 'Inputs', 'Strength chain', 'Checks', 'Calculation trace', 'Assumptions, limits and warnings', 'Charts', 'End of report'];
+    const titles = ['Verdict', 'Inputs', 'Checks', 'Key charts', 'Warnings', 'Appendix A — Layer results, lab tests and strength chain', 'Appendix B — Calculation trace', 'Appendix C — Methods: assumptions and limits', 'End of report'];
     for (const c of allCases().filter((x) => x.name !== 'hostile')) {
       const { md, html } = outputs(c, 'SI');
       const text = htmlText(html);

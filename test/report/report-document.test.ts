@@ -15,6 +15,13 @@ const build = (c: Case, units: 'SI' | 'US' = 'SI'): ReportDocument =>
 const tables = (doc: ReportDocument, caption: string | RegExp): TableBlock[] =>
   doc.sections.flatMap((s) => s.blocks).filter((b): b is TableBlock => b.kind === 'table' && (typeof caption === 'string' ? b.caption === caption : caption.test(b.caption)));
 
+/** The check table's rows of layer i, without the layer column (Mode, Demand, Capacity, FS, Target, Status, Counts). */
+const layerChecks = (doc: ReportDocument, i: number): TableBlock => {
+  const [t] = tables(doc, /^Check table/);
+  if (!t) throw new Error('no check table');
+  return { ...t, columns: t.columns.slice(1), rows: t.rows.filter((r) => r[0]?.text.startsWith(`${i + 1} `)).map((r) => r.slice(1)) };
+};
+
 const section = (doc: ReportDocument, id: string) => {
   const s = doc.sections.find((x) => x.id === id);
   if (!s) throw new Error(`no section ${id}`);
@@ -22,9 +29,21 @@ const section = (doc: ReportDocument, id: string) => {
 };
 
 describe('buildReportDocument — structure', () => {
-  it('sections come in the order header, verdict, inputs, strength, checks, trace, assumptions, charts, closing', () => {
+  it('the summary (header, verdict, inputs, checks, key charts, warnings), then the appendix (strength, trace, methods), then the closing caution', () => {
     for (const c of allCases()) {
-      expect(build(c).sections.map((s) => s.id)).toEqual(['header', 'verdict', 'inputs', 'strength', 'checks', 'trace', 'assumptions', 'charts', 'closing']);
+      const doc = build(c);
+      expect(doc.sections.map((s) => s.id)).toEqual(['header', 'verdict', 'inputs', 'checks', 'charts', 'warnings', 'strength', 'trace', 'assumptions', 'closing']);
+      expect(doc.sections.filter((s) => s.appendix).map((s) => s.id)).toEqual(['strength', 'trace', 'assumptions']);
+    }
+  });
+  it('trace: false leaves the appendix out and keeps the summary and both cautions', () => {
+    for (const c of allCases()) {
+      const doc = buildReportDocument({ project: c.project, analysis: c.analysis, curve: c.curve, units: 'SI', trace: false });
+      expect(doc.sections.map((s) => s.id)).toEqual(['header', 'verdict', 'inputs', 'checks', 'charts', 'warnings', 'closing']);
+      expect(doc.meta.appendix).toBe(false);
+      expect(doc.sections.flatMap((s) => s.blocks).filter((b) => b.kind === 'formula')).toEqual([]);
+      expect(JSON.stringify(doc.sections[0])).toContain('Summary only');
+      expect(doc.sections.at(-1)?.blocks.at(-1)).toMatchObject({ kind: 'callout', tone: 'caution', text: CAUTION });
     }
   });
   it('the caution (src/model/caution) is the first block of the report and the last', () => {
@@ -40,7 +59,7 @@ describe('buildReportDocument — structure', () => {
     const { projectHash } = await import('../../src/model/project-file');
     const c = presetCase('coal-room-shale');
     const doc = build(c, 'US');
-    expect(doc.meta).toEqual({ date: '2026-12-01', version: '0.1.0', hash: projectHash(c.projectText as string), units: 'US' });
+    expect(doc.meta).toEqual({ date: '2026-12-01', version: '0.1.0', hash: projectHash(c.projectText as string), units: 'US', appendix: true });
     const kv = section(doc, 'header').blocks.find((b) => b.kind === 'keyValue');
     expect(JSON.stringify(kv)).toContain(projectHash(c.projectText as string));
   });
@@ -91,14 +110,27 @@ describe('buildReportDocument — the trace', () => {
     }
     expect(compared).toBeGreaterThan(300);
   });
-  it('the strength section repeats the strength trace entries of each layer', () => {
-    const c = presetCase('coal-room-shale');
-    const blocks = section(build(c), 'strength').blocks.filter((b): b is FormulaBlock => b.kind === 'formula');
-    const expected = c.analysis.report.layers.flatMap((_l, i) =>
-      c.analysis.report.trace.filter((e) => e.path.startsWith(`layers[${i}].strength.`) || e.path.startsWith(`detail.layers[${i}].lab.`) || e.path.startsWith(`detail.layers[${i}].hoekBrown.`)).map((e) => e.path));
-    expect(expected.some((p) => p.startsWith('detail.layers[0].lab.specimens'))).toBe(true);
-    expect(blocks.map((b) => b.path)).toEqual(expected);
-    expect(expected.length).toBeGreaterThan(0);
+  it('no trace entry appears twice: every entry once, in the trace appendix; none in the summary', () => {
+    for (const c of allCases()) {
+      const doc = build(c);
+      const formulas = doc.sections.flatMap((sec) => sec.blocks.filter((b): b is FormulaBlock => b.kind === 'formula').map((b) => ({ sec: sec.id, path: b.path })));
+      expect(formulas.every((f) => f.sec === 'trace')).toBe(true);
+      const paths = formulas.map((f) => f.path);
+      expect(new Set(paths).size).toBe(paths.length);
+      expect(paths.length).toBe(c.analysis.report.trace.length);
+    }
+  });
+  it('the recorded iterations print with their entry: the n search table and its chart, the lever-arm steps, the group tests', () => {
+    const doc = build(presetCase('coal-room-shale'));
+    const blocks = section(doc, 'trace').blocks;
+    const at = blocks.findIndex((b) => b.kind === 'formula' && b.path === 'layers[0].voussoir.n');
+    expect(blocks[at + 1]).toMatchObject({ kind: 'table' });
+    expect((blocks[at + 1] as TableBlock).caption).toMatch(/^Search for the equilibrium n/);
+    expect(blocks[at + 2]).toMatchObject({ kind: 'chart', title: 'fc(n) with its minimum' });
+    const z = blocks.findIndex((b) => b.kind === 'formula' && b.path === 'layers[0].voussoir.leverArm_m');
+    expect((blocks[z + 1] as TableBlock).caption).toMatch(/^Lever-arm iteration/);
+    const g = blocks.findIndex((b) => b.kind === 'formula' && b.path === 'detail.grouping[0].with_kPa');
+    expect((blocks[g + 1] as TableBlock).caption).toMatch(/^Bending groups/);
   });
 });
 
@@ -113,7 +145,7 @@ describe('buildReportDocument — checks', () => {
     for (const c of allCases()) {
       const doc = build(c);
       c.analysis.report.layers.forEach((layer, i) => {
-        const [t] = tables(doc, `Checks of layer ${i + 1}`);
+        const t = layerChecks(doc, i);
         if (!t) throw new Error('no table');
         expect(t.rows.length).toBe(5);
         const tension = layer.plate ? layer.plate.maxTension_MPa : layer.elastic.maxTension_MPa;
@@ -136,7 +168,7 @@ describe('buildReportDocument — checks', () => {
     // The shale (γ = 25 kN/m³, t = 0.5 m) separates from the stiff sandstone above, so it
     // carries its own weight q = γt = 12.5 kPa; clamped ends, s = 6 m.
     const doc = build(presetCase('coal-room-shale'));
-    const [t] = tables(doc, 'Checks of layer 1');
+    const t = layerChecks(doc, 0);
     if (!t) throw new Error('no table');
     const demand = cellValue(t, /^tension/, 1);
     expectClose(demand.value as number, 0.9, 1e-9);
@@ -144,7 +176,7 @@ describe('buildReportDocument — checks', () => {
   });
   it('in US units the same cells show psi (1 MPa = 145.04 psi, METHODS §10) while keeping the SI value', () => {
     const c = presetCase('coal-room-shale');
-    const [t] = tables(build(c, 'US'), 'Checks of layer 1');
+    const t = layerChecks(build(c, 'US'), 0);
     if (!t) throw new Error('no table');
     const demand = cellValue(t, /^tension/, 1);
     expect(demand.text).toBe(`${numberText(0.9 * 145.0377)} psi`);
@@ -160,7 +192,7 @@ describe('buildReportDocument — checks', () => {
       const text = verdict && verdict.kind === 'paragraph' ? verdict.text : '';
       expect(text).toContain(g.layer);
       if (g.mode !== 'snapThrough') expect(text).toContain(numberText(g.fs, 3));
-      const flagged = tables(doc, /^Checks of layer/).flatMap((t) => t.rows).filter((r) => /\(governing\)$/.test(r[0]?.text ?? ''));
+      const flagged = tables(doc, /^Check table/).flatMap((t) => t.rows).filter((r) => /\(governing\)$/.test(r[1]?.text ?? ''));
       expect(flagged.length).toBe(1);
     }
   });
@@ -173,7 +205,7 @@ describe('buildReportDocument — checks', () => {
   });
   it('on the jointed basis tension is shown as "info ○" and the basis sentence says the arch checks decide', () => {
     const doc = build(jointedCase());
-    const tension = tables(doc, /^Checks of layer/).map((t) => cellValue(t, /^tension/, 5));
+    const tension = jointedCase().analysis.report.layers.map((_l, i) => cellValue(layerChecks(doc, i), /^tension/, 5));
     expect(tension.every((cell) => cell.text === 'info ○' || cell.text === 'n/a –')).toBe(true);
     const text = section(doc, 'verdict').blocks.map((b) => (b.kind === 'paragraph' ? b.text : '')).join('\n');
     expect(text).toMatch(/Design basis “jointed”.*voussoir checks decide/);

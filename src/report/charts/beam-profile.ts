@@ -3,7 +3,9 @@
  * with the zero line and the design strength, and below it a second panel with the downward
  * deflection (drawn downward).
  */
-import { extent, line as d3line, max, min, scaleLinear } from 'd3';
+import { extent, max, min } from 'd3-array';
+import { scaleLinear } from 'd3-scale';
+import { line as d3line } from 'd3-shape';
 import type { BeamProfile } from '../../analysis/types';
 import type { UnitSystem } from '../../model/units';
 import { ID, INK, PALETTE, axis, axisLabel, displayUnit, emptyNote, formatValue, legend, line, marker, num, svgDocument, text, type SeriesStyle } from './svg';

@@ -2,7 +2,10 @@
  * Helpers for contouring a sampled grid with d3-contour: map grid coordinates (sample i sits at
  * g = i + 0.5) onto possibly non-uniform axis values and screen scales, and pick a label point.
  */
-import { geoPath, geoTransform, range, scaleLinear, type ContourMultiPolygon } from 'd3';
+import { range } from 'd3-array';
+import { type ContourMultiPolygon } from 'd3-contour';
+import { geoPath, geoTransform } from 'd3-geo';
+import { scaleLinear } from 'd3-scale';
 
 export interface GridMapping {
   /** Grid coordinate (d3-contour space) → screen point. */

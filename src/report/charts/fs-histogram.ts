@@ -3,7 +3,8 @@
  * FS = 1 (failure to its left, hatched bars) and the governing check's target marked. Samples
  * above the last bin (beyond the 99.5th percentile) are counted in a note.
  */
-import { max, scaleLinear } from 'd3';
+import { max } from 'd3-array';
+import { scaleLinear } from 'd3-scale';
 import type { UncertaintyReport } from '../../model/types';
 import { ID, INK, PALETTE, axis, emptyNote, formatValue, line, num, svgDocument, text } from './svg';
 

@@ -10,4 +10,5 @@ export { designChartSvg, type DesignChartOptions } from './design-chart';
 export { escapeXml, PALETTE } from './svg';
 export { fsHistogramSvg, type FsHistogramOptions } from './fs-histogram';
 export { sensitivitySvg } from './sensitivity';
+export { searchCurveSvg, type SearchCurveOptions } from './search-curve';
 export { pfSpanSvg, type PfSpanOptions } from './pf-span';

@@ -3,7 +3,7 @@
  * sampled input with the governing FS (METHODS §16), largest magnitude first. A bar to the
  * right: the FS rises with the input; to the left: it falls. Constant inputs are listed as such.
  */
-import { scaleLinear } from 'd3';
+import { scaleLinear } from 'd3-scale';
 import type { UncertaintyReport } from '../../model/types';
 import { INK, PALETTE, axis, emptyNote, formatValue, line, num, svgDocument, text } from './svg';
 

@@ -3,7 +3,10 @@
  * drawn to equal scale, with each level labelled on its line and in a key, and the largest value
  * marked.
  */
-import { contours, interpolateRgb, max, min, scaleLinear, ticks } from 'd3';
+import { max, min, ticks } from 'd3-array';
+import { contours } from 'd3-contour';
+import { interpolateRgb } from 'd3-interpolate';
+import { scaleLinear } from 'd3-scale';
 import type { SlabField } from '../../analysis/types';
 import type { UnitSystem } from '../../model/units';
 import { gridMapping, labelPoint } from './contour-grid';

@@ -3,7 +3,7 @@
  * above the opening), hatched by rock class, with the opening (or the overhang of a cantilever)
  * below, the bending groups bracketed and any predicted bed separation marked.
  */
-import { scaleLinear } from 'd3';
+import { scaleLinear } from 'd3-scale';
 import type { Analysis } from '../../analysis/types';
 import type { UnitSystem } from '../../model/units';
 import type { Project, RockClass } from '../../model/types';

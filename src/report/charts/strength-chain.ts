@@ -3,7 +3,8 @@
  * design, one bar per step on a linear axis (a zero design strength must show), with the value
  * on each bar, the ratio to the previous step, and a short reason under each.
  */
-import { max, scaleLinear } from 'd3';
+import { max } from 'd3-array';
+import { scaleLinear } from 'd3-scale';
 import type { StrengthStep } from '../../analysis/types';
 import type { UnitSystem } from '../../model/units';
 import { ID, INK, PALETTE, axis, axisLabel, displayUnit, emptyNote, escapeXml, formatValue, line, num, svgDocument, text, textBlock, wrapText } from './svg';

@@ -3,7 +3,8 @@
  * axis (accepted filled, rejected open and crossed, with the reason in a tooltip), the Brazilian
  * and the direct (f × Brazilian) values on two rows, and labelled mean and characteristic lines.
  */
-import { extent, scaleLinear } from 'd3';
+import { extent } from 'd3-array';
+import { scaleLinear } from 'd3-scale';
 import type { LabDetail } from '../../analysis/types';
 import type { UnitSystem } from '../../model/units';
 import { INK, PALETTE, axis, axisLabel, displayUnit, escapeXml, formatValue, legend, line, marker, svgDocument, text } from './svg';

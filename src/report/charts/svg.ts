@@ -4,7 +4,7 @@
  * and the accessible `<svg>` wrapper. Everything returns strings; nothing touches a document, so
  * the same markup goes into the lit app (via `unsafeSVG`) and into the static HTML report.
  */
-import type { ScaleContinuousNumeric } from 'd3';
+import type { ScaleContinuousNumeric } from 'd3-scale';
 import { toDisplay, unitLabel, type Quantity, type UnitSystem } from '../../model/units';
 import { numberText } from '../../model/number-format';
 

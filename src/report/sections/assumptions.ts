@@ -1,4 +1,4 @@
-/** Section 7: assumptions and limits of each method, and every warning with its path. */
+/** The warnings of the analysis with their paths (summary), and the assumptions and limits of each method (appendix). */
 import type { Block, Cell, Section } from '../document-types';
 import { textCell } from './cells';
 import type { SectionContext } from './context';
@@ -20,12 +20,13 @@ export const METHOD_LIMITS: ReadonlyArray<{ method: string; text: string }> = [
   { method: 'Span search', text: 'Largest span up to 100 m with FS ≥ target in every layer in which the mode counts at the current span, found by bracketing and bisection to 1 mm; for a slab the aspect ratio is held fixed, for an intersection the ratio of the entry widths.' },
 ];
 
-export function assumptionsSection(ctx: SectionContext): Section {
+export function assumptionsSection(): Section {
+  return { id: 'assumptions', title: 'Appendix C — Methods: assumptions and limits', appendix: true, blocks: [{ kind: 'list', items: METHOD_LIMITS.map((m) => `${m.method}: ${m.text}`) }] };
+}
+
+export function warningsSection(ctx: SectionContext): Section {
   const warnings = ctx.analysis.report.warnings;
-  const blocks: Block[] = [
-    { kind: 'list', items: METHOD_LIMITS.map((m) => `${m.method}: ${m.text}`) },
-    { kind: 'heading', level: 3, text: `Warnings (${warnings.length})` },
-  ];
+  const blocks: Block[] = [];
   const errors = warnings.filter((w) => w.level === 'error');
   for (const w of errors) blocks.push({ kind: 'callout', tone: 'error', title: `Serious warning ${w.code}${w.path ? ` at ${w.path}` : ''}`, text: w.message });
   if (warnings.length === 0) {
@@ -40,5 +41,5 @@ export function assumptionsSection(ctx: SectionContext): Section {
       ]),
     });
   }
-  return { id: 'assumptions', title: 'Assumptions, limits and warnings', blocks };
+  return { id: 'warnings', title: 'Warnings', blocks };
 }

@@ -1,4 +1,4 @@
-/** Section 5: checks per layer and mode, the layer results behind them and the largest spans. */
+/** The check table and the largest spans (summary); the notes and layer results behind them (appendix A). */
 import type { CheckRow, Mode } from '../../model/types';
 import { MODE_LABEL, STATUS_LEGEND, STATUS_TEXT } from '../../analysis/check-labels';
 import type { Block, Cell, Section } from '../document-types';
@@ -45,19 +45,51 @@ export function checksSection(ctx: SectionContext): Section {
   const { analysis, units, project } = ctx;
   const report = analysis.report;
   const blocks: Block[] = [];
-  blocks.push({ kind: 'paragraph', strong: true, text: ctx.verdict.sentences[0].text });
-  blocks.push({ kind: 'list', items: STATUS_LEGEND.map((s) => `${s.text}: ${s.meaning}`) });
+  blocks.push({ kind: 'paragraph', text: `Status: ${STATUS_LEGEND.map((s) => `${s.text} ${s.meaning}`).join('; ')}.` });
 
-  report.layers.forEach((layer, i) => {
-    blocks.push({ kind: 'heading', level: 3, text: `Layer ${i + 1}: ${layer.name}` });
+  // The one check table, every layer and mode; the notes behind each row are in appendix A.
+  blocks.push({
+    kind: 'table',
+    caption: 'Check table: every layer and mode (the notes on each row are in appendix A)',
+    columns: [{ title: 'Layer' }, { title: 'Mode' }, { title: 'Demand' }, { title: 'Capacity' }, { title: 'FS', numeric: true }, { title: 'Target', numeric: true }, { title: 'Status' }, { title: 'Counts' }],
+    rows: ctx.rows.map((r) => {
+      const c = checkRowCells(r, ctx);
+      return [textCell(`${r.layerIndex + 1} ${report.layers[r.layerIndex]?.name ?? ''}`), ...c.slice(0, 6), textCell(r.reason ? `no: ${r.reason}` : 'yes')];
+    }),
+  });
+  blocks.push({ kind: 'heading', level: 3, text: 'Largest span per mode' });
+  const spans = report.maxSpan_m;
+  if (spans === null) {
+    blocks.push({ kind: 'paragraph', text: 'No span search was run for this project.' });
+  } else {
+    const modes: Array<Mode | 'governing'> = ['tension', 'crushing', 'sliding', 'snapThrough', 'deflection', 'governing'];
     blocks.push({
       kind: 'table',
-      caption: `Checks of layer ${i + 1}`,
-      columns: [{ title: 'Mode' }, { title: 'Demand' }, { title: 'Capacity' }, { title: 'FS', numeric: true }, { title: 'Target', numeric: true }, { title: 'Status' }, { title: 'Note' }],
-      rows: ctx.rows.filter((r) => r.layerIndex === i).map((r) => checkRowCells(r, ctx)),
+      caption: `Largest ${ctx.verdict.spanWord} meeting the target (searched up to 100 m; current ${ctx.verdict.spanWord} ${quantityText(project.opening.span_m, 'length', units)}${project.opening.type === 'intersection' ? `, w2/w1 held, design span the diagonal ${quantityText(report.opening.designSpan_m, 'length', units)}` : ''})`,
+      columns: [{ title: 'Mode' }, { title: titleWithUnit('Largest span', 'length', units), numeric: true }, { title: 'Note' }],
+      rows: modes.map((m): Cell[] => {
+        const value = spans[m];
+        const label = m === 'governing' ? 'governing (all counted modes)' : MODE_LABEL[m];
+        const note = value === null ? (m === 'sliding' ? SPAN_NOTE.sliding : 'the mode counts in no layer at the current span') : value >= 100 ? 'target holds up to the 100 m search cap' : SPAN_NOTE[m];
+        return [textCell(label), qCell(value, 'length', units), textCell(note)];
+      }),
     });
-  });
+  }
+  return { id: 'checks', title: 'Checks', blocks };
+}
 
+/** Appendix A: the note on every check row, and the layer results behind the checks. */
+export function resultBlocks(ctx: SectionContext): Block[] {
+  const { analysis, units, project } = ctx;
+  const report = analysis.report;
+  const blocks: Block[] = [];
+  blocks.push({ kind: 'heading', level: 3, text: 'Notes on the checks' });
+  blocks.push({
+    kind: 'table',
+    caption: 'Why each check counts or not, and what it compares',
+    columns: [{ title: 'Layer' }, { title: 'Mode' }, { title: 'Note' }],
+    rows: ctx.rows.map((r) => [textCell(`${r.layerIndex + 1}`), textCell(MODE_LABEL[r.mode]), textCell(r.reason ? `not counted: ${r.reason} — ${r.note}` : r.note)]),
+  });
   blocks.push({ kind: 'heading', level: 3, text: 'Intact beam results' });
   blocks.push({
     kind: 'table',
@@ -123,23 +155,5 @@ export function checksSection(ctx: SectionContext): Section {
     });
   }
 
-  blocks.push({ kind: 'heading', level: 3, text: 'Largest span per mode' });
-  const spans = report.maxSpan_m;
-  if (spans === null) {
-    blocks.push({ kind: 'paragraph', text: 'No span search was run for this project.' });
-  } else {
-    const modes: Array<Mode | 'governing'> = ['tension', 'crushing', 'sliding', 'snapThrough', 'deflection', 'governing'];
-    blocks.push({
-      kind: 'table',
-      caption: `Largest ${ctx.verdict.spanWord} meeting the target (searched up to 100 m; current ${ctx.verdict.spanWord} ${quantityText(project.opening.span_m, 'length', units)}${project.opening.type === 'intersection' ? `, w2/w1 held, design span the diagonal ${quantityText(report.opening.designSpan_m, 'length', units)}` : ''})`,
-      columns: [{ title: 'Mode' }, { title: titleWithUnit('Largest span', 'length', units), numeric: true }, { title: 'Note' }],
-      rows: modes.map((m): Cell[] => {
-        const value = spans[m];
-        const label = m === 'governing' ? 'governing (all counted modes)' : MODE_LABEL[m];
-        const note = value === null ? (m === 'sliding' ? SPAN_NOTE.sliding : 'the mode counts in no layer at the current span') : value >= 100 ? 'target holds up to the 100 m search cap' : SPAN_NOTE[m];
-        return [textCell(label), qCell(value, 'length', units), textCell(note)];
-      }),
-    });
-  }
-  return { id: 'checks', title: 'Checks', blocks };
+  return blocks;
 }

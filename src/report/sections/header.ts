@@ -11,21 +11,31 @@ export const UNIT_SYSTEM_TEXT = {
   US: 'US customary (ft, in, psf, psi, ksi, lbf/ft³, lbf); the calculation trace keeps the SI units it was computed in',
 } as const;
 
-export function headerSection(ctx: SectionContext, meta: { date: string; version: string; hash: string }): Section {
+export function headerSection(ctx: SectionContext, meta: { date: string; version: string; hash: string; appendix: boolean }): Section {
   const { project } = ctx;
   const items = [
     { key: 'Project', value: project.title },
-    ...(project.description ? [{ key: 'Description', value: project.description }] : []),
     { key: 'Date', value: meta.date },
     { key: 'Lamina version', value: meta.version },
     { key: 'Input file hash (FNV-1a 64)', value: meta.hash },
     { key: 'Units', value: UNIT_SYSTEM_TEXT[ctx.units] },
     { key: 'Design basis', value: project.design.basis === 'intact' ? 'intact — the beam must not crack' : 'jointed — the roof is taken as cracked' },
+    {
+      key: 'Contents',
+      value: meta.appendix
+        ? 'Summary, then the appendix: A strength chain, B calculation trace (every step with its formula, values and source), C methods, assumptions and limits'
+        : 'Summary only: the appendix (strength chain, calculation trace, methods) was left out of this printout',
+    },
   ];
   return {
     id: 'header',
     title: 'Project and report details',
-    blocks: [{ kind: 'callout', tone: 'caution', title: CAUTION_TITLE, text: CAUTION }, ...provenanceWarnings(ctx), { kind: 'keyValue', items }],
+    blocks: [
+      { kind: 'callout', tone: 'caution', title: CAUTION_TITLE, text: CAUTION },
+      ...provenanceWarnings(ctx),
+      { kind: 'keyValue', items },
+      ...(project.description ? [{ kind: 'paragraph' as const, text: `Description: ${project.description}` }] : []),
+    ],
   };
 }
 

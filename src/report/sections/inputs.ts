@@ -1,4 +1,4 @@
-/** Section 3: the inputs — opening, loads, strata, lab specimens, targets and options. */
+/** The inputs — opening, loads, strata, lab strength per layer, targets and options (summary); the lab specimens (appendix A). */
 import type { Block, Cell, Section } from '../document-types';
 import { inputQuantityText, quantityText, titleWithUnit } from '../format';
 import { PRECISION, numberText } from '../number-text';
@@ -89,6 +89,40 @@ export function inputsSection(ctx: SectionContext): Section {
     ]),
   });
 
+  blocks.push({
+    kind: 'table',
+    caption: 'Laboratory tensile strength per layer (the specimens are listed in appendix A)',
+    columns: [{ title: 'Layer' }, { title: 'Source' }, { title: 'Used', numeric: true }, { title: titleWithUnit('Mean (direct)', 'stress', units), numeric: true }, { title: 'V', numeric: true }, { title: titleWithUnit('Characteristic', 'stress', units), numeric: true }],
+    rows: project.layers.map((layer, i): Cell[] => {
+      const lab = analysis.layers[i]?.lab;
+      if (!lab) return [textCell(`${i + 1} ${layer.name}`), textCell('—'), nCell(null), nCell(null), nCell(null), nCell(null)];
+      return [textCell(`${i + 1} ${layer.name}`), textCell(lab.source === 'value' ? 'given value' : 'specimens'), nCell(lab.source === 'value' ? null : lab.n), qCell(lab.mean_MPa, 'stress', units), nCell(lab.cov), qCell(lab.characteristic_MPa, 'stress', units)];
+    }),
+  });
+
+  const d = project.design;
+  blocks.push({ kind: 'heading', level: 3, text: 'Targets and options' });
+  blocks.push({
+    kind: 'keyValue',
+    items: [
+      { key: 'FS target, tension', value: numberText(d.fsTarget.tension, PRECISION.storedInput) },
+      { key: 'FS target, crushing', value: numberText(d.fsTarget.crushing, PRECISION.storedInput) },
+      { key: 'FS target, sliding', value: numberText(d.fsTarget.sliding, PRECISION.storedInput) },
+      { key: 'Deflection limit δ/t', value: numberText(d.deflectionLimitRatio, PRECISION.storedInput) },
+      { key: 'Characteristic value', value: RULE_TEXT[d.characteristic] },
+      { key: 'Tensile basis', value: d.tensileBasis === 'lab' ? 'lab: characteristic strength with the size effect' : 'rock mass: min(block, Hoek–Brown rock mass)' },
+      { key: 'Crushing strength', value: d.crushingStrength === 'lab' ? 'UCS as given (lab)' : 'rock-mass UCS σci·s^a (Hoek–Brown)' },
+      { key: 'Design basis', value: d.basis === 'intact' ? 'intact: a layer that does not crack must not crack' : 'jointed: the roof is taken as cracked' },
+      { key: 'Plane-strain modulus E/(1−ν²)', value: d.planeStrainModulus ? 'used in deflection and Euler stress' : 'not used (E as given)' },
+    ],
+  });
+  return { id: 'inputs', title: 'Inputs', blocks };
+}
+
+/** Appendix A: the lab specimens of every layer with their reduction. */
+export function labBlocks(ctx: SectionContext): Block[] {
+  const { project, analysis, units } = ctx;
+  const blocks: Block[] = [];
   blocks.push({ kind: 'heading', level: 3, text: 'Laboratory tensile tests' });
   project.layers.forEach((layer, i) => {
     const lab = analysis.layers[i]?.lab;
@@ -137,21 +171,5 @@ export function inputsSection(ctx: SectionContext): Section {
     });
   });
 
-  const d = project.design;
-  blocks.push({ kind: 'heading', level: 3, text: 'Targets and options' });
-  blocks.push({
-    kind: 'keyValue',
-    items: [
-      { key: 'FS target, tension', value: numberText(d.fsTarget.tension, PRECISION.storedInput) },
-      { key: 'FS target, crushing', value: numberText(d.fsTarget.crushing, PRECISION.storedInput) },
-      { key: 'FS target, sliding', value: numberText(d.fsTarget.sliding, PRECISION.storedInput) },
-      { key: 'Deflection limit δ/t', value: numberText(d.deflectionLimitRatio, PRECISION.storedInput) },
-      { key: 'Characteristic value', value: RULE_TEXT[d.characteristic] },
-      { key: 'Tensile basis', value: d.tensileBasis === 'lab' ? 'lab: characteristic strength with the size effect' : 'rock mass: min(block, Hoek–Brown rock mass)' },
-      { key: 'Crushing strength', value: d.crushingStrength === 'lab' ? 'UCS as given (lab)' : 'rock-mass UCS σci·s^a (Hoek–Brown)' },
-      { key: 'Design basis', value: d.basis === 'intact' ? 'intact: a layer that does not crack must not crack' : 'jointed: the roof is taken as cracked' },
-      { key: 'Plane-strain modulus E/(1−ν²)', value: d.planeStrainModulus ? 'used in deflection and Euler stress' : 'not used (E as given)' },
-    ],
-  });
-  return { id: 'inputs', title: 'Inputs', blocks };
+  return blocks;
 }

@@ -1,17 +1,24 @@
-/** Section 4: the strength chain of each layer, step by step with formulas and sources. */
+/**
+ * Appendix A: the notes on the checks and the layer results, the lab specimens, and the
+ * strength chain of each layer step by step with the reason and source and its chart; the
+ * formulas are in the calculation trace (appendix B), once.
+ */
 import type { Block, Cell, Section } from '../document-types';
 import { quantityText, titleWithUnit } from '../format';
 import { numberText } from '../number-text';
-import { traceBlock } from '../trace-block';
+import { strengthCharts } from './charts';
+import { resultBlocks } from './checks';
+import { labBlocks } from './inputs';
 import { qCell, textCell } from './cells';
 import type { SectionContext } from './context';
 
 export function strengthSection(ctx: SectionContext): Section {
   const { analysis, units } = ctx;
-  const blocks: Block[] = [];
+  const blocks: Block[] = [...resultBlocks(ctx), ...labBlocks(ctx)];
+  blocks.push({ kind: 'heading', level: 3, text: 'Strength chain' });
   analysis.report.layers.forEach((layer, i) => {
     const detail = analysis.layers[i];
-    blocks.push({ kind: 'heading', level: 3, text: `Layer ${i + 1}: ${layer.name}` });
+    blocks.push({ kind: 'heading', level: 4, text: `Strength chain of layer ${i + 1}: ${layer.name}` });
     if (detail) {
       blocks.push({
         kind: 'table',
@@ -39,12 +46,7 @@ export function strengthSection(ctx: SectionContext): Section {
         ],
       });
     }
-    for (const entry of analysis.report.trace) if (isStrengthEntry(entry.path, i)) blocks.push(traceBlock(entry, units));
+    blocks.push(...strengthCharts(ctx, i));
   });
-  return { id: 'strength', title: 'Strength chain', blocks };
-}
-
-/** Trace entries of the strength chain of layer `i`: lab reduction, chain steps, Hoek–Brown. */
-export function isStrengthEntry(path: string, i: number): boolean {
-  return path.startsWith(`layers[${i}].strength.`) || path.startsWith(`detail.layers[${i}].lab.`) || path.startsWith(`detail.layers[${i}].hoekBrown.`);
+  return { id: 'strength', title: 'Appendix A — Layer results, lab tests and strength chain', appendix: true, blocks };
 }

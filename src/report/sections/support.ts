@@ -2,12 +2,13 @@
  * The support section (METHODS §12): the bolt pattern's results and the support needed as the
  * report holds them, the support rows of the check table (modes `bolt`, `skin`,
  * `interlayerShear`: nothing re-derived), and the empirical cross-check, never counted. Only
- * present when the project gives support or Q ratings. (The strata-and-bolts drawing is not
- * built yet.)
+ * present when the project gives support or Q ratings. With a bolt pattern, the strata-and-bolts
+ * drawing (`charts/support-bolts.ts`) follows the pattern's results.
  */
 import { MODE_LABEL, STATUS_TEXT, SUPPORT_MODES } from '../../analysis/check-labels';
 import { formatQuantity } from '../../model/units';
 import { numberText } from '../number-text';
+import { supportBoltsSvg } from '../charts/support-bolts';
 import type { Block, Section } from '../document-types';
 import { layerName, type SectionContext } from './context';
 
@@ -16,7 +17,7 @@ export function supportSection(ctx: SectionContext): Section | null {
   const b = ctx.project.support.bolts;
   if (!r.support && !r.empirical) return null;
   const L = (v: number) => formatQuantity(v, 'length', ctx.units);
-  const F = (v: number) => formatQuantity(v, 'force', ctx.units);
+  const F = (v: number) => formatQuantity(v, 'boltForce', ctx.units);
   const fs = (v: number | null) => (v === null ? '—' : numberText(v, 3));
   const blocks: Block[] = [];
   if (b) {
@@ -35,6 +36,12 @@ export function supportSection(ctx: SectionContext): Section | null {
       }
     }
     blocks.push({ kind: 'keyValue', items });
+    blocks.push({
+      kind: 'chart',
+      title: 'Bolts in the strata',
+      svg: supportBoltsSvg(ctx.project, r, { units: ctx.units }),
+      caption: 'The bolt pattern in the strata column: anchorage zone at each tip, suspended and bonded layers marked in words and hatch.',
+    });
   } else if (ctx.project.support.standing_kPa > 0) {
     blocks.push({ kind: 'paragraph', text: `Standing support ${formatQuantity(ctx.project.support.standing_kPa, 'pressure', ctx.units)}, capped at the load it relieves.` });
   }

@@ -1,7 +1,8 @@
-/** Section 6: the full calculation trace, every entry, grouped by layer. */
+/** Appendix B: the full calculation trace, every entry once, grouped by layer, with the steps of each iteration. */
 import type { TraceEntry } from '../../model/types';
 import type { Block, Section } from '../document-types';
 import { traceBlock } from '../trace-block';
+import { stepsChart, stepsTable } from '../trace-steps';
 import type { SectionContext } from './context';
 
 export function traceSection(ctx: SectionContext): Section {
@@ -20,9 +21,14 @@ export function traceSection(ctx: SectionContext): Section {
       group = g;
     }
     blocks.push(traceBlock(entry, ctx.units));
+    if (entry.steps) {
+      blocks.push(stepsTable(entry.steps));
+      const chart = stepsChart(entry.steps);
+      if (chart) blocks.push(chart);
+    }
   }
   if (ctx.analysis.report.trace.length === 0) blocks.push({ kind: 'paragraph', text: 'The analysis returned no trace entries.' });
-  return { id: 'trace', title: 'Calculation trace', blocks };
+  return { id: 'trace', title: 'Appendix B — Calculation trace', appendix: true, blocks };
 }
 
 /** Layer index an entry belongs to (`layers[i].…` or `detail.layers[i].…`); whole-roof entries sort last. */

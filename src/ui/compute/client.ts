@@ -14,8 +14,8 @@
  */
 import type { Project, UncertaintyReport } from '../../model/types';
 import type { ComputeRequest, ComputeResponse } from './protocol';
-import type { AnalysisOutcome, ChartOutcome, ComputeClient, RunHooks, UncertaintyRunRequest } from './types';
-import type { AnalysisFunctions } from './compute-core';
+import type { AnalysisOutcome, ChartOutcome, ComputeClient, RunHooks, SupportOutcome, UncertaintyRunRequest } from './types';
+import { analysisJob, chartJob, supportJob, type AnalysisFunctions } from './jobs';
 
 export const abortError = (): DOMException => new DOMException('The uncertainty run was cancelled.', 'AbortError');
 
@@ -160,7 +160,15 @@ export const defaultWorkerFactory: WorkerFactory = () =>
  * could not start); every waiting call is rejected with the reason.
  */
 export function createWorkerClient(makeWorker: WorkerFactory = defaultWorkerFactory, onFailure?: (err: Error) => void): ComputeClient {
-  const edits = new WorkerChannel(makeWorker(), onFailure);
+  // The edit worker starts on the first analysis (a client used only for runs starts none).
+  let editChannel: WorkerChannel | null = null;
+  const edits = {
+    call: (...args: Parameters<WorkerChannel['call']>) => {
+      if (closed) return { id: 0, promise: Promise.reject(new Error('the compute client was closed')) };
+      editChannel ??= new WorkerChannel(makeWorker(), onFailure);
+      return editChannel.call(...args);
+    },
+  };
   let runs: WorkerChannel | null = null;
   let closed = false;
   const runChannel = (): WorkerChannel => {
@@ -175,10 +183,12 @@ export function createWorkerClient(makeWorker: WorkerFactory = defaultWorkerFact
   const chart = new LatestOnly<[Project, number], ChartOutcome>(
     ([project, layer]) => edits.call({ kind: 'chart', project, layer }).promise as Promise<ChartOutcome>,
   );
+  const support = new LatestOnly<Project, SupportOutcome>((project) => edits.call({ kind: 'support', project }).promise as Promise<SupportOutcome>);
   return {
     kind: 'worker',
     analyse: (project) => analyse.call(project),
     chart: (project, layer) => chart.call([project, layer]),
+    supportNeeded: (project) => support.call(project),
     runUncertainty: (project: Project, request: UncertaintyRunRequest, hooks?: RunHooks) =>
       uncertaintyCall((onProgress) => {
         let channel: WorkerChannel;
@@ -192,7 +202,7 @@ export function createWorkerClient(makeWorker: WorkerFactory = defaultWorkerFact
       }, hooks),
     dispose: () => {
       closed = true;
-      edits.terminate();
+      editChannel?.terminate();
       runs?.terminate();
       runs = null;
     },
@@ -207,8 +217,9 @@ const macrotask = (): Promise<void> => new Promise((resolve) => setTimeout(resol
  * without it the real analysis is loaded on first use, so importing this module costs nothing.
  */
 export function createInThreadClient(fns?: AnalysisFunctions): ComputeClient {
-  const core = import('./compute-core');
-  const functions = async () => fns ?? (await core).ANALYSIS_FUNCTIONS;
+  let core: Promise<typeof import('./compute-core')> | null = null;
+  const loadCore = () => (core ??= import('./compute-core'));
+  const functions = async () => fns ?? (await loadCore()).ANALYSIS_FUNCTIONS;
   let closed = false;
   const guard = () => {
     if (closed) throw new Error('the compute client was closed');
@@ -218,17 +229,22 @@ export function createInThreadClient(fns?: AnalysisFunctions): ComputeClient {
     analyse: async (project) => {
       await macrotask();
       guard();
-      return (await core).analysisJob(project, await functions());
+      return analysisJob(project, await functions());
     },
     chart: async (project, layer) => {
       await macrotask();
       guard();
-      return (await core).chartJob(project, layer, await functions());
+      return chartJob(project, layer, await functions());
+    },
+    supportNeeded: async (project) => {
+      await macrotask();
+      guard();
+      return supportJob(project, await functions());
     },
     runUncertainty: (project, request, hooks) =>
       uncertaintyCall((onProgress) => {
         let stop = false;
-        const promise = core.then((c) => {
+        const promise = loadCore().then((c) => {
           guard();
           return c.uncertaintyJob(project, request, { onProgress, stopped: () => stop || closed, pause: macrotask });
         });
@@ -268,6 +284,7 @@ export function createComputeClient(makeWorker: WorkerFactory = defaultWorkerFac
     },
     analyse: (project) => retry((c) => c.analyse(project)),
     chart: (project, layer) => retry((c) => c.chart(project, layer)),
+    supportNeeded: (project) => retry((c) => c.supportNeeded(project)),
     runUncertainty: (project, request, hooks) => current.runUncertainty(project, request, hooks),
     dispose: () => {
       current.dispose();

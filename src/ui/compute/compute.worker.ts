@@ -1,7 +1,7 @@
 /// <reference lib="webworker" />
 /**
  * The worksheet's compute worker. The client starts two instances of this one script: one
- * answers the analysis of each edit (`analyse`, `chart`), the other runs the uncertainty
+ * answers the analysis of each edit (`analyse`, `chart`, `support`), the other runs the uncertainty
  * (`uncertainty`, `cancel`), so a long run never delays the analysis of the next key.
  *
  * Analysis requests are answered one at a time, in order. An uncertainty run is drained one
@@ -10,7 +10,7 @@
  * every chunk. Several runs interleave chunk by chunk.
  */
 import type { Project } from '../../model/types';
-import { analysisJob, chartJob, errorText, uncertaintyJob } from './compute-core';
+import { ANALYSIS_FUNCTIONS, analysisJob, chartJob, errorText, supportJob, uncertaintyJob } from './compute-core';
 import type { ComputeRequest, ComputeResponse } from './protocol';
 
 const scope = self as unknown as DedicatedWorkerGlobalScope;
@@ -57,10 +57,13 @@ scope.onmessage = (event: MessageEvent<ComputeRequest>) => {
   const m = event.data;
   switch (m.kind) {
     case 'analyse':
-      post({ id: m.id, kind: 'result', value: analysisJob(m.project) });
+      post({ id: m.id, kind: 'result', value: analysisJob(m.project, ANALYSIS_FUNCTIONS) });
       return;
     case 'chart':
-      post({ id: m.id, kind: 'result', value: chartJob(m.project, m.layer) });
+      post({ id: m.id, kind: 'result', value: chartJob(m.project, m.layer, ANALYSIS_FUNCTIONS) });
+      return;
+    case 'support':
+      post({ id: m.id, kind: 'result', value: supportJob(m.project, ANALYSIS_FUNCTIONS) });
       return;
     case 'uncertainty':
       void runUncertainty(m.id, m.project, m.request);

@@ -5,6 +5,7 @@ import type { UncertaintyRunRequest } from './types';
 export type ComputeRequest =
   | { id: number; kind: 'analyse'; project: Project }
   | { id: number; kind: 'chart'; project: Project; layer: number }
+  | { id: number; kind: 'support'; project: Project }
   | { id: number; kind: 'uncertainty'; project: Project; request: UncertaintyRunRequest }
   /** stop the uncertainty run `id` after its current chunk */
   | { id: number; kind: 'cancel' };

@@ -4,7 +4,7 @@
  * uncertainty runs both go through it, so neither blocks typing. Tests and node pass an
  * in-thread implementation of the same interface.
  */
-import type { Project, UncertaintyReport } from '../../model/types';
+import type { Project, SupportNeededReport, UncertaintyReport } from '../../model/types';
 import type { SamplingMethod } from '../../uncertainty/sampler';
 
 export interface UncertaintyRunRequest {
@@ -52,6 +52,12 @@ export interface ChartOutcome {
   timings: { chart: number; minThickness: number };
 }
 
+/** The support needed, or why there is none (`analysis/support-needed.ts`). */
+export interface SupportOutcome {
+  needed: SupportNeededReport | null;
+  reason: string | null;
+}
+
 /**
  * What the worksheet computes off the main thread. `analyse` and `chart` keep only the
  * latest call of each waiting: a call that a later one replaced before it started resolves
@@ -60,6 +66,8 @@ export interface ChartOutcome {
 export interface ComputeClient {
   analyse(project: Project): Promise<AnalysisOutcome | null>;
   chart(project: Project, layer: number): Promise<ChartOutcome | null>;
+  /** The support-needed searches (METHODS §12) of the project; latest-only like `analyse`. */
+  supportNeeded(project: Project): Promise<SupportOutcome | null>;
   runUncertainty: UncertaintyRunner;
   /** 'worker' or 'in-thread' (for tests and the status of the page) */
   readonly kind: 'worker' | 'in-thread';

@@ -32,6 +32,7 @@ import { checkboxField, textField } from './field-templates';
 import { fireReplace } from './events';
 import { tracedValue } from './traced-value';
 import './quantity-input';
+import { NearViewport, chartSlot } from '../results/near-viewport';
 
 export interface PasteProblem {
   row: number;
@@ -158,8 +159,14 @@ export class LabTestsPanel extends LitElement {
     return a.layers[i]?.lab ?? null;
   }
 
+  /** The strip plot is drawn when the panel is near the screen (`stripDirty` until then). */
+  private readonly view = new NearViewport(this);
+  private stripDirty = true;
+
   protected override willUpdate(changed: PropertyValues<this>): void {
-    if (changed.has('analysis') || changed.has('units') || changed.has('layer') || changed.has('project')) {
+    if (changed.has('analysis') || changed.has('units') || changed.has('layer') || changed.has('project')) this.stripDirty = true;
+    if (this.stripDirty && this.view.near) {
+      this.stripDirty = false;
       const lab = this.lab;
       try {
         this.strip = lab && lab.specimens.length > 0 ? strengthStripSvg(lab, { units: this.units }) : '';
@@ -410,7 +417,11 @@ export class LabTestsPanel extends LitElement {
       <h3>Statistics and strip plot</h3>
       <div class="cols">
         ${this.renderStats(i)}
-        <div class="plot chart">${this.strip ? unsafeSVG(this.strip) : html`<p class="hint">No specimens to plot.</p>`}</div>
+        <div class="plot">${this.stripDirty
+          ? (chartSlot('', 'strip-plot', 640, 250, (this.lab?.specimens.length ?? 0) > 0) ?? html`<p class="hint">No specimens to plot.</p>`)
+          : this.strip
+            ? html`<div class="chart">${unsafeSVG(this.strip)}</div>`
+            : html`<p class="hint">No specimens to plot.</p>`}</div>
       </div>`;
   }
 }

@@ -1,6 +1,7 @@
 /**
  * `<opening-loads-form>` — worksheet section 1: the opening (type, span or entry widths, slab
- * length and edges, ends), the loads and standing support, and the design targets and options.
+ * length and edges, ends), the loads, and the design targets and options (standing support and
+ * bolts are in section 6, `<support-form>`).
  *
  * @fires project-edit - one field changed
  * @fires project-replace - the opening type, the slab edge option or the tensile basis changed
@@ -204,8 +205,8 @@ export class OpeningLoadsForm extends LitElement {
       <fieldset>
         <legend>Loads</legend>
         ${this.q('Surcharge on top', 'loads.surcharge_kPa', p.loads.surcharge_kPa, 'pressure', { hint: 'extra pressure on the top of the analysed strata' })}
-        ${this.q('Standing support', 'support.standing_kPa', p.support.standing_kPa, 'pressure', { hint: 'props, cribs: upward from the floor; never more than the load it relieves' })}
         ${this.q('Horizontal stress', 'loads.horizontalStress_MPa', p.loads.horizontalStress_MPa, 'stress', { hint: 'along the span, compression positive' })}
+        <p class="hint">Standing support and rock bolts: section 6, Support.</p>
       </fieldset>
       <fieldset>
         <legend>Design targets</legend>

@@ -2,7 +2,10 @@
  * `<beam-charts-view>`: for the chosen layer, net tension on the top and bottom fibres and the
  * deflection along the span, the voussoir arch, the slab stress contours when the opening is a
  * slab, and the span × thickness design chart of one mode. The profile and slab field are cheap
- * pure functions of the analysis, computed in `willUpdate`, never in `render`.
+ * pure functions of the analysis, computed in `willUpdate`, never in `render`, and only once
+ * the view is near the screen (`NearViewport`); their code (`analysis/profile.ts`,
+ * `analysis/slab-field.ts`) is loaded then, not with the page. Until drawn, each chart's
+ * place is held at its size.
  *
  * @fires show-trace - detail `{ path }` when a traced number is clicked
  * @fires chart-layer-change - detail `{ layer }` when the design-chart layer is changed
@@ -13,12 +16,17 @@ import { unsafeSVG } from 'lit/directives/unsafe-svg.js';
 import type { Mode, Project } from '../../model/types';
 import type { UnitSystem } from '../../model/units';
 import type { Analysis, DesignChart } from '../../analysis/types';
-import { beamProfile, slabField } from '../../analysis';
 import { beamProfileSvg, voussoirArchSvg, slabContourSvg, designChartSvg } from '../../report/charts';
 import { MODE_NAME } from '../../analysis/check-labels';
 import { displayValue } from './display-value';
 import { tracedNumber } from './traced-number';
 import { resultsStyles } from './results-styles';
+import { NearViewport, chartSlot } from './near-viewport';
+
+type ProfileCode = { beamProfile: typeof import('../../analysis/profile').beamProfile; slabField: typeof import('../../analysis/slab-field').slabField };
+let profileCode: Promise<ProfileCode> | null = null;
+const loadProfileCode = (): Promise<ProfileCode> =>
+  (profileCode ??= Promise.all([import('../../analysis/profile'), import('../../analysis/slab-field')]).then(([a, b]) => ({ beamProfile: a.beamProfile, slabField: b.slabField })));
 
 const CHART_MODES: readonly Mode[] = ['tension', 'crushing', 'sliding', 'snapThrough', 'deflection'];
 
@@ -50,6 +58,12 @@ export class BeamChartsView extends LitElement {
   private slabSvg = '';
   private designSvg = '';
   private shownLayer = 0;
+  private readonly view = new NearViewport(this);
+  /** The profile code, once loaded. */
+  private code: ProfileCode | null = null;
+  /** Charts out of date (drawn when near the screen). */
+  private beamDirty = true;
+  private designDirty = true;
 
   private governingIndex(): number {
     const a = this.analysis;
@@ -68,8 +82,20 @@ export class BeamChartsView extends LitElement {
     if (this.layerChoice !== null && this.layerChoice >= n) this.layerChoice = null;
     const i = this.layerChoice ?? this.governingIndex();
     const u = this.units;
-    if (changed.has('project') || changed.has('analysis') || changed.has('units') || changed.has('layerChoice')) {
-      this.shownLayer = i;
+    this.shownLayer = i;
+    if (changed.has('project') || changed.has('analysis') || changed.has('units') || changed.has('layerChoice')) this.beamDirty = true;
+    if (changed.has('chart') || changed.has('units') || changed.has('project') || changed.has('mode')) this.designDirty = true;
+    if (!this.view.near) return;
+    const code = this.code;
+    if (!code) {
+      void loadProfileCode().then((c) => {
+        this.code = c;
+        this.requestUpdate();
+      });
+    }
+    if (this.beamDirty && code) {
+      this.beamDirty = false;
+      const { beamProfile, slabField } = code;
       const lr = a.report.layers[i]!;
       this.profileSvg = safe(() =>
         beamProfileSvg(beamProfile(p, a, i), {
@@ -103,7 +129,8 @@ export class BeamChartsView extends LitElement {
             })
           : '';
     }
-    if (changed.has('chart') || changed.has('units') || changed.has('project') || changed.has('mode')) {
+    if (this.designDirty) {
+      this.designDirty = false;
       const c = this.chart;
       const layer = c ? p.layers[c.layer] : undefined;
       this.designSvg = c
@@ -157,7 +184,7 @@ export class BeamChartsView extends LitElement {
             (bending group ${lr.group + 1}).
           </p>`
         : nothing}
-      ${this.profileSvg ? html`<div class="chart" data-role="beam-profile">${unsafeSVG(this.profileSvg)}</div>` : html`<p class="empty">No beam profile for this layer.</p>`}
+      ${chartSlot(this.beamDirty ? '' : this.profileSvg, 'beam-profile', 640, 440, this.beamDirty) ?? html`<p class="empty">No beam profile for this layer.</p>`}
       </div><div>
       <h3>Voussoir (cracked beam)</h3>
       ${v === null
@@ -171,7 +198,7 @@ export class BeamChartsView extends LitElement {
               midspan deflection ${tracedNumber(`layers[${i}].voussoir.deflection_mm`, displayValue(v.deflection_mm, 'deflection', u).text, displayValue(v.deflection_mm, 'deflection', u).unit, v.deflection_mm)}.
               ${p.opening.type === 'slab' ? 'For a slab the voussoir uses the short span in plane strain (conservative).' : ''}
             </p>`}
-      ${this.archSvg ? html`<div class="chart" data-role="voussoir-arch">${unsafeSVG(this.archSvg)}</div>` : nothing}
+      ${chartSlot(this.beamDirty ? '' : this.archSvg, 'voussoir-arch', 640, v?.snapThrough ? 340 : 270, this.beamDirty && v !== null) ?? nothing}
       </div></div>
       ${p.opening.type === 'slab'
         ? html`<h3>Roof slab: bending stress</h3>
@@ -186,7 +213,7 @@ export class BeamChartsView extends LitElement {
                   The beam panel above shows the plane-strain strip across the short span for comparison.
                 </p>`
               : nothing}
-            ${this.slabSvg ? html`<div class="chart" data-role="slab-contour">${unsafeSVG(this.slabSvg)}</div>` : html`<p class="empty">No slab stress field.</p>`}`
+            ${chartSlot(this.beamDirty ? '' : this.slabSvg, 'slab-contour', 680, 400, this.beamDirty) ?? html`<p class="empty">No slab stress field.</p>`}`
         : nothing}
       <h3>Design chart: span × thickness</h3>
       <div class="controls">
@@ -199,7 +226,7 @@ export class BeamChartsView extends LitElement {
           ${CHART_MODES.map((m) => html`<option value=${m} ?selected=${m === this.mode}>${MODE_NAME[m]}</option>`)}
         </select>
       </div>
-      ${this.designSvg ? html`<div class="chart" data-role="design-chart">${unsafeSVG(this.designSvg)}</div>` : html`<p class="empty">No design chart for this layer and mode.</p>`}
+      ${chartSlot(this.designDirty ? '' : this.designSvg, 'design-chart', 640, 420, this.designDirty && this.chart !== null) ?? html`<p class="empty">No design chart for this layer and mode.</p>`}
     `;
   }
 }

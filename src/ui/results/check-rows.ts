@@ -75,8 +75,13 @@ export function checkRowViews(report: Report): CheckRowView[] {
         if (row.capacity !== null) capacity = { value: row.capacity, quantity: 'stress', path: null, qualifier: 'strength' };
         break;
       case 'bolt':
+        if (row.demand !== null) demand = { value: row.demand, quantity: 'boltForce', path: sameNumber(row.demand, report.support?.bolts?.load_kN) ? 'support.bolts.load_kN' : null, qualifier: 'per bolt' };
+        if (row.capacity !== null) capacity = { value: row.capacity, quantity: 'boltForce', path: null, qualifier: 'capacity' };
+        if (sameNumber(row.fs, report.support?.bolts?.fsBolt)) fsPath = 'support.bolts.fsBolt';
+        break;
       case 'interlayerShear':
-        // kN per bolt and kPa at an interface: shown by the row's note (no unit conversion here yet).
+        if (row.demand !== null) demand = { value: row.demand, quantity: 'pressure', path: null, qualifier: 'τ at the interface' };
+        if (row.capacity !== null) capacity = { value: row.capacity, quantity: 'pressure', path: null, qualifier: 'bolt resistance' };
         break;
     }
     const note = row.reason ? `Not counted: ${row.reason}. ${row.note}` : row.note;

@@ -1,10 +1,11 @@
 /**
- * The results views of the worksheet (sections 4–7): importing this module registers
- * `<strength-chain-view>`, `<checks-table>`, `<span-finder-view>`, `<beam-charts-view>`,
+ * The results views of the worksheet (sections 4–8): importing this module registers
+ * `<strength-chain-view>`, `<checks-table>`, `<support-view>`, `<span-finder-view>`, `<beam-charts-view>`,
  * `<trace-dialog>` and `<report-view>`.
  */
 export { StrengthChainView } from './strength-chain-view';
 export { ChecksTable } from './checks-table';
+export { SupportView, adoptableSpacing } from './support-view';
 export { SpanFinderView } from './span-finder-view';
 export { adoptableSpan } from './adoptable-span';
 export { BeamChartsView } from './beam-charts-view';

@@ -9,8 +9,12 @@
  * document style shows only that container in print, so the printout is the report — caution
  * first and last — with no buttons, inputs or navigation, whatever the app's layout.
  *
- * The report is built after the results render (in idle time), so it never slows an edit; a
- * print or download builds it at once if it is out of date.
+ * The report is built only when it is wanted: when the reader opens it ("Show the report"),
+ * prints (the Print button, or the browser's print through `beforeprint`) or downloads it.
+ * While open it is rebuilt in idle time after each analysis, so it never slows an edit. The
+ * report model (`report-document.ts`, which brings mathjs for the trace formulas and the
+ * chart code) is not in the page's first load: it is loaded on first use, or in idle time a
+ * few seconds after the first results so that the browser's own print finds it ready.
  */
 import { LitElement, css, html, unsafeCSS, type PropertyValues } from 'lit';
 import { customElement, property, state } from 'lit/decorators.js';
@@ -18,7 +22,6 @@ import { unsafeHTML } from 'lit/directives/unsafe-html.js';
 import type { Project } from '../../model/types';
 import type { UnitSystem } from '../../model/units';
 import type { Analysis, SpanCurve } from '../../analysis/types';
-import { buildReportDocument } from '../../report/report-document';
 import { renderHtml, renderHtmlBody, REPORT_CSS } from '../../report/render-html';
 import type { ReportDocument } from '../../report/document-types';
 import pkg from '../../../package.json';
@@ -39,6 +42,16 @@ const PRINT_CSS = `
 ${REPORT_CSS}`;
 
 type IdleHandle = { cancel(): void };
+
+type ReportModule = typeof import('../../report/report-document');
+let reportModule: Promise<ReportModule> | null = null;
+let reportModuleLoaded: ReportModule | null = null;
+
+/** The report model, loaded once (a chunk of its own, with mathjs). */
+export function loadReportModule(): Promise<ReportModule> {
+  reportModule ??= import('../../report/report-document').then((m) => (reportModuleLoaded = m));
+  return reportModule;
+}
 
 function whenIdle(run: () => void): IdleHandle {
   const w = window as Window & {
@@ -83,16 +96,21 @@ export class ReportView extends LitElement {
 
   @state() private body = '';
   @state() private error: string | null = null;
+  /** The reader opened the report (it is built and shown only then). */
+  @state() open = false;
 
   private doc: ReportDocument | null = null;
   private dirty = true;
   private pending: IdleHandle | null = null;
   private printContainer: HTMLElement | null = null;
+  private preload: ReturnType<typeof setTimeout> | null = null;
 
   override connectedCallback(): void {
     super.connectedCallback();
     window.addEventListener('beforeprint', this.onBeforePrint);
     this.ensurePrintContainer();
+    // Ready for the browser's own print (Ctrl+P) without weighing on the first load.
+    this.preload = setTimeout(() => whenIdle(() => void loadReportModule()), 3000);
   }
 
   override disconnectedCallback(): void {
@@ -100,6 +118,7 @@ export class ReportView extends LitElement {
     window.removeEventListener('beforeprint', this.onBeforePrint);
     this.pending?.cancel();
     this.pending = null;
+    if (this.preload !== null) clearTimeout(this.preload);
     this.printContainer?.remove();
     this.printContainer = null;
     if (!document.getElementById(PRINT_CONTAINER_ID)) document.getElementById(PRINT_STYLE_ID)?.remove();
@@ -127,15 +146,37 @@ export class ReportView extends LitElement {
     if (changed.has('project') || changed.has('analysis') || changed.has('curve') || changed.has('units')) {
       this.dirty = true;
       this.pending?.cancel();
+      this.pending = null;
+    }
+    if (this.open && this.dirty && !this.pending) {
       this.pending = whenIdle(() => {
         this.pending = null;
-        this.build();
+        void this.buildWhenLoaded();
       });
     }
   }
 
-  /** Build the report now if the inputs changed since the last build. */
+  /** Load the report model if need be, then build. */
+  async buildWhenLoaded(): Promise<ReportDocument | null> {
+    try {
+      await loadReportModule();
+    } catch (err) {
+      this.error = `the report code could not be loaded (${err instanceof Error ? err.message : String(err)})`;
+      return null;
+    }
+    return this.build();
+  }
+
+  /**
+   * Build the report now if the inputs changed since the last build; null (and a load started)
+   * while the report model is not loaded yet.
+   */
   build(): ReportDocument | null {
+    const m = reportModuleLoaded;
+    if (!m) {
+      void this.buildWhenLoaded();
+      return null;
+    }
     if (!this.dirty) return this.doc;
     this.dirty = false;
     this.pending?.cancel();
@@ -146,7 +187,7 @@ export class ReportView extends LitElement {
       this.error = null;
     } else {
       try {
-        this.doc = buildReportDocument({
+        this.doc = m.buildReportDocument({
           project: this.project,
           analysis: this.analysis,
           curve: this.curve,
@@ -166,16 +207,23 @@ export class ReportView extends LitElement {
   }
 
   private onBeforePrint = (): void => {
-    this.build();
+    if (!this.build() && this.printContainer && !this.printContainer.innerHTML) {
+      this.printContainer.textContent = 'The report was still loading: close this print preview and use "Print / Save as PDF" in section 7 of the worksheet.';
+    }
   };
 
-  private print(): void {
-    this.build();
+  /** Build (loading the report model if need be), then open the browser's print. */
+  async print(): Promise<void> {
+    await this.buildWhenLoaded();
     window.print();
   }
 
-  private download(): void {
-    const doc = this.build();
+  private toggle(): void {
+    this.open = !this.open;
+  }
+
+  private async download(): Promise<void> {
+    const doc = await this.buildWhenLoaded();
     if (!doc || !this.project) return;
     const blob = new Blob([renderHtml(doc)], { type: 'text/html;charset=utf-8' });
     const url = URL.createObjectURL(blob);
@@ -193,11 +241,16 @@ export class ReportView extends LitElement {
     const ready = !!this.project && !!this.analysis;
     return html`
       <div class="controls">
+        <button type="button" class="action" data-role="toggle" aria-expanded=${this.open ? 'true' : 'false'} ?disabled=${!ready} @click=${this.toggle}>
+          ${this.open ? 'Hide the report' : 'Show the report'}
+        </button>
         <button type="button" class="action" data-role="print" ?disabled=${!ready} @click=${this.print}>Print / Save as PDF</button>
         <button type="button" class="action" data-role="download" ?disabled=${!ready} @click=${this.download}>Download HTML report</button>
-        <span class="note">The printout is this report only, with the caution at the start and the end.</span>
+        <span class="note" role="status">${this.open && this.dirty && this.body ? 'Updating the report to the current values…' : 'The printout is this report only, with the caution at the start and the end.'}</span>
       </div>
-      ${this.error
+      ${!this.open
+        ? html`<p class="note" data-role="closed">The calculation report (inputs, strength chain, checks, the full calculation trace and the charts) is built when you show it, print it or download it.</p>`
+        : this.error
         ? html`<p class="empty" role="alert">The report could not be built: ${this.error}</p>`
         : !ready
           ? html`<p class="empty">No report yet: the analysis has not run.</p>`

@@ -14,7 +14,7 @@ import type { Mode, Project } from '../../model/types';
 import type { UnitSystem } from '../../model/units';
 import type { Analysis, SpanCurve } from '../../analysis/types';
 import { fsSpanSvg } from '../../report/charts';
-import { THICKNESS_MIN_M } from '../../analysis/thickness';
+import { THICKNESS_MIN_M } from '../../analysis/thickness-limits';
 import { numberText } from '../../report/number-text';
 import { MODE_NAME } from '../../analysis/check-labels';
 import { spanWordOf } from '../../analysis/verdict';
@@ -23,6 +23,7 @@ import { displayText, displayValue } from './display-value';
 import { inputSignificant } from '../../model/number-format';
 import { tracedNumber } from './traced-number';
 import { resultsStyles } from './results-styles';
+import { NearViewport, chartSlot } from './near-viewport';
 
 const SPAN_MODES: readonly Mode[] = ['tension', 'crushing', 'sliding', 'snapThrough', 'deflection'];
 
@@ -46,9 +47,14 @@ export class SpanFinderView extends LitElement {
   @property({ type: Number }) chartLayer = 0;
 
   private spanChartSvg = '';
+  /** The FS-versus-span chart is drawn when the view is near the screen (`chartDirty` until then). */
+  private readonly view = new NearViewport(this);
+  private chartDirty = true;
 
   protected override willUpdate(changed: PropertyValues<this>): void {
-    if (changed.has('curve') || changed.has('analysis') || changed.has('units') || changed.has('project')) {
+    if (changed.has('curve') || changed.has('analysis') || changed.has('units') || changed.has('project')) this.chartDirty = true;
+    if (this.chartDirty && this.view.near) {
+      this.chartDirty = false;
       this.spanChartSvg = '';
       if (this.curve) {
         try {
@@ -148,9 +154,8 @@ export class SpanFinderView extends LitElement {
         </button>
         ${adopt !== null ? html`<span class="note">the governing largest ${spanWord}, rounded down to 1 mm</span>` : nothing}
       </div>
-      ${this.spanChartSvg
-        ? html`<div class="chart" data-role="fs-span-chart">${unsafeSVG(this.spanChartSvg)}</div>`
-        : html`<p class="empty">No FS-versus-span curve.</p>`}
+      ${chartSlot(this.chartDirty ? '' : this.spanChartSvg, 'fs-span-chart', 680, 420, this.chartDirty && this.curve !== null) ??
+      html`<p class="empty">No FS-versus-span curve.</p>`}
       <h3>Minimum thickness</h3>
       <div class="controls">
         <label for="thk-layer">Layer</label>

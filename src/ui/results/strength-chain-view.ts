@@ -14,6 +14,7 @@ import type { UnitSystem } from '../../model/units';
 import type { Analysis } from '../../analysis/types';
 import { PRECISION, numberText } from '../../report/number-text';
 import { strengthChainSvg } from '../../report/charts';
+import { NearViewport, chartSlot } from './near-viewport';
 import { displayValue, displayText } from './display-value';
 import { tracedNumber } from './traced-number';
 import { resultsStyles } from './results-styles';
@@ -37,8 +38,14 @@ export class StrengthChainView extends LitElement {
 
   private charts: string[] = [];
 
+  /** The charts are drawn when the view is near the screen (`chartsDirty` until then). */
+  private readonly view = new NearViewport(this);
+  private chartsDirty = true;
+
   protected override willUpdate(changed: PropertyValues<this>): void {
-    if (changed.has('analysis') || changed.has('units')) {
+    if (changed.has('analysis') || changed.has('units')) this.chartsDirty = true;
+    if (this.chartsDirty && this.view.near) {
+      this.chartsDirty = false;
       this.charts = (this.analysis?.layers ?? []).map((d) => {
         try {
           return strengthChainSvg(d.steps, { units: this.units });
@@ -87,7 +94,7 @@ export class StrengthChainView extends LitElement {
               })}
             </tbody>
           </table></div>
-          ${this.charts[i] ? html`<div class="chart">${unsafeSVG(this.charts[i])}</div>` : nothing}</div>
+          ${chartSlot(this.chartsDirty ? '' : (this.charts[i] ?? ''), 'strength-chain-chart', 640, 340, this.chartsDirty) ?? nothing}</div>
           <p class="note">
             Lab results: ${d.lab.source === 'specimens'
               ? html`${d.lab.n} accepted specimen${d.lab.n === 1 ? '' : 's'} of ${d.lab.specimens.length}

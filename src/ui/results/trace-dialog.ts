@@ -11,9 +11,11 @@ import { LitElement, css, html, nothing, type PropertyValues } from 'lit';
 import { customElement, property, query, state } from 'lit/decorators.js';
 import type { Report, TraceEntry } from '../../model/types';
 import type { UnitSystem } from '../../model/units';
-import { formulaText, substitutedText } from '../../report/formula-text';
 import { symbolText } from '../../report/symbol-text';
 import { relatedEntries, safeText, valueText } from './trace-entries';
+import { unsafeSVG } from 'lit/directives/unsafe-svg.js';
+import type { TraceSteps } from '../../model/types';
+import { stepsChart, stepsTable } from '../../report/trace-steps';
 import { resultsStyles } from './results-styles';
 
 function deepActiveElement(): HTMLElement | null {
@@ -21,6 +23,10 @@ function deepActiveElement(): HTMLElement | null {
   while (el && el.shadowRoot && el.shadowRoot.activeElement) el = el.shadowRoot.activeElement;
   return el instanceof HTMLElement ? el : null;
 }
+
+type FormulaModule = typeof import('../../report/formula-text');
+let formulaModule: Promise<FormulaModule> | null = null;
+const loadFormulas = (): Promise<FormulaModule> => (formulaModule ??= import('../../report/formula-text'));
 
 @customElement('trace-dialog')
 export class TraceDialog extends LitElement {
@@ -96,6 +102,23 @@ export class TraceDialog extends LitElement {
         font-weight: 700;
         text-decoration: none;
       }
+      .steps-box {
+        max-height: 18em;
+        overflow: auto;
+        border: 1px solid var(--rule, #ccc);
+        margin: 0.4em 0;
+      }
+      figure[data-role='steps-chart'] {
+        margin: 0.4em 0;
+      }
+      .steps-box td,
+      .steps-box th {
+        padding: 0.1em 0.5em;
+        white-space: nowrap;
+      }
+      .steps-box tr[aria-current='true'] td {
+        font-weight: 700;
+      }
       .nav {
         display: flex;
         gap: 0.6em;
@@ -116,8 +139,12 @@ export class TraceDialog extends LitElement {
 
   private returnFocus: HTMLElement | null = null;
 
+  /** The formula renderer (it brings mathjs), loaded when the dialog first opens. */
+  @state() private formulas: FormulaModule | null = null;
+
   protected override willUpdate(changed: PropertyValues): void {
     if (changed.has('path') || (changed.has('open') && this.open)) this.current = this.path;
+    if (this.open && !this.formulas) void loadFormulas().then((m) => (this.formulas = m));
   }
 
   protected override updated(changed: PropertyValues): void {
@@ -158,17 +185,18 @@ export class TraceDialog extends LitElement {
 
   private entryView(entry: TraceEntry) {
     const u = this.units;
+    const f = this.formulas;
     const symbols = Object.entries(entry.values);
     return html`
       <h2 id="trace-title">${entry.label}</h2>
       <p class="note"><code data-role="trace-path">${entry.path}</code></p>
       <dl class="steps">
         <dt>Formula</dt>
-        <dd class="formula" data-role="formula">${safeText(() => formulaText(entry.formula), entry.formula)}</dd>
+        <dd class="formula" data-role="formula">${f ? safeText(() => f.formulaText(entry.formula), entry.formula) : entry.formula}</dd>
         <dt>With values</dt>
-        <dd class="formula" data-role="substituted">${safeText(() => substitutedText(entry.formula, entry.values), entry.formula)}</dd>
+        <dd class="formula" data-role="substituted" aria-busy=${f ? 'false' : 'true'}>${f ? safeText(() => f.substitutedText(entry.formula, entry.values), entry.formula) : '…'}</dd>
         <dt>Result</dt>
-        <dd class="formula result" data-role="result">${valueText(entry.result, entry.unit, u)}</dd>
+        <dd class="formula result" data-role="result">${valueText(entry.result, entry.unit, u, entry.path)}</dd>
       </dl>
       ${symbols.length
         ? html`<table data-role="values">
@@ -178,7 +206,7 @@ export class TraceDialog extends LitElement {
               ${symbols.map(
                 ([name, v]) => html`<tr>
                   <th scope="row">${safeText(() => symbolText(name), name)} <span class="note">(${name})</span></th>
-                  <td class="num">${valueText(v.value, v.unit, u)}</td>
+                  <td class="num">${valueText(v.value, v.unit, u, entry.path)}</td>
                 </tr>`,
               )}
             </tbody>
@@ -189,13 +217,34 @@ export class TraceDialog extends LitElement {
         <dd class="source" data-role="source">${entry.source}</dd>
         ${entry.note ? html`<dt>Note</dt><dd data-role="note">${entry.note}</dd>` : nothing}
       </dl>
+      ${entry.steps ? this.stepsView(entry.steps) : nothing}
     `;
+  }
+
+  /** The recorded iteration: its chart (the n search) and the table of its steps. */
+  private stepsView(steps: TraceSteps) {
+    const table = stepsTable(steps);
+    const chart = stepsChart(steps);
+    return html`<h3>Steps (${steps.rows.length})</h3>
+      ${chart ? html`<figure data-role="steps-chart">${unsafeSVG(chart.svg)}<figcaption class="note">${chart.caption}</figcaption></figure>` : nothing}
+      <p class="note" data-role="steps-caption">${table.caption}</p>
+      <div class="steps-box" tabindex="0" role="region" aria-label="Steps">
+        <table data-role="steps">
+          <thead><tr>${table.columns.map((c) => html`<th scope="col" class=${c.numeric ? 'num' : ''}>${c.title}</th>`)}</tr></thead>
+          <tbody>
+            ${table.rows.map(
+              (row, r) => html`<tr aria-current=${r === steps.marked ? 'true' : 'false'}>${row.map((c) => html`<td class=${c.numeric ? 'num' : ''}>${c.text}</td>`)}</tr>`,
+            )}
+          </tbody>
+        </table>
+      </div>`;
   }
 
   override render() {
     const trace = this.report?.trace ?? [];
     const entry = trace.find((t) => t.path === this.current);
-    const related = relatedEntries(trace, this.current);
+    // The steps the opened number uses (stays the same list while stepping through it).
+    const related = relatedEntries(trace, this.path || this.current);
     const k = related.findIndex((t) => t.path === this.current);
     return html`<dialog aria-labelledby="trace-title" @close=${this.onClose}>
       ${this.open
@@ -212,7 +261,7 @@ export class TraceDialog extends LitElement {
                     traced by the analysis.
                   </p>`}
             ${related.length
-              ? html`<h3>Related steps (${related.length})</h3>
+              ? html`<h3>Steps this number uses (${related.length})</h3>
                   <ol class="related" data-role="related">
                     ${related.map(
                       (t) => html`<li aria-current=${t.path === this.current ? 'true' : 'false'}>

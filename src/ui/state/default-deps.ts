@@ -1,17 +1,14 @@
-/** The real model and analysis behind the store (tests inject fixtures instead). */
+/** The real model and compute client behind the store (tests inject fixtures instead). */
 import { validateProject } from '../../model/validate';
-import { analyse, designChart, minimumThickness, spanCurve } from '../../analysis/index';
+import { createComputeClient } from '../compute/client';
+import type { ComputeClient } from '../compute/types';
 import type { StoreDeps } from './project-store';
 
-export function defaultDeps(storage: StoreDeps['storage'] = null): StoreDeps {
+export function defaultDeps(storage: StoreDeps['storage'] = null, compute: ComputeClient = createComputeClient()): StoreDeps & { compute: ComputeClient } {
   return {
     validate: validateProject,
-    analyse,
-    spanCurve: (project) => spanCurve(project),
-    designChart: (project, layer) => designChart(project, layer),
-    minimumThickness,
+    compute,
     storage,
-    debounceMs: 150,
     mark: (name) => {
       try {
         performance.mark(name);

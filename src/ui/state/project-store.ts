@@ -2,8 +2,12 @@
  * The one place the analysis runs in the app. Components dispatch `project-edit`,
  * `project-replace`, `units-change`, `chart-layer-change`; the shell forwards them here. Every
  * edit is validated by the model before it lands (a rejected edit keeps the project and sets
- * `fieldErrors`); accepted edits push undo history, autosave, and schedule the analysis
- * ~150 ms after the last edit (`flush()` runs it at once, for tests and the benchmark).
+ * `fieldErrors`); accepted edits push undo history, autosave, and post the analysis at once to
+ * the compute client (a Web Worker in the browser: `src/ui/compute/`), so typing never waits
+ * for it. Each request carries a sequence number; an answer for an older project is dropped.
+ * `pending` is true from an accepted edit until its analysis has landed, `chartPending` until
+ * its design chart has: until then the results shown are the previous project's and the app
+ * marks them as updating. `settled()` resolves once both have landed (tests, benchmark).
  *
  * Two kinds of refusal are kept apart:
  * - a refused FIELD (`fieldErrors`): the field still holds the refused text, so its error stays
@@ -14,11 +18,13 @@
  *   current, valid fields.
  */
 import { MIGRATED_CODE } from '../../model/validate';
-import type { Project } from '../../model/types';
+import type { Project, SupportNeededReport } from '../../model/types';
 import type { Analysis, DesignChart, SpanCurve } from '../../analysis/types';
+import type { AnalysisOutcome, ChartOutcome, ComputeClient } from '../compute/types';
 import { setAtPath } from '../../model/project-path';
 import { UndoHistory } from './undo-history';
 import { saveAutosave, type KeyValueStorage } from './autosave';
+import { errorText } from '../compute/errors';
 
 export type UnitSystem = 'SI' | 'US';
 
@@ -43,6 +49,12 @@ export interface AppState {
   project: Project;
   units: UnitSystem;
   analysis: Analysis | null;
+  /**
+   * The project `analysis` and `curve` were computed for: the current project once they have
+   * landed, the previous one while `pending`. Results views render against it, so what they
+   * show always belongs together (and is marked updating while `pending`).
+   */
+  resultsProject: Project | null;
   curve: SpanCurve | null;
   chart: DesignChart | null;
   chartLayer: number;
@@ -58,11 +70,21 @@ export interface AppState {
   canRedo: boolean;
   /** True between an accepted edit and the analysis that follows it. */
   pending: boolean;
+  /** True until the design chart and minimum thickness of the current project and chart layer have landed. */
+  chartPending: boolean;
   /** Validation warnings of the current project (ASSUMED defaults and the like). */
   inputWarnings: FieldError[];
   /** A one-line message for the user (file opened, link copied, autosave ignored …). */
   notice: string | null;
   autosave: AutosaveState;
+  /**
+   * The support needed (METHODS §12 searches) for the current project, computed after the main
+   * results in a task of its own (never in the way of typing); null until then or without a
+   * `supportNeeded` dependency.
+   */
+  supportNeeded: { needed: SupportNeededReport | null; reason: string | null; project: Project } | null;
+  /** True while the support-needed searches for the current project are still to run. */
+  supportPending: boolean;
   /** Milliseconds spent in each step of the last analysis (for the benchmark). */
   timings: { analyse: number; curve: number; chart: number; minThickness: number };
 }
@@ -77,12 +99,13 @@ export type ValidationOutcome =
 
 export interface StoreDeps {
   validate(input: unknown): ValidationOutcome;
-  analyse(project: Project): Analysis;
-  spanCurve(project: Project): SpanCurve;
-  designChart(project: Project, layerIndex: number): DesignChart;
-  minimumThickness(project: Project, layerIndex: number): number | null;
+  /**
+   * Runs the analysis (the worker client in the browser, the in-thread client in tests); with
+   * `supportNeeded`, also the support-needed searches (`analysis/support-needed.ts`) after
+   * each analysis.
+   */
+  compute: Pick<ComputeClient, 'analyse' | 'chart'> & Partial<Pick<ComputeClient, 'supportNeeded'>>;
   storage?: KeyValueStorage | null;
-  debounceMs?: number;
   /** Marks for the edit → results measure (performance.mark in the browser). */
   mark?: (name: string) => void;
 }
@@ -91,25 +114,22 @@ export type Listener = (state: AppState) => void;
 
 const plain = (e: { path: string; message: string }): FieldError => ({ path: e.path, message: e.message });
 
-/** Error text for the user: the message only, never a stack trace. */
-export function errorText(err: unknown): string {
-  if (err instanceof Error) return err.message || err.name;
-  return String(err);
-}
+export { errorText };
 
 export class ProjectStore {
   private state: AppState;
   private readonly history = new UndoHistory<Project>(100, 1000);
   private readonly listeners = new Set<Listener>();
-  private timer: ReturnType<typeof setTimeout> | null = null;
+  /** Sequence number of the latest analysis request; answers to older ones are dropped. */
+  private seq = 0;
+  private chartSeq = 0;
+  private supportSeq = 0;
+  private settledWaiters: Array<() => void> = [];
   /** Refused fields by the path that was edited (a refusal may name other paths too). */
   private refused = new Map<string, FieldError[]>();
   /** True once the user picked a layer for the chart; until then it follows the governing layer. */
   private chartLayerChosen = false;
-  readonly debounceMs: number;
-
   constructor(private readonly deps: StoreDeps, initial: Project, units: UnitSystem = 'SI') {
-    this.debounceMs = deps.debounceMs ?? 150;
     const checked = deps.validate(initial);
     if (!checked.ok) {
       throw new RangeError(`initial project refused: ${checked.errors.map((e) => `${e.path}: ${e.message}`).join('; ')}`);
@@ -118,6 +138,7 @@ export class ProjectStore {
       project: checked.project,
       units,
       analysis: null,
+      resultsProject: null,
       curve: null,
       chart: null,
       chartLayer: 0,
@@ -129,12 +150,15 @@ export class ProjectStore {
       canUndo: false,
       canRedo: false,
       pending: true,
+      chartPending: true,
       inputWarnings: checked.warnings.map(plain),
       notice: null,
       autosave: { status: 'saved', message: null, held: null },
+      supportNeeded: null,
+      supportPending: false,
       timings: { analyse: 0, curve: 0, chart: 0, minThickness: 0 },
     };
-    this.runAnalysis();
+    this.requestAnalysis();
   }
 
   getState(): AppState {
@@ -223,10 +247,11 @@ export class ProjectStore {
       inputWarnings: checked.warnings.map(plain),
       ...(key === null ? { fileErrors: null } : {}),
       pending: true,
+      chartPending: true,
       notice: migrationNotice(checked.warnings) ?? (source ? `${/^(File|Demo|Project link)\b/.test(source) ? 'Loaded' : 'Applied'}: ${source}.` : this.state.notice),
     });
     this.autosave(checked.project);
-    this.schedule();
+    this.requestAnalysis();
     return true;
   }
 
@@ -243,9 +268,9 @@ export class ProjectStore {
   private restore(project: Project): boolean {
     this.deps.mark?.('lamina:edit');
     this.clearRefused(null);
-    this.set({ project, pending: true });
+    this.set({ project, pending: true, chartPending: true });
     this.autosave(project);
-    this.schedule();
+    this.requestAnalysis();
     return true;
   }
 
@@ -287,9 +312,10 @@ export class ProjectStore {
     const n = this.state.project.layers.length;
     if (!Number.isInteger(layer) || layer < 0 || layer >= n) return;
     this.chartLayerChosen = true;
-    if (layer === this.state.chartLayer && this.state.chart) return;
-    const extra = this.computeChart(this.state.project, layer);
-    this.set({ chartLayer: layer, ...extra });
+    if (layer === this.state.chartLayer && (this.state.chart || this.state.chartPending)) return;
+    this.set({ chartLayer: layer, chartPending: true });
+    // while an analysis is on its way, its answer requests the chart of the chosen layer
+    if (!this.state.pending && this.state.analysis) this.requestChart(this.state.project, layer);
   }
 
   setNotice(notice: string | null): void {
@@ -306,71 +332,74 @@ export class ProjectStore {
     if (this.state.fileErrors) this.set({ fileErrors: null });
   }
 
-  /** Run a pending analysis now (tests, benchmark). */
-  flush(): void {
-    if (this.timer !== null) {
-      clearTimeout(this.timer);
-      this.timer = null;
-    }
-    if (this.state.pending) this.runAnalysis();
+  /**
+   * Resolves once the analysis and the chart of the current project have landed (at once when
+   * nothing is pending). Tests and the benchmark wait on it.
+   */
+  settled(): Promise<void> {
+    if (!this.state.pending && !this.state.chartPending) return Promise.resolve();
+    return new Promise((resolve) => this.settledWaiters.push(resolve));
   }
 
-  private schedule(): void {
-    if (this.timer !== null) clearTimeout(this.timer);
-    this.timer = setTimeout(() => {
-      this.timer = null;
-      this.runAnalysis();
-    }, this.debounceMs);
-  }
-
-  private computeChart(project: Project, layer: number): Pick<AppState, 'chart' | 'minThickness_m'> {
-    let chart: DesignChart | null = null;
-    let minThickness_m: number | null = null;
-    const t0 = now();
-    try {
-      chart = this.deps.designChart(project, layer);
-    } catch {
-      chart = null;
-    }
-    const t1 = now();
-    try {
-      const t = this.deps.minimumThickness(project, layer);
-      minThickness_m = typeof t === 'number' && Number.isFinite(t) ? t : null;
-    } catch {
-      minThickness_m = null;
-    }
-    this.chartTimings = { chart: t1 - t0, minThickness: now() - t1 };
-    return { chart, minThickness_m };
-  }
-  private chartTimings = { chart: 0, minThickness: 0 };
-
-  private runAnalysis(): void {
+  /** Post the current project's analysis; its answer is dropped if another edit came since. */
+  private requestAnalysis(): void {
+    const seq = ++this.seq;
     const project = this.state.project;
-    let analysis: Analysis | null = null;
-    let curve: SpanCurve | null = null;
-    let error: string | null = null;
-    const t0 = now();
-    try {
-      analysis = this.deps.analyse(project);
-    } catch (err) {
-      error = `The analysis failed: ${errorText(err)}`;
-    }
-    const t1 = now();
-    if (analysis) {
-      try {
-        curve = this.deps.spanCurve(project);
-      } catch {
-        curve = null;
-      }
-    }
-    const t2 = now();
+    this.chartSeq++; // a chart on its way belongs to an older project
+    this.supportSeq++; // so does a support search
+    this.deps.compute.analyse(project).then(
+      (out) => {
+        if (out !== null && seq === this.seq) this.landAnalysis(project, out);
+      },
+      (err: unknown) => {
+        if (seq === this.seq) this.landAnalysis(project, { analysis: null, curve: null, error: `The analysis failed: ${errorText(err)}`, timings: { analyse: 0, curve: 0 } });
+      },
+    );
+  }
+
+  private landAnalysis(project: Project, out: AnalysisOutcome): void {
     const n = project.layers.length;
     let chartLayer = Math.min(this.state.chartLayer, n - 1);
-    if (!this.chartLayerChosen && analysis) chartLayer = governingLayerIndex(analysis);
-    this.chartTimings = { chart: 0, minThickness: 0 };
-    const extra = analysis ? this.computeChart(project, chartLayer) : { chart: null, minThickness_m: null };
-    const timings = { analyse: t1 - t0, curve: t2 - t1, ...this.chartTimings };
-    this.set({ analysis, curve, error, chartLayer, pending: false, timings, ...extra });
+    if (!this.chartLayerChosen && out.analysis) chartLayer = governingLayerIndex(out.analysis);
+    const timings = { ...this.state.timings, ...out.timings };
+    if (out.analysis) {
+      const supportPending = Boolean(this.deps.compute.supportNeeded);
+      this.set({ analysis: out.analysis, resultsProject: project, curve: out.curve, error: out.error, chartLayer, pending: false, chartPending: true, supportPending, timings });
+      this.requestChart(project, chartLayer);
+      // after the results and the chart, in the same worker: never in their way
+      if (supportPending) this.requestSupport(project);
+    } else {
+      this.set({ analysis: null, resultsProject: project, curve: null, error: out.error, chartLayer, pending: false, chart: null, minThickness_m: null, chartPending: false, supportPending: false, timings });
+    }
+  }
+
+  /** Run the support-needed searches for the current project unless its answer is already there. */
+  requestSupportNeeded(): void {
+    if (this.state.supportNeeded?.project === this.state.project || !this.state.analysis || this.state.pending) return;
+    this.set({ supportPending: true });
+    this.requestSupport(this.state.project);
+  }
+
+  private requestSupport(project: Project): void {
+    const find = this.deps.compute.supportNeeded;
+    if (!find) return;
+    const seq = ++this.supportSeq;
+    const landed = (r: { needed: SupportNeededReport | null; reason: string | null } | null) => {
+      if (r === null || seq !== this.supportSeq || project !== this.state.project) return;
+      this.set({ supportNeeded: { needed: r.needed, reason: r.reason, project }, supportPending: false });
+    };
+    find(project).then(landed, (err: unknown) => landed({ needed: null, reason: `the search failed: ${errorText(err)}` }));
+  }
+
+  private requestChart(project: Project, layer: number): void {
+    const seq = ++this.chartSeq;
+    const landed = (out: ChartOutcome | null) => {
+      if (out === null || seq !== this.chartSeq || project !== this.state.project || layer !== this.state.chartLayer) return;
+      this.set({ chart: out.chart, minThickness_m: out.minThickness_m, chartPending: false, timings: { ...this.state.timings, ...out.timings } });
+    };
+    this.deps.compute.chart(project, layer).then(landed, () =>
+      landed({ layer, chart: null, minThickness_m: null, timings: { chart: 0, minThickness: 0 } }),
+    );
   }
 
   private set(patch: Partial<AppState>): void {
@@ -384,6 +413,11 @@ export class ProjectStore {
       canRedo: this.history.canRedo,
     };
     for (const l of this.listeners) l(this.state);
+    if (!this.state.pending && !this.state.chartPending && this.settledWaiters.length) {
+      const waiters = this.settledWaiters;
+      this.settledWaiters = [];
+      for (const w of waiters) w();
+    }
   }
 }
 
@@ -392,8 +426,6 @@ function migrationNotice(warnings: ReadonlyArray<{ message: string; code?: strin
   const w = warnings.find((x) => x.code === MIGRATED_CODE);
   return w ? w.message : null;
 }
-
-const now = (): number => (typeof performance !== 'undefined' ? performance.now() : Date.now());
 
 /** Index of the governing layer (the report gives it), 0 when there is none. */
 export function governingLayerIndex(analysis: Analysis): number {

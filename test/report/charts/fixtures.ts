@@ -67,6 +67,7 @@ export function analysis(p: Project = project()): Analysis {
   return {
     report,
     layers: [],
+    grouping: [],
     groups: [
       { first: 0, last: 0, weight_kPa: 11.25, stiffness_GPam3: 0.729, extra_kPa: 0 },
       { first: 1, last: 2, weight_kPa: 67.5, stiffness_GPam3: 121.01, extra_kPa: 10 },

@@ -2,7 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { analyse, designChart, minimumThickness, spanCurve } from '../../../src/analysis/index';
 import { runUncertainty } from '../../../src/uncertainty/run';
 import { createInThreadClient, createWorkerClient } from '../../../src/ui/compute/client';
-import { analysisJob, chartJob, uncertaintyJob } from '../../../src/ui/compute/compute-core';
+import { ANALYSIS_FUNCTIONS, analysisJob, chartJob, supportJob, uncertaintyJob } from '../../../src/ui/compute/compute-core';
+import { supportNeeded } from '../../../src/analysis/support-needed';
 import type { ComputeRequest, ComputeResponse } from '../../../src/ui/compute/protocol';
 import type { Project } from '../../../src/model/types';
 import { presets } from '../../analysis/fixtures';
@@ -38,15 +39,19 @@ describe('compute client, in the calling thread', () => {
     expect(chart?.chart).toEqual(designChart(project, layer));
     expect(chart?.minThickness_m).toEqual(minimumThickness(project, layer));
     expect(structuredClone(chart)).toEqual(chart);
+    const support = await client.supportNeeded(project);
+    const direct = supportNeeded(project);
+    expect(support).toEqual({ needed: direct.needed, reason: direct.reason });
+    expect(structuredClone(support)).toEqual(support);
   });
 
   it('an analysis that throws gives the message for the user, not a throw', () => {
     const out = analysisJob(presets()[0].project, {
-      analyse: () => { throw new Error('no convergence'); }, spanCurve, designChart, minimumThickness,
+      analyse: () => { throw new Error('no convergence'); }, spanCurve, designChart, minimumThickness, supportNeeded: () => ({ needed: null, reason: null }),
     });
     expect(out.analysis).toBeNull();
     expect(out.error).toBe('The analysis failed: no convergence');
-    expect(chartJob(presets()[0].project, 99).chart).toBeNull(); // out-of-range layer: no chart, no throw
+    expect(chartJob(presets()[0].project, 99, ANALYSIS_FUNCTIONS).chart).toBeNull(); // out-of-range layer: no chart, no throw
   });
 
   it('the uncertainty run in chunks gives the same numbers as the synchronous run, with progress to the total', async () => {
@@ -101,9 +106,10 @@ class FakeWorker {
     this.received.push(structuredClone(m));
     const reply = (r: ComputeResponse) => this.onmessage?.({ data: structuredClone(r) } as MessageEvent<ComputeResponse>);
     setTimeout(() => {
-      if (m.kind === 'analyse') reply({ id: m.id, kind: 'result', value: analysisJob(m.project) });
-      else if (m.kind === 'chart') reply({ id: m.id, kind: 'result', value: chartJob(m.project, m.layer) });
+      if (m.kind === 'analyse') reply({ id: m.id, kind: 'result', value: analysisJob(m.project, ANALYSIS_FUNCTIONS) });
+      else if (m.kind === 'chart') reply({ id: m.id, kind: 'result', value: chartJob(m.project, m.layer, ANALYSIS_FUNCTIONS) });
       else if (m.kind === 'cancel') this.stopped.add(m.id);
+      else if (m.kind === 'support') reply({ id: m.id, kind: 'result', value: supportJob(m.project, ANALYSIS_FUNCTIONS) });
       else
         void uncertaintyJob(m.project, m.request, {
           onProgress: (done, total) => reply({ id: m.id, kind: 'progress', done, total }),
@@ -143,9 +149,11 @@ describe('compute client over workers (protocol, with a stand-in worker)', () =>
     const controller = new AbortController();
     const run = client.runUncertainty(withUncertainty(100_000), {}, { signal: controller.signal, onProgress: (d) => d >= 1000 && controller.abort() });
     await expect(run).rejects.toMatchObject({ name: 'AbortError' });
+    expect(workers).toHaveLength(1); // the edit worker starts with the first analysis
+    expect(workers[0].received.map((m) => m.kind)).toEqual(['uncertainty', 'cancel']);
+    await client.analyse(presets()[0].project);
     expect(workers).toHaveLength(2);
-    expect(workers[1].received.map((m) => m.kind)).toEqual(['uncertainty', 'cancel']);
-    expect(workers[0].received).toEqual([]);
+    expect(workers[1].received.map((m) => m.kind)).toEqual(['analyse']);
     client.dispose();
     await expect(client.analyse(presets()[0].project)).rejects.toThrow(/closed/);
   });

@@ -31,6 +31,41 @@ describe('relatedEntries(trace, path)', () => {
     expect(paths.some((p) => p.startsWith('detail.layers[0].'))).toBe(true);
     expect(paths.some((p) => p.includes('layers[1]'))).toBe(false);
   });
+
+  it('coal room: the beam tension lists what it uses (load, groups, modulus), not the 40 Brazilian discs', () => {
+    const { report } = analyse(loadPreset('coal-room-shale'));
+    const discs = report.trace.filter((t) => /\.lab\.specimens\[/.test(t.path));
+    expect(discs.length).toBeGreaterThanOrEqual(5); // the demo's lab sheet
+    // The layer as a whole has some 40 entries: listing them all was the complaint.
+    expect(report.trace.filter((t) => tracePrefix(t.path) === 'layers[0]').length).toBeGreaterThanOrEqual(30);
+    const paths = relatedEntries(report.trace, 'layers[0].elastic.maxTension_MPa').map((t) => t.path);
+    expect(paths[0]).toBe('layers[0].load_kPa'); // report order: the load comes before the beam
+    expect(paths).toContain('layers[0].elastic.maxTension_MPa');
+    expect(paths.some((p) => p.includes('.lab.'))).toBe(false);
+    expect(paths.some((p) => p.includes('.strength.'))).toBe(false); // σ = q s²/(2t²) − σh uses no strength
+    expect(paths.length).toBeLessThan(12);
+  });
+
+  it('every related entry is reached through a value the one before substitutes (transitively), all in the same layer or whole roof', () => {
+    const { report } = analyse(loadPreset('coal-room-shale'));
+    for (const start of report.trace) {
+      const related = relatedEntries(report.trace, start.path);
+      expect(related).toContain(start);
+      for (const r of related) {
+        if (r === start) continue;
+        // r's result appears among the values of some related entry, with its unit
+        const user = related.find((u) => u !== r && Object.values(u.values).some((v) => v.unit === r.unit && v.value !== 0 && Math.abs(v.value - r.result) <= 1e-9 * Math.abs(v.value)));
+        expect(user, `${start.path} → ${r.path}`).toBeDefined();
+      }
+    }
+  });
+
+  it('the FS tension reaches the strength chain through the design strength', () => {
+    const { report } = analyse(loadPreset('coal-room-shale'));
+    const paths = relatedEntries(report.trace, 'layers[0].elastic.fsTension').map((t) => t.path);
+    expect(paths).toContain('layers[0].strength.design_MPa');
+    expect(paths).toContain('layers[0].elastic.maxTension_MPa');
+  });
 });
 
 describe('valueText(value, unit, units)', () => {

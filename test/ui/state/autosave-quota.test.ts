@@ -51,7 +51,7 @@ describe('autosave under a storage quota', () => {
     expect(s.map.has(AUTOSAVE_BACKUP_KEY)).toBe(false);
   });
 
-  it('a refused 3 MB autosave that cannot be set aside is held: autosave pauses and no edit overwrites it', () => {
+  it('a refused 3 MB autosave that cannot be set aside is held: autosave pauses and no edit overwrites it', async () => {
     const s = new QuotaStorage(5_000_000);
     const text = bigRefused();
     s.setItem(AUTOSAVE_KEY, text);
@@ -60,20 +60,20 @@ describe('autosave under a storage quota', () => {
     expect(first.held?.text).toBe(text);
     expect(first.held?.message).toMatch(/could not be set aside: the browser's storage for this page is full \(QuotaExceededError\)\. It is kept exactly as it was .*Download it/);
 
-    const store = new ProjectStore({ ...defaultDeps(s), debounceMs: 0 }, first.project);
+    const store = new ProjectStore(defaultDeps(s), first.project);
     store.holdAutosave(first.held!.text, first.held!.message);
     expect(store.getState().autosave).toMatchObject({ status: 'paused', held: text });
     expect(store.edit('opening.span_m', 7)).toBe(true);
     expect(store.edit('title', 'changed')).toBe(true);
     store.undo();
     expect(s.map.get(AUTOSAVE_KEY)).toBe(text); // 3,000,068 characters, not 2,525
-    store.flush();
+    await store.settled();
 
     // the user downloaded it and resumes: only now is it replaced by the current project
     store.resumeAutosave();
     expect(store.getState().autosave.status).toBe('saved');
     expect(JSON.parse(s.map.get(AUTOSAVE_KEY)!).opening.span_m).toBe(7);
-  });
+  }, 60_000); // the real analysis loads in this thread on first use
 
   it('when the backup fits, the refused autosave is moved aside and the demo opens, as before', () => {
     const s = new QuotaStorage(10_000_000);
@@ -85,9 +85,9 @@ describe('autosave under a storage quota', () => {
     expect(first.notices.join(' ')).toMatch(/no longer passes validation; it was set aside/);
   });
 
-  it('a quota error on an ordinary autosave is shown (status failed with the reason), and clears once a write succeeds', () => {
+  it('a quota error on an ordinary autosave is shown (status failed with the reason), and clears once a write succeeds', async () => {
     const s = new QuotaStorage(100_000);
-    const store = new ProjectStore({ ...defaultDeps(s), debounceMs: 0 }, initialProject('', s, validateProject).project);
+    const store = new ProjectStore(defaultDeps(s), initialProject('', s, validateProject).project);
     expect(store.edit('title', 'first')).toBe(true);
     expect(store.getState().autosave.status).toBe('saved');
     s.capacity = 10; // another tab filled the storage
@@ -99,8 +99,8 @@ describe('autosave under a storage quota', () => {
     s.capacity = 100_000;
     expect(store.edit('title', 'third')).toBe(true);
     expect(store.getState().autosave).toEqual({ status: 'saved', message: null, held: null });
-    store.flush();
-  });
+    await store.settled();
+  }, 60_000);
 
   it('storageFailure names the quota by its standard and legacy names, and passes other errors on', () => {
     expect(storageFailure({ name: 'NS_ERROR_DOM_QUOTA_REACHED' })).toMatch(/full/);
