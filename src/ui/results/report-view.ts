@@ -81,6 +81,8 @@ export class ReportView extends LitElement {
   @property({ attribute: false }) curve: SpanCurve | null = null;
   @property() units: UnitSystem = 'SI';
 
+  /** Include the appendix (layer results, strength chain, calculation trace, methods); off: the summary alone. */
+  @state() private withTrace = true;
   @state() private body = '';
   @state() private error: string | null = null;
 
@@ -124,7 +126,7 @@ export class ReportView extends LitElement {
   }
 
   protected override willUpdate(changed: PropertyValues): void {
-    if (changed.has('project') || changed.has('analysis') || changed.has('curve') || changed.has('units')) {
+    if (changed.has('project') || changed.has('analysis') || changed.has('curve') || changed.has('units') || changed.has('withTrace')) {
       this.dirty = true;
       this.pending?.cancel();
       this.pending = whenIdle(() => {
@@ -152,6 +154,7 @@ export class ReportView extends LitElement {
           curve: this.curve,
           units: this.units,
           version: pkg.version,
+          trace: this.withTrace,
         });
         this.body = renderHtmlBody(this.doc);
         this.error = null;
@@ -195,7 +198,11 @@ export class ReportView extends LitElement {
       <div class="controls">
         <button type="button" class="action" data-role="print" ?disabled=${!ready} @click=${this.print}>Print / Save as PDF</button>
         <button type="button" class="action" data-role="download" ?disabled=${!ready} @click=${this.download}>Download HTML report</button>
-        <span class="note">The printout is this report only, with the caution at the start and the end.</span>
+        <label class="trace-switch"
+          ><input type="checkbox" data-role="with-trace" .checked=${this.withTrace} @change=${(e: Event) => (this.withTrace = (e.target as HTMLInputElement).checked)} />
+          With the calculation trace (appendix)</label
+        >
+        <span class="note">The printout is this report only, with the caution at the start and the end: a summary of a few pages, then, when chosen, the appendix with every step of the calculation.</span>
       </div>
       ${this.error
         ? html`<p class="empty" role="alert">The report could not be built: ${this.error}</p>`
