@@ -556,7 +556,9 @@ export class LaminaApp extends LitElement {
       n >= 4 && this.state?.stale
         ? html`<p class="stale-note" role="status"><span class="stale-word">Stale</span>results are for the last accepted values; a field above holds a refused value.</p>`
         : nothing;
-    return html`<h2 id="${s.id}-h" tabindex="-1"><span class="num-badge">${n}</span> ${s.title}</h2>${stale}`;
+    // An overhang is not a span: section 7 says so for a cantilever.
+    const title = s.id === 'span' && this.state?.project.opening.type === 'cantilever' ? 'Overhang and thickness' : s.title;
+    return html`<h2 id="${s.id}-h" tabindex="-1"><span class="num-badge">${n}</span> ${title}</h2>${stale}`;
   }
 
   override render() {

@@ -15,7 +15,7 @@ import type { UnitSystem } from '../../model/units';
 import type { Analysis, DesignChart } from '../../analysis/types';
 import { beamProfile, slabField } from '../../analysis';
 import { beamProfileSvg, voussoirArchSvg, slabContourSvg, designChartSvg } from '../../report/charts';
-import { MODE_NAME } from '../../analysis/check-labels';
+import { modeName } from '../../analysis/check-labels';
 import { displayValue } from './display-value';
 import { tracedNumber } from './traced-number';
 import { resultsStyles } from './results-styles';
@@ -73,6 +73,7 @@ export class BeamChartsView extends LitElement {
       const lr = a.report.layers[i]!;
       this.profileSvg = safe(() =>
         beamProfileSvg(beamProfile(p, a, i), {
+          spanWord: p.opening.type === 'cantilever' ? 'overhang' : 'span',
           units: u,
           designStrength_MPa: lr.strength.crossJointed ? undefined : lr.strength.design_MPa,
           title: `${lr.name}: net fibre tension and deflection along the ${p.opening.type === 'cantilever' ? 'overhang' : 'span'}`,
@@ -112,6 +113,7 @@ export class BeamChartsView extends LitElement {
               units: u,
               currentSpan_m: p.opening.span_m,
               currentThickness_m: layer?.thickness_m,
+              spanWord: p.opening.type === 'cantilever' ? 'overhang' : 'span',
             }),
           )
         : '';
@@ -188,7 +190,7 @@ export class BeamChartsView extends LitElement {
               : nothing}
             ${this.slabSvg ? html`<div class="chart" data-role="slab-contour">${unsafeSVG(this.slabSvg)}</div>` : html`<p class="empty">No slab stress field.</p>`}`
         : nothing}
-      <h3>Design chart: span × thickness</h3>
+      <h3>Design chart: ${this.project?.opening.type === 'cantilever' ? 'overhang' : 'span'} × thickness</h3>
       <div class="controls">
         <label for="chart-layer">Layer</label>
         <select id="chart-layer" data-role="chart-layer" @change=${this.chooseChartLayer}>
@@ -196,7 +198,7 @@ export class BeamChartsView extends LitElement {
         </select>
         <label for="chart-mode">Mode</label>
         <select id="chart-mode" data-role="chart-mode" @change=${this.chooseMode}>
-          ${CHART_MODES.map((m) => html`<option value=${m} ?selected=${m === this.mode}>${MODE_NAME[m]}</option>`)}
+          ${CHART_MODES.map((m) => html`<option value=${m} ?selected=${m === this.mode}>${modeName(m, this.project?.opening.type ?? '')}</option>`)}
         </select>
       </div>
       ${this.designSvg ? html`<div class="chart" data-role="design-chart">${unsafeSVG(this.designSvg)}</div>` : html`<p class="empty">No design chart for this layer and mode.</p>`}
