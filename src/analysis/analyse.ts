@@ -18,6 +18,7 @@ import { specimenOutcomes } from '../strength/specimens';
 import { empiricalReport, supportReport } from './support-report';
 import { suspensionOf } from './support';
 import { supportNeeded } from './support-needed';
+import type { StrengthChain } from '../strength/chain';
 
 const MPa = 1e-6;
 const kPa = 1e-3;
@@ -28,6 +29,11 @@ const mm = 1e3;
 const LARGE_DEFLECTION_RATIO = 0.1;
 
 export function analyse(project: Project): Analysis {
+  return analyseWithState(project).analysis;
+}
+
+/** The analysis and the strength chains it used (the support-needed searches hold them fixed). */
+function analyseWithState(project: Project): { analysis: Analysis; chains: StrengthChain[] } {
   const p = projectToSI(project);
   const state = evaluate(p);
   const warnings: Warning[] = [];
@@ -156,7 +162,7 @@ export function analyse(project: Project): Analysis {
     warnings,
     trace: trace.entries,
   };
-  return { report, layers: details, groups, grouping, separations };
+  return { analysis: { report, layers: details, groups, grouping, separations }, chains: state.layers.map((l) => l.chain) };
 }
 
 /**
@@ -164,8 +170,8 @@ export function analyse(project: Project): Analysis {
  * (METHODS §12): for the CLI's support command and the report's support section.
  */
 export function analyseWithSupportNeeded(project: Project): Analysis {
-  const a = analyse(project);
-  const n = supportNeeded(project);
+  const { analysis: a, chains } = analyseWithState(project);
+  const n = supportNeeded(project, { chains, rows: a.report.checks });
   const support = a.report.support ?? { bolts: null, needed: null, neededReason: null };
   return { ...a, report: { ...a.report, support: { ...support, needed: n.needed, neededReason: n.reason } } };
 }

@@ -193,13 +193,22 @@ export function checkTable(p: ProjectSI, state: State): CheckRow[] {
   return applySupportRows(p, state.support, state.layers, rows, tensionCounted);
 }
 
+/**
+ * Whether a counted row with this FS can govern: a standing arch's snap-through row (FS 1, a
+ * yes/no check that is met) never does; every other counted row can. The uncertainty run's
+ * governing FS per sample follows the same rule.
+ */
+export function canGovern(mode: CheckRow['mode'], fs: number): boolean {
+  return !(mode === 'snapThrough' && fs > 0);
+}
+
 /** The counted row with the smallest FS/target (ties: the lower layer); a standing arch's snap-through row never governs. */
 export function governingRow(rows: readonly CheckRow[]): CheckRow | null {
   let best: CheckRow | null = null;
   let bestRatio = Infinity;
   for (const r of rows) {
     if (!r.counts || r.fs === null) continue;
-    if (r.mode === 'snapThrough' && r.fs > 0) continue;
+    if (!canGovern(r.mode, r.fs)) continue;
     const ratio = r.fs / r.target;
     if (ratio < bestRatio) {
       best = r;

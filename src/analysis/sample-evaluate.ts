@@ -9,9 +9,10 @@
  * `checkTable` — the same functions `analyse` uses, so a sample at the project's own values
  * gives the deterministic FS bit for bit — and reduces the counted rows to:
  * - `modeFs[m]`: the smallest FS of mode `MODES[m]` over the counted checks (null: none counts);
- * - `governingFs`: the smallest FS over the counted checks (the sample fails when it is < 1;
- *   Infinity when nothing counts, e.g. no net load);
- * - `targetRatio`: the smallest FS/target over the counted checks (< 1: below target).
+ * - `governingFs`: the smallest FS over the counted checks that can govern (`canGovern`: not a
+ *   standing arch's snap-through row, FS 1, which would pin every standing sample at 1); the
+ *   sample fails when it is < 1; Infinity when nothing counts, e.g. no net load;
+ * - `targetRatio`: the smallest FS/target over the same checks (< 1: below target).
  *
  * Sampling `layers[i].tensile.value_MPa` on a layer with specimens empties the specimens of
  * the working copy and takes the value as a Brazilian strength: the distribution stands for the
@@ -36,7 +37,7 @@
 import type { Mode, Project } from '../model/types';
 import type { StrengthChain } from '../strength/chain';
 import { MODES, VOUSSOIR_MODES } from './check-labels';
-import { checkTable, countedModes, layerCondition, layerRowFs, rowCounts, targetFor } from './check-table';
+import { canGovern, checkTable, countedModes, layerCondition, layerRowFs, rowCounts, targetFor } from './check-table';
 import { beamEnds, chainFor, evaluate, layerLoads, layerState, moduliFor, STRIP_ASPECT } from './evaluate';
 import { intersectionDiagonal, projectToSI, type LayerSI, type ProjectSI } from './inputs';
 import { platesForSampling, type SamplingPlates } from './sample-plates';
@@ -195,6 +196,7 @@ export function sampleEvaluator(project: Project, fields: readonly SampledField[
         if (fs === null || !rowCounts(counted, mode, fs)) continue;
         const cur = modeFs[k];
         if (cur === null || fs < cur) modeFs[k] = fs;
+        if (!canGovern(mode, fs)) continue;
         if (fs < governing) governing = fs;
         const q = fs / targets[k];
         if (q < ratio) ratio = q;
@@ -218,6 +220,7 @@ export function sampleEvaluator(project: Project, fields: readonly SampledField[
         const cur = modeFs[k];
         if (cur === null || r.fs < cur) modeFs[k] = r.fs;
       }
+      if (!canGovern(r.mode, r.fs)) continue;
       if (r.fs < governing) governing = r.fs;
       const q = r.fs / r.target;
       if (q < ratio) ratio = q;

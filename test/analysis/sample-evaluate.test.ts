@@ -16,7 +16,8 @@ function reduce(rows: readonly CheckRow[]) {
     const fs = rows.filter((r) => r.mode === m && r.counts && r.fs !== null).map((r) => r.fs as number);
     return fs.length ? Math.min(...fs) : null;
   });
-  const counted = rows.filter((r) => r.counts && r.fs !== null);
+  // A standing arch's snap-through row (FS 1) never governs (check-table.ts governingRow).
+  const counted = rows.filter((r) => r.counts && r.fs !== null && !(r.mode === 'snapThrough' && r.fs > 0));
   return {
     modeFs,
     governingFs: Math.min(Infinity, ...counted.map((r) => r.fs as number)),

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { smallestStandingPressure, largestSquareSpacing, shortestBoltLength } from '../../src/mechanics/support-search';
+import { smallestStandingPressure, largestSquareSpacing, shortestBoltLength, refineCrossing } from '../../src/mechanics/support-search';
 import { boltSuspension } from '../../src/mechanics/suspension';
 import { boltAnchorage } from '../../src/mechanics/bolt-anchorage';
 import { elasticBeam } from '../../src/mechanics/beam';
@@ -110,5 +110,41 @@ describe('shortestBoltLength — (c) of METHODS §12', () => {
     expect(() => shortestBoltLength(() => true, { min: 0, max: 2 })).toThrow(/min/);
     expect(() => shortestBoltLength(() => true, { min: 1, max: 0.5 })).toThrow(/max/);
     expect(() => shortestBoltLength(() => true, { min: 1, max: 2, step: 0 })).toThrow(/step/);
+  });
+});
+
+describe('refineCrossing — margin-guided narrowing of a pass/fail bracket', () => {
+  // Bolt FS = 100 kN / (12.5 kPa · S²) against 1.5: crosses at S = √(100/18.75) = 2.3094 m (statics, METHODS §12).
+  const bolt = (S: number) => {
+    const margin = 100 / (12.5 * S * S) / 1.5;
+    return { passes: margin >= 1, margin };
+  };
+  it('lands on a power-law crossing in a few trials, passing end within the tolerance', () => {
+    let calls = 0;
+    const counted = (S: number) => { calls++; return bolt(S); };
+    const S = refineCrossing(counted, 2.25, bolt(2.25), 3, bolt(3), 1e-2, true);
+    const exact = Math.sqrt(100 / 18.75);
+    expect(S).toBeLessThanOrEqual(exact);
+    expect(exact - S).toBeLessThanOrEqual(1e-2);
+    expect(calls).toBeLessThanOrEqual(3); // bisection of 0.75 m to 1 cm takes 7
+  });
+
+  it('a margin that jumps (or tells nothing) still gives the crossing to the tolerance (property)', () => {
+    fc.assert(fc.property(fc.double({ min: 0.31, max: 2.99, noNaN: true }), fc.double({ min: 0.01, max: 100, noNaN: true }), fc.boolean(), (x0, jump, useless) => {
+      // passes below x0; the margin is a step (jump) or infinite (no slope at all)
+      const probe = (x: number) => ({ passes: x <= x0, margin: useless ? Infinity : x <= x0 ? 1 + jump : 1 / (1 + jump) });
+      const x = refineCrossing(probe, 0.3, probe(0.3), 3, probe(3), 1e-3, true);
+      expect(x).toBeLessThanOrEqual(x0);
+      expect(x0 - x).toBeLessThanOrEqual(1e-3);
+    }), { numRuns: 200 });
+  });
+
+  it('works with the pass end above the fail end (smallest pressure) on a linear axis', () => {
+    // passes for p ≥ 11 805.56 Pa, margin linear in p (closed form of the first test above)
+    const p0 = 12.5e3 - (50e3 * 2 * 0.25) / 36;
+    const probe = (p: number) => ({ passes: p >= p0, margin: Math.max(1e-9, 1 + (p - p0) / 1e4) });
+    const p = refineCrossing(probe, 12.5e3, probe(12.5e3), 0, probe(0), 10);
+    expect(p).toBeGreaterThanOrEqual(p0);
+    expect(p - p0).toBeLessThanOrEqual(10);
   });
 });

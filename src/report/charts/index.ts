@@ -11,3 +11,4 @@ export { escapeXml, PALETTE } from './svg';
 export { fsHistogramSvg, type FsHistogramOptions } from './fs-histogram';
 export { sensitivitySvg } from './sensitivity';
 export { searchCurveSvg, type SearchCurveOptions } from './search-curve';
+export { pfSpanSvg, type PfSpanOptions } from './pf-span';

@@ -2,7 +2,7 @@
  * `<lamina-app>`: the worksheet shell. Holds the store (the one place the analysis runs),
  * forwards the components' events to it, and lays out the sheet top to bottom:
  * caution · verdict · 1 Opening and loads · 2 Strata · 3 Lab tests · 4 Strength chain ·
- * 5 Checks · 6 Support · 7 Span and thickness · 8 Report. Results elements (sections 4–8, the trace dialog)
+ * 5 Checks · 6 Support · 7 Span and thickness · 8 Uncertainty (a study run in a worker) · 9 Report. Results elements (sections 4–9, the trace dialog)
  * are rendered by tag; if one is not registered the page still works (it stays empty).
  *
  * Under the project bar it warns of demo text left in a changed project (with a one-click
@@ -34,6 +34,9 @@ import './caution-banner';
 import './verdict-line';
 import './project-bar';
 import './verdict-chip';
+import '../uncertainty/uncertainty-section';
+import { workerRunner } from '../uncertainty/worker-runner';
+import type { UncertaintyRunner } from '../compute/types';
 
 const SECTIONS = [
   { id: 'opening', title: 'Opening and loads' },
@@ -43,6 +46,7 @@ const SECTIONS = [
   { id: 'checks', title: 'Checks' },
   { id: 'support', title: 'Support' },
   { id: 'span', title: 'Span and thickness' },
+  { id: 'uncertainty', title: 'Uncertainty' },
   { id: 'report', title: 'Report' },
 ] as const;
 
@@ -64,6 +68,8 @@ export class LaminaApp extends LitElement {
   store!: ProjectStore;
   state!: AppState;
   tracePath: string | null = null;
+  /** Runs the uncertainty study off the main thread (a worker, started on the first run). */
+  runner: UncertaintyRunner = workerRunner();
   private unsubscribe: (() => void) | null = null;
   private lastAnalysis: unknown = null;
   private traceOpener: HTMLElement | null = null;
@@ -259,6 +265,11 @@ export class LaminaApp extends LitElement {
       section.print {
         content-visibility: auto;
         contain-intrinsic-size: auto 900px;
+      }
+      /* The uncertainty section updates while off screen (a run's progress and result); chromium
+         left its updated parts without layout boxes under content-visibility: auto. */
+      section.study {
+        content-visibility: visible;
       }
       section > h2 {
         scroll-margin-top: 9rem;
@@ -662,8 +673,12 @@ export class LaminaApp extends LitElement {
         ></span-finder-view>
         <beam-charts-view .project=${p} .analysis=${s.analysis} .units=${s.units} .chart=${s.chart} .chartLayer=${s.chartLayer}></beam-charts-view>
       </section>
+      <section class="results study" aria-labelledby="uncertainty-h">
+        ${this.heading(SECTIONS.findIndex((x) => x.id === 'uncertainty') + 1)}
+        <uncertainty-section .project=${p} .runner=${this.runner} .units=${s.units} .fieldErrors=${s.fieldErrors}></uncertainty-section>
+      </section>
       <section class="print" aria-labelledby="report-h">
-        ${this.heading(8)}
+        ${this.heading(SECTIONS.findIndex((x) => x.id === 'report') + 1)}
         <report-view .project=${p} .analysis=${this.reportAnalysis(s)} .curve=${s.curve} .units=${s.units}></report-view>
       </section>
       <trace-dialog .report=${report} .path=${this.tracePath ?? ''} .units=${s.units} ?open=${this.tracePath !== null}></trace-dialog>
