@@ -604,7 +604,7 @@ export class LaminaApp extends LitElement {
         ? html`<p class="stale-note" role="status"><span class="stale-word">Stale</span>results are for the last accepted values; a field above holds a refused value.</p>`
         : nothing;
     const mark = (RESULT_SECTIONS as readonly string[]).includes(s.id) ? html` <span class="busy-mark" aria-hidden=${busy ? 'false' : 'true'}>updating…</span>` : nothing;
-    // An overhang is not a span: section 7 says so for a cantilever.
+    // An overhang is not a span: the span section says so for a cantilever.
     const title = s.id === 'span' && this.state?.project.opening.type === 'cantilever' ? 'Overhang and thickness' : s.title;
     return html`<h2 id="${s.id}-h" tabindex="-1" aria-busy=${busy ? 'true' : 'false'}><span class="num-badge">${n}</span> ${title}${mark}</h2>${stale}`;
   }
