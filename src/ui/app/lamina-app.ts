@@ -34,7 +34,6 @@ import './caution-banner';
 import './verdict-line';
 import './project-bar';
 import './verdict-chip';
-import '../uncertainty/uncertainty-section';
 import { workerRunner } from '../uncertainty/worker-runner';
 import type { UncertaintyRunner } from '../compute/types';
 
@@ -397,6 +396,9 @@ export class LaminaApp extends LitElement {
         } catch {
           /* the timeline is optional */
         }
+        // The uncertainty section (far down the sheet) is not in the first load: its element
+        // is defined once the first results are on screen, and upgrades in place.
+        void import('../uncertainty/uncertainty-section');
       }, 0);
     }
     try {
