@@ -19,6 +19,8 @@ export interface DesignChartOptions {
   units: UnitSystem;
   currentSpan_m?: number;
   currentThickness_m?: number;
+  /** The opening's word for its length: "span" (default) or "overhang". */
+  spanWord?: string;
   width?: number;
   height?: number;
   title?: string;
@@ -126,7 +128,7 @@ export function designChartSvg(chart: DesignChart, mode: Mode, options: DesignCh
   });
   parts.push(`<rect x="${num(left)}" y="${num(top)}" width="${num(right - left)}" height="${num(bottom - top)}" fill="none" stroke="${INK.axis}" stroke-width="1"/>`);
 
-  parts.push(axis({ scale: x, orient: 'bottom', at: bottom, label: axisLabel('Span', len.unit), ticks: 7 }));
+  parts.push(axis({ scale: x, orient: 'bottom', at: bottom, label: axisLabel((options.spanWord ?? 'span').replace(/^./, (c) => c.toUpperCase()), len.unit), ticks: 7 }));
   parts.push(axis({ scale: y, orient: 'left', at: left, label: axisLabel('Thickness', len.unit), ticks: 6 }));
 
   // With support: the largest span meeting every counted check against thickness, with and without it.
@@ -197,8 +199,8 @@ export function designChartSvg(chart: DesignChart, mode: Mode, options: DesignCh
     `<pattern id="${ID}na" patternUnits="userSpaceOnUse" width="8" height="8">` +
     `<rect width="8" height="8" fill="#eeeeee"/><path d="M0,4H8M4,0V8" stroke="#bbbbbb" stroke-width="0.8"/></pattern>`;
   const desc =
-    `${MODE_NAME[mode]} of layer ${chart.layer + 1} over spans ${formatValue(X[0])} to ${formatValue(X[nx - 1])} ${len.unit} ` +
+    `${MODE_NAME[mode]} of layer ${chart.layer + 1} over ${options.spanWord ?? 'span'}s ${formatValue(X[0])} to ${formatValue(X[nx - 1])} ${len.unit} ` +
     `and thicknesses ${formatValue(Y[0])} to ${formatValue(Y[ny - 1])} ${len.unit}; FS/target from ${formatValue(vMin)} to ${formatValue(vMax)}.` +
-    (sc ? ' Also the largest span meeting every counted check against thickness, with this support and without it.' : '');
+    (sc ? ` Also the largest ${options.spanWord ?? 'span'} meeting every counted check against thickness, with this support and without it.` : '');
   return svgDocument({ width, height, title, desc, defs, body: parts.join(''), className: 'lamina-chart design-chart' });
 }

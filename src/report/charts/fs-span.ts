@@ -217,7 +217,7 @@ export function fsSpanSvg(curve: SpanCurve, maxSpan: MaxSpanReport | null, optio
     `FS divided by its target against ${word} from ${formatValue(X[0])} to ${formatValue(xMax)} ${len.unit}, log scale; ` +
     `current ${word} ${formatValue(len.convert(curve.currentSpan_m))} ${len.unit}.` +
     (LINE_MODES.some(notCounted) ? ` Not counted at the current ${word}: ${LINE_MODES.filter(notCounted).map((m) => MODE_NAME[m]).join(', ')}.` : '') +
-    (spanList ? ` Largest spans: ${spanList}.` : '') +
+    (spanList ? ` Largest ${word === 'span' ? 'spans' : `${word}s`}: ${spanList}.` : '') +
     (maxSpan && maxSpan.governing !== null ? ` Governing ${formatValue(len.convert(maxSpan.governing))} ${len.unit}.` : '') +
     (sc ? ' Also the least FS/target over every counted check, with this support and unsupported.' : '');
   return svgDocument({ width, height, title, desc, defs, body: parts.join(''), className: 'lamina-chart fs-span' });

@@ -5,7 +5,9 @@
  * at the axis floor as an open marker and its interval's upper end (3/N) still shows. The
  * project's acceptable P_f, when given, is a dashed line. Spans in m, displayed in `units`.
  */
-import { area, line as d3line, max, min, scaleLinear, scaleLog } from 'd3';
+import { max, min } from 'd3-array';
+import { scaleLinear, scaleLog } from 'd3-scale';
+import { area, line as d3line } from 'd3-shape';
 import type { UncertaintyReport } from '../../model/types';
 import type { UnitSystem } from '../../model/units';
 import { INK, PALETTE, axis, axisLabel, displayUnit, emptyNote, formatValue, line, marker, num, svgDocument, text } from './svg';

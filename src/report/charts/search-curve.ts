@@ -4,7 +4,7 @@
  * (least fc) as a filled diamond with its value. Axes in the trace's units (n, MPa).
  *     searchCurveSvg(entry.steps) // '<svg …>'
  */
-import { scaleLinear } from 'd3';
+import { scaleLinear } from 'd3-scale';
 import type { TraceSteps } from '../../model/types';
 import { numberText } from '../number-text';
 import { INK, PALETTE, axis, emptyNote, line, marker, num, svgDocument, text } from './svg';

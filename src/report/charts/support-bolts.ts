@@ -9,7 +9,7 @@
  * the pattern. One scale for both directions when the span and the strata fit at a readable
  * size; otherwise the span has its own horizontal scale, and the drawing says so.
  */
-import { scaleLinear } from 'd3';
+import { scaleLinear } from 'd3-scale';
 import type { Project, Report } from '../../model/types';
 import type { UnitSystem } from '../../model/units';
 import { ID, INK, PALETTE, axis, axisLabel, dimension, displayUnit, emptyNote, escapeXml, formatValue, legend, line, num, svgDocument, text } from './svg';

@@ -34,7 +34,6 @@ import './caution-banner';
 import './verdict-line';
 import './project-bar';
 import './verdict-chip';
-import '../uncertainty/uncertainty-section';
 import type { UncertaintyRunner } from '../compute/types';
 
 const SECTIONS = [
@@ -396,6 +395,9 @@ export class LaminaApp extends LitElement {
         } catch {
           /* the timeline is optional */
         }
+        // The uncertainty section (far down the sheet) is not in the first load: its element
+        // is defined once the first results are on screen, and upgrades in place.
+        void import('../uncertainty/uncertainty-section');
       }, 0);
     }
     try {
@@ -603,7 +605,9 @@ export class LaminaApp extends LitElement {
         ? html`<p class="stale-note" role="status"><span class="stale-word">Stale</span>results are for the last accepted values; a field above holds a refused value.</p>`
         : nothing;
     const mark = (RESULT_SECTIONS as readonly string[]).includes(s.id) ? html` <span class="busy-mark" aria-hidden=${busy ? 'false' : 'true'}>updating…</span>` : nothing;
-    return html`<h2 id="${s.id}-h" tabindex="-1" aria-busy=${busy ? 'true' : 'false'}><span class="num-badge">${n}</span> ${s.title}${mark}</h2>${stale}`;
+    // An overhang is not a span: the span section says so for a cantilever.
+    const title = s.id === 'span' && this.state?.project.opening.type === 'cantilever' ? 'Overhang and thickness' : s.title;
+    return html`<h2 id="${s.id}-h" tabindex="-1" aria-busy=${busy ? 'true' : 'false'}><span class="num-badge">${n}</span> ${title}${mark}</h2>${stale}`;
   }
 
   override render() {

@@ -8,8 +8,6 @@
 import { analyse, designChart, minimumThickness, spanCurve } from '../../analysis/index';
 import { supportNeeded } from '../../analysis/support-needed';
 import type { Project, UncertaintyReport } from '../../model/types';
-import { drainAsync } from '../../uncertainty/monte-carlo';
-import { uncertaintySteps } from '../../uncertainty/run';
 import { errorText } from './errors';
 import { analysisJob, chartJob, supportJob, type AnalysisFunctions } from './jobs';
 import type { UncertaintyRunRequest } from './types';
@@ -30,11 +28,13 @@ export { errorText, analysisJob, chartJob, supportJob, type AnalysisFunctions };
  * so the caller's event loop turns (a cancel message, progress posts). Resolves `undefined`
  * when `stopped()` turned true; rejects with the run's error (e.g. a bad variable's path).
  */
-export function uncertaintyJob(
+export async function uncertaintyJob(
   project: Project,
   request: UncertaintyRunRequest,
   hooks: { onProgress?: (done: number, total: number) => void; stopped: () => boolean; pause?: () => Promise<void> },
 ): Promise<UncertaintyReport | undefined> {
+  // The uncertainty code is a chunk of its own: only a worker that runs a study loads it.
+  const [{ uncertaintySteps }, { drainAsync }] = await Promise.all([import('../../uncertainty/run'), import('../../uncertainty/monte-carlo')]);
   const steps = uncertaintySteps(project, {
     samples: request.samples,
     seed: request.seed,
