@@ -6,7 +6,7 @@
  * Every mode's FS is drawn; `counts` says which modes count for the layer at the project's
  * span and thickness (the check table's rule, METHODS §10). With support, `support` gives the
  * largest span meeting every counted check (whole check table) against this layer's thickness,
- * with the support as given and without it (8 thicknesses).
+ * with the support as given and without it (6 thicknesses).
  */
 import type { Design, Mode, Project } from '../model/types';
 import { MODES } from './check-labels';
@@ -17,7 +17,7 @@ import type { DesignChart, DesignSupportCurve } from './types';
 import { supportSpanByThickness } from './support-needed';
 
 /** Thicknesses at which the with/without-support curves are found (each a span search per case). */
-const SUPPORT_THICKNESSES = 8;
+const SUPPORT_THICKNESSES = 6;
 
 /** FS per mode of one layer state; null where the mode does not apply (snap-through: 1 stands, 0 snaps). */
 function layerFs(layer: LayerState, design: Design): Record<Mode, number | null> {

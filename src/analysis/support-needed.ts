@@ -262,14 +262,14 @@ export function supportMarginCurve(project: Project, spans_m: readonly number[],
  * For the design chart: at each thickness of layer `layerIndex`, the largest span in
  * [spans_m[0], spans_m[last]] (entered scale) at which every counted check meets its target,
  * with the support as given and without it; strength chains held at the project's span for each
- * thickness; the crossing refined to 1/200 of the range (the range's ends are tried first, and
+ * thickness; the crossing refined to 1/100 of the range (the range's ends are tried first, and
  * the checks are taken to fall with span between them, as the chart draws them).
  */
 export function supportSpanByThickness(
   project: Project, layerIndex: number, thicknesses_m: readonly number[], spanRange: readonly [number, number],
 ): { withSupport_m: (number | null)[]; unsupported_m: (number | null)[] } {
   const [lo, hi] = spanRange;
-  const tolerance = (hi - lo) / 200;
+  const tolerance = (hi - lo) / 100;
   const largest = (p: Project): number | null => {
     const chains = evaluate(projectToSI(p)).layers.map((l) => l.chain);
     const at = (s: number) => probeOf(withSpan(p, s), chains);

@@ -34,7 +34,6 @@ import './caution-banner';
 import './verdict-line';
 import './project-bar';
 import './verdict-chip';
-import { workerRunner } from '../uncertainty/worker-runner';
 import type { UncertaintyRunner } from '../compute/types';
 
 const SECTIONS = [
@@ -70,8 +69,8 @@ export class LaminaApp extends LitElement {
   store!: ProjectStore;
   state!: AppState;
   tracePath: string | null = null;
-  /** Runs the uncertainty study off the main thread (a worker, started on the first run). */
-  runner: UncertaintyRunner = workerRunner();
+  /** Runs the uncertainty study off the main thread: main.ts passes the compute client's runner (its run worker). */
+  runner: UncertaintyRunner | null = null;
   private unsubscribe: (() => void) | null = null;
   private lastAnalysis: unknown = null;
   private firstResultsMarked = false;
