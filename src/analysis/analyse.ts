@@ -231,7 +231,7 @@ function layerResults(p: ProjectSI, state: State, i: number, ls: LayerState, tra
     warnings.push({
       code: 'DEEP_BEAM',
       path: `${base}.thickness_m`,
-      message: `${layer.name}: span/thickness ${round(slenderness)} ≤ ${DEEP_BEAM_RATIO}, a deep beam: beam theory and the voussoir arch assume a slender layer, so its beam${state.ends === 'cantilever' ? '' : ' and voussoir'} results are approximate.` +
+      message: `${layer.name}: ${state.ends === 'cantilever' ? 'overhang' : 'span'}/thickness ${round(slenderness)} ≤ ${DEEP_BEAM_RATIO}, a deep beam: beam theory and the voussoir arch assume a slender layer, so its beam${state.ends === 'cantilever' ? '' : ' and voussoir'} results are approximate.` +
         (block ? ` With s/t < ${BLOCK_RATIO} it is a block rather than a beam: its voussoir checks are shown but not counted. A block cut by joints must be checked as a block (joint geometry, in-situ stress), which Lamina does not model.` : ''),
     });
   }

@@ -25,6 +25,17 @@ export const MODE_LABEL: Record<CheckMode, string> = {
   interlayerShear: 'interlayer shear (beam building)',
 };
 
+/**
+ * The row label for an opening type: an overhang (cantilever) has one root and no arch, so its
+ * (not applicable) voussoir rows speak of joint sliding and deflection, not of abutments or midspan.
+ *     modeLabel('sliding', 'cantilever') // "joint sliding (voussoir arch)"
+ */
+export function modeLabel(mode: CheckMode, openingType: string): string {
+  if (openingType === 'cantilever' && mode === 'sliding') return 'joint sliding (voussoir arch)';
+  if (openingType === 'cantilever' && mode === 'deflection') return 'deflection δ/t (voussoir arch)';
+  return MODE_LABEL[mode];
+}
+
 /** Table order of the support modes (after the layer modes). */
 export const SUPPORT_MODES: readonly CheckMode[] = ['bolt', 'skin', 'interlayerShear'];
 
@@ -39,6 +50,13 @@ export const MODE_NAME: Record<CheckMode, string> = {
   skin: 'the skin between bolts',
   interlayerShear: 'the interlayer shear of the bolted beam',
 };
+
+/** The name inside a sentence for an opening type (an overhang has no abutments). */
+export function modeName(mode: CheckMode, openingType: string): string {
+  if (openingType === 'cantilever' && mode === 'sliding') return 'joint sliding';
+  if (openingType === 'cantilever' && mode === 'deflection') return 'deflection';
+  return MODE_NAME[mode];
+}
 
 /** Short names for chart labels and legends. */
 export const MODE_SHORT: Record<CheckMode, string> = {

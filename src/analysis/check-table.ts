@@ -183,7 +183,7 @@ export function checkTable(p: ProjectSI, state: State): CheckRow[] {
     const sh = Math.max(0, p.horizontalStress) * MPa;
     const crushNote = `arch thrust fc${sh > 0 ? ` + σh ${+sh.toPrecision(3)} MPa` : ''} against the ${p.design.crushingStrength === 'lab' ? 'UCS as given' : 'rock-mass UCS σci·s^a'}`;
     push('crushing', v && !snapped ? (v.crushingDemand ?? 0) * MPa : null, v ? ls.crushingStrength * MPa : null, 'MPa', valueWhy, crushNote);
-    push('sliding', null, null, null, valueWhy, 'FS = fc·n·tanφ/(γ′·s), friction on the cross-joints at the abutment');
+    push('sliding', null, null, null, valueWhy, `FS = fc·n·tanφ/(γ′·s), friction on the cross-joints at the ${cantilever ? 'support' : 'abutment'}`);
     const ratio = v && !snapped ? v.deflectionRatio : null;
     push('deflection', ratio, v && !snapped ? limit : null, 'ratio', valueWhy, 'FS = limit/(δ/t), target 1');
     push('snapThrough', null, null, null, archWhy,

@@ -4,14 +4,20 @@
  * the block size, cross-jointing and load sharing depend on both). For a slab the aspect ratio
  * is held fixed; for an intersection the spans are entry widths (the diagonal is analysed).
  * Every mode's FS is drawn; `counts` says which modes count for the layer at the project's
- * span and thickness (the check table's rule, METHODS §10).
+ * span and thickness (the check table's rule, METHODS §10). With support, `support` gives the
+ * largest span meeting every counted check (whole check table) against this layer's thickness,
+ * with the support as given and without it (6 thicknesses).
  */
 import type { Design, Mode, Project } from '../model/types';
 import { MODES } from './check-labels';
 import { countedModesAt, deflectionFs, targetFor } from './check-table';
 import { chainFor, evaluate, layerLoads, layerState, moduliFor, type LayerState } from './evaluate';
 import { projectToSI, type ProjectSI } from './inputs';
-import type { DesignChart } from './types';
+import type { DesignChart, DesignSupportCurve } from './types';
+import { supportSpanByThickness } from './support-needed';
+
+/** Thicknesses at which the with/without-support curves are found (each a span search per case). */
+const SUPPORT_THICKNESSES = 6;
 
 /** FS per mode of one layer state; null where the mode does not apply (snap-through: 1 stands, 0 snaps). */
 function layerFs(layer: LayerState, design: Design): Record<Mode, number | null> {
@@ -73,5 +79,11 @@ export function designChart(project: Project, layerIndex: number, options: { spa
   }
   const targets = Object.fromEntries(MODES.map((m) => [m, targetFor(m, p.design)])) as DesignChart['targets'];
   const counts = countedModesAt(p, evaluate(p))[layerIndex];
-  return { layer: layerIndex, spans_m: spans, thicknesses_m: thicknesses, fs, targets, counts };
+  let support: DesignSupportCurve | null = null;
+  if (project.support.bolts || project.support.standing_kPa > 0) {
+    const n = Math.min(SUPPORT_THICKNESSES, thicknesses.length);
+    const at = Array.from({ length: n }, (_, k) => thicknesses[Math.round((k * (thicknesses.length - 1)) / Math.max(1, n - 1))]);
+    support = { thicknesses_m: at, ...supportSpanByThickness(project, layerIndex, at, [Math.min(...spans), Math.max(...spans)]) };
+  }
+  return { layer: layerIndex, spans_m: spans, thicknesses_m: thicknesses, fs, targets, counts, support };
 }

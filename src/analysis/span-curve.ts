@@ -4,6 +4,8 @@
  * A mode counted in some layer at the current span is drawn over those layers (`counts` true);
  * a mode counted nowhere (e.g. the voussoir reserve of an uncracked roof) is drawn over every
  * layer where it applies, with `counts` false, so the chart can say it does not count.
+ * With support (bolts or standing support) it also gives the governing FS/target of the whole
+ * check table with the support as given and without it (`support`, 24 spans).
  */
 import type { Mode, Project } from '../model/types';
 import { MODES } from './check-labels';
@@ -11,7 +13,11 @@ import { countedModesAt, layerCondition, targetFor } from './check-table';
 import { evaluate } from './evaluate';
 import { projectToSI } from './inputs';
 import { spanFsFunction, SPAN_CAP_M, type SpanInclude } from './span-finder';
-import type { SpanCurve } from './types';
+import type { SpanCurve, SupportCurve } from './types';
+import { supportMarginCurve } from './support-needed';
+
+/** Samples of the with/without-support curves (each sample is one check table per case). */
+const SUPPORT_SAMPLES = 24;
 
 export function spanCurve(project: Project, options: { samples?: number; maxSpan_m?: number } = {}): SpanCurve {
   const p = projectToSI(project);
@@ -38,5 +44,11 @@ export function spanCurve(project: Project, options: { samples?: number; maxSpan
     for (const m of MODES) fs[m].push(clampFs(at[m]));
   }
   const targets = Object.fromEntries(MODES.map((m) => [m, targetFor(m, p.design)])) as SpanCurve['targets'];
-  return { spans_m: spans, fs, targets, counts, currentSpan_m: entry };
+  let support: SupportCurve | null = null;
+  if (project.support.bolts || project.support.standing_kPa > 0) {
+    const n = Math.min(SUPPORT_SAMPLES, samples);
+    const at = Array.from({ length: n }, (_, k) => (top * (k + 1)) / n);
+    support = { spans_m: at, ...supportMarginCurve(project, at, state.layers.map((l) => l.chain)) };
+  }
+  return { spans_m: spans, fs, targets, counts, currentSpan_m: entry, support };
 }

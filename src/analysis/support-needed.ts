@@ -241,3 +241,50 @@ export function supportNeeded(project: Project, hints: SupportNeededHints = {}):
     reason: null,
   };
 }
+
+/**
+ * The governing FS/target of the whole check table (support rows included) against span, with
+ * the support as given and without it, strength chains held at the current span (METHODS §11);
+ * null where no check counts; capped at 1e6. For the "with this support" curve of the span
+ * finder and the report. Spans in the entered scale (entry width for an intersection).
+ */
+export function supportMarginCurve(project: Project, spans_m: readonly number[], chains?: StrengthChain[]): { withSupport: (number | null)[]; unsupported: (number | null)[] } {
+  const held = chains ?? evaluate(projectToSI(project)).layers.map((l) => l.chain);
+  const bare: Project = { ...project, support: { standing_kPa: 0, bolts: null } };
+  const at = (p: Project, s: number): number | null => {
+    const m = countedMargin(rowsOf(withSpan(p, s), held));
+    return Number.isFinite(m) ? Math.min(m, 1e6) : null;
+  };
+  return { withSupport: spans_m.map((s) => at(project, s)), unsupported: spans_m.map((s) => at(bare, s)) };
+}
+
+/**
+ * For the design chart: at each thickness of layer `layerIndex`, the largest span in
+ * [spans_m[0], spans_m[last]] (entered scale) at which every counted check meets its target,
+ * with the support as given and without it; strength chains held at the project's span for each
+ * thickness; the crossing refined to 1/100 of the range (the range's ends are tried first, and
+ * the checks are taken to fall with span between them, as the chart draws them).
+ */
+export function supportSpanByThickness(
+  project: Project, layerIndex: number, thicknesses_m: readonly number[], spanRange: readonly [number, number],
+): { withSupport_m: (number | null)[]; unsupported_m: (number | null)[] } {
+  const [lo, hi] = spanRange;
+  const tolerance = (hi - lo) / 100;
+  const largest = (p: Project): number | null => {
+    const chains = evaluate(projectToSI(p)).layers.map((l) => l.chain);
+    const at = (s: number) => probeOf(withSpan(p, s), chains);
+    const top = at(hi);
+    if (top.passes) return hi;
+    const bottom = at(lo);
+    if (!bottom.passes) return null;
+    return refineCrossing(at, lo, bottom, hi, top, tolerance, true);
+  };
+  const withThickness = (p: Project, t: number): Project => ({ ...p, layers: p.layers.map((l, i) => (i === layerIndex ? { ...l, thickness_m: t } : l)) });
+  const bareOf = (p: Project): Project => ({ ...p, support: { standing_kPa: 0, bolts: null } });
+  const fits = (p: Project) => !p.support.bolts || p.support.bolts.length_m <= p.layers.reduce((a, l) => a + l.thickness_m, 0) + 1e-9;
+  return {
+    // A thinner layer can leave a bolt longer than the strata: no anchorage there, so no value.
+    withSupport_m: thicknesses_m.map((t) => { const p = withThickness(project, t); return fits(p) ? largest(p) : null; }),
+    unsupported_m: thicknesses_m.map((t) => largest(bareOf(withThickness(project, t)))),
+  };
+}

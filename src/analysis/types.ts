@@ -107,6 +107,20 @@ export interface SpanCurve {
   counts: Record<Mode, boolean>;
   /** The entered span (entry width w1 for an intersection; `spans_m` are on the same scale). */
   currentSpan_m: number;
+  /**
+   * Where the project has support (bolts or standing support): the governing FS/target (least
+   * over every counted check of the one check table, support rows included) at `spans_m`, with
+   * the support as given and without it (no bolts, no standing support); null where nothing
+   * counts. Absent or null without support.
+   */
+  support?: SupportCurve | null;
+}
+
+/** The governing FS/target against span with and without the project's support (METHODS §12 with §11). */
+export interface SupportCurve {
+  spans_m: number[];
+  withSupport: (number | null)[];
+  unsupported: (number | null)[];
 }
 
 /** Stress and deflection along the span of one layer (elastic beam). */
@@ -130,6 +144,20 @@ export interface DesignChart {
   targets: Record<Mode, number>;
   /** Whether the mode counts for this layer at the project's span and thickness (check table). */
   counts: Record<Mode, boolean>;
+  /**
+   * Where the project has support: at some thicknesses of this layer, the largest span in the
+   * chart's range at which every counted check of the whole check table meets its target, with
+   * the support as given and without it (null: none in the range passes; the top of the range
+   * where all of it passes). Absent or null without support.
+   */
+  support?: DesignSupportCurve | null;
+}
+
+/** Largest passing span against the layer's thickness, with and without the project's support. */
+export interface DesignSupportCurve {
+  thicknesses_m: number[];
+  withSupport_m: (number | null)[];
+  unsupported_m: (number | null)[];
 }
 
 /** Bending-stress field over a slab (for contour plots). */

@@ -3,7 +3,7 @@ import type { Analysis } from '../analysis/types';
 import type { MaxSpanReport, Project, Report } from '../model/types';
 import { CAUTION } from '../model/caution';
 import { formatQuantity, type UnitSystem } from '../model/units';
-import { MODE_LABEL, STATUS_TEXT } from '../analysis/check-labels';
+import { modeLabel, STATUS_TEXT } from '../analysis/check-labels';
 import { buildVerdict } from '../analysis/verdict';
 import { numberText } from '../report/number-text';
 
@@ -121,7 +121,7 @@ export function checkText(project: Project, analysis: Analysis, units: UnitSyste
     for (const row of r.checks.filter((x) => x.layerIndex === i)) {
       const governs = g !== null && g.layerIndex === row.layerIndex && g.mode === row.mode;
       const why = row.reason ? `  (${row.reason})` : '';
-      lines.push(`  ${pad(MODE_LABEL[row.mode], 42)}${pad(fs(row.fs), 9)}${pad(numberText(row.target, 3), 8)}${STATUS_TEXT[row.status]}${governs ? '  ← governing' : why}`);
+      lines.push(`  ${pad(modeLabel(row.mode, r.opening.type), 42)}${pad(fs(row.fs), 9)}${pad(numberText(row.target, 3), 8)}${STATUS_TEXT[row.status]}${governs ? '  ← governing' : why}`);
     }
     lines.push('');
   });

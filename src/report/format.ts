@@ -34,7 +34,9 @@ export function titleWithUnit(title: string, quantity: Quantity, units: UnitSyst
 export const fsText = (fs: number | null | undefined): string => numberText(fs);
 
 /** Which display quantity a trace unit belongs to (null: show as traced only). */
-export function quantityOfUnit(unit: string): Quantity | null {
+export function quantityOfUnit(unit: string, path = ''): Quantity | null {
+  // A bolt's forces (support.bolts.*) show in kips in US units; specimen loads in lbf.
+  if (path.startsWith('support.') && unit.replace(/\s+/g, '') === 'kN') return 'boltForce';
   switch (unit.replace(/\s+/g, '')) {
     case 'm': return 'length';
     case 'mm': return 'smallLength';

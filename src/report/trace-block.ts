@@ -32,7 +32,7 @@ export function traceBlock(entry: TraceEntry, units: UnitSystem): FormulaBlock {
     return `${symbolText(n)} = ${withUnit(numberText(v.value, PRECISION.trace), v.unit)}`;
   });
   let result = withUnit(numberText(entry.result, PRECISION.trace), entry.unit);
-  const quantity = quantityOfUnit(entry.unit);
+  const quantity = quantityOfUnit(entry.unit, entry.path);
   if (units === 'US' && quantity !== null) result += ` (= ${quantityText(entry.result, quantity, 'US')})`;
   const block: FormulaBlock = {
     kind: 'formula',

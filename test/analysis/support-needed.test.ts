@@ -24,7 +24,11 @@ import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { analyse, analyseWithSupportNeeded } from '../../src/analysis/analyse';
-import { NO_SUPPORT_NEEDED, supportNeeded, supportPasses } from '../../src/analysis/support-needed';
+import { NO_SUPPORT_NEEDED, supportMarginCurve, supportNeeded, supportPasses } from '../../src/analysis/support-needed';
+import { spanCurve } from '../../src/analysis/span-curve';
+import { designChart } from '../../src/analysis/design-chart';
+import { evaluate } from '../../src/analysis/evaluate';
+import { projectToSI } from '../../src/analysis/inputs';
 import { readProjectText } from '../../src/model/project-file';
 import { defaultProject } from '../../src/model/defaults';
 import type { BoltPattern, CheckRow, Project } from '../../src/model/types';
@@ -241,4 +245,54 @@ describe('support properties at the analysis level', () => {
         expect((r.support?.bolts?.load_kN as number) / (s * s)).toBeCloseTo(hanging, 8);
       }), { numRuns: 40 });
   }, 120_000);
+});
+
+describe('the "with this support" curve of the span curve', () => {
+  it('is the least FS/target of the whole check table: at the given span it equals the analysis; it crosses 1 at the largest span with the support', () => {
+    const p = bolted(7);
+    const c = spanCurve(p);
+    const sc = c.support!;
+    expect(sc.spans_m).toHaveLength(24);
+    const margin = (rows: CheckRow[]) => Math.min(...rows.filter((r) => r.counts && r.fs !== null).map((r) => (r.fs as number) / r.target));
+    // evaluate the curve's own function at the given span: the same check table as the analysis
+    const at7 = supportMarginCurve(p, [7]);
+    expect(at7.withSupport[0]).toBeCloseTo(margin(analyse(p).report.checks), 12);
+    expect(at7.unsupported[0]).toBeCloseTo(margin(analyse({ ...p, support: { standing_kPa: 0, bolts: null } }).report.checks), 12);
+    const max = supportNeeded(p).needed!.maxSpan_m!;
+    sc.spans_m.forEach((s, i) => {
+      if (s < max - 0.01) expect(sc.withSupport[i]!).toBeGreaterThanOrEqual(1 - 1e-9);
+      if (s > max + 0.01) expect(sc.withSupport[i]!).toBeLessThan(1);
+    });
+    // the unbolted roof fails at 7 m (the shale's tension), the bolted one passes there
+    expect(at7.unsupported[0]!).toBeLessThan(1);
+    expect(at7.withSupport[0]!).toBeGreaterThanOrEqual(1);
+  });
+
+  it('is absent without support', () => {
+    expect(spanCurve({ ...bolted(7), support: { standing_kPa: 0, bolts: null } }).support).toBe(null);
+  });
+});
+
+describe('the design chart with this support', () => {
+  it('gives, per thickness, a span that passes with the support (and one 1/100 of the range longer that does not)', () => {
+    const p = bolted(7);
+    const chart = designChart(p, 1);
+    const sc = chart.support!;
+    expect(sc.thicknesses_m).toHaveLength(6);
+    const hi = Math.max(...chart.spans_m);
+    const tol = (hi - Math.min(...chart.spans_m)) / 100;
+    for (const k of [0, 2, 5]) {
+      const t = sc.thicknesses_m[k];
+      const pt: Project = { ...p, layers: p.layers.map((l, i) => (i === 1 ? { ...l, thickness_m: t } : l)) };
+      const chains = evaluate(projectToSI(pt)).layers.map((l) => l.chain);
+      const at = (q: Project, s: number) => supportPasses({ ...q, opening: { ...q.opening, span_m: s } }, chains);
+      for (const [q, s] of [[pt, sc.withSupport_m[k]], [{ ...pt, support: { standing_kPa: 0, bolts: null } }, sc.unsupported_m[k]]] as const) {
+        if (s === null) continue;
+        expect(at(q, s)).toBe(true);
+        if (s < hi) expect(at(q, s + tol)).toBe(false);
+      }
+    }
+    // without support there is no such curve
+    expect(designChart({ ...p, support: { standing_kPa: 0, bolts: null } }, 1).support).toBe(null);
+  }, 60_000);
 });

@@ -27,6 +27,10 @@ const groups: [string, () => Promise<BenchResult[]>][] = [
 const uiModule = './ui.bench';
 const ui = (await import(uiModule).catch(() => null)) as { benchUi?: () => Promise<BenchResult[]> } | null;
 if (ui?.benchUi) groups.push(['web app', ui.benchUi]);
+// The uncertainty study in the app (chromium, the Vite dev server): the main thread during a run.
+const uncertaintyUiModule = './uncertainty-ui.bench';
+const uncertaintyUi = (await import(uncertaintyUiModule).catch(() => null)) as { benchUncertaintyUi?: () => Promise<BenchResult[]> } | null;
+if (uncertaintyUi?.benchUncertaintyUi) groups.push(['uncertainty in the web app', uncertaintyUi.benchUncertaintyUi]);
 
 const fmt = (us: number) => (us >= 1000 ? `${(us / 1000).toFixed(2)} ms` : `${us.toFixed(2)} µs`);
 let failed = 0;

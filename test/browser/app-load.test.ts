@@ -20,10 +20,10 @@ describe('app: first load', () => {
     const caution = await page.locator('caution-banner .text').first().textContent();
     expect(caution?.replace(/\s+/g, ' ').trim()).toBe(CAUTION);
     // every section heading is there, in order
-    const ids = ['opening', 'strata', 'lab', 'strength', 'checks', 'support', 'span', 'report'];
+    const ids = ['opening', 'strata', 'lab', 'strength', 'checks', 'support', 'span', 'uncertainty', 'report'];
     const headings: string[] = [];
     for (const id of ids) headings.push(((await page.locator(`#${id}-h`).textContent()) ?? '').replace(/\s+/g, ' ').trim());
-    expect(headings).toEqual(['1 Opening and loads', '2 Strata', '3 Lab tests', '4 Strength chain', '5 Checks', '6 Support', '7 Span and thickness', '8 Report']);
+    expect(headings).toEqual(['1 Opening and loads', '2 Strata', '3 Lab tests', '4 Strength chain', '5 Checks', '6 Support', '7 Span and thickness', '8 Uncertainty', '9 Report']);
     expect(errors).toEqual([]);
     expect(external).toEqual([]);
     await context.close();

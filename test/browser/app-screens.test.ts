@@ -8,7 +8,7 @@ const OUT = 'test-artifacts';
 const session = appSession();
 beforeAll(() => mkdir(OUT, { recursive: true }));
 
-const SECTIONS = ['opening', 'strata', 'lab', 'strength', 'checks', 'support', 'span', 'report'];
+const SECTIONS = ['opening', 'strata', 'lab', 'strength', 'checks', 'support', 'span', 'uncertainty', 'report'];
 
 describe('app: screenshots of each section (written to test-artifacts/)', () => {
   it('top of the sheet and every section of the demo, SI and US', async () => {

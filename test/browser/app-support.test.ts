@@ -94,6 +94,11 @@ describe('app: support section', () => {
     expect([bolts.spacingAcross_m, bolts.spacingAlong_m]).toEqual([2.3, 2.3]);
     await unstick(page);
     await section(page).screenshot({ path: `${OUT}/app-support-1280.png` });
+    // the span finder's charts gain the with/without-support lines
+    const span = page.locator('lamina-app section:has(#span-h)');
+    expect(await span.locator('path.support-curve.with-support').count()).toBeGreaterThan(0);
+    expect(await span.locator('path.support-curve.unsupported').count()).toBeGreaterThan(0);
+    await span.screenshot({ path: `${OUT}/app-support-span-1280.png` });
     await page.setViewportSize({ width: 390, height: 844 });
     await section(page).screenshot({ path: `${OUT}/app-support-390.png` });
     expect(errors).toEqual([]);

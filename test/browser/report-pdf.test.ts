@@ -72,4 +72,41 @@ describe('HTML report → PDF (chromium print)', () => {
       expect(printed).toContain('Roof and overhang falls injure and kill.');
     }
   });
+
+  it('every preset: the summary (trace: false) prints on at most 4 A4 pages in SI and US; the full report adds the appendix, each trace entry once', async () => {
+    for (const name of ['coal-room-shale', 'drift-limestone', 'intersection-limestone', 'quarry-bench-overhang']) {
+      const text = presetText(name);
+      const { project } = readProjectText(text);
+      const analysis = analyse(project);
+      const curve = spanCurve(project);
+      for (const units of ['SI', 'US'] as const) {
+        for (const trace of [false, true]) {
+          const doc = buildReportDocument({ project, analysis, curve, projectText: text, units, version: '0.1.0', date: '2026-12-01', trace });
+          const page = await browser.newPage();
+          await page.setContent(renderHtml(doc), { waitUntil: 'load' });
+          const found = await page.evaluate(() => ({
+            appendix: document.querySelectorAll('section.lr-appendix').length,
+            trace: document.querySelectorAll('section.lr-section-trace').length,
+            paths: [...document.querySelectorAll('.lr-formula code')].map((c) => c.textContent ?? ''),
+            body: document.body.innerText.replace(/\s+/g, ' '),
+          }));
+          expect(found.body).toContain(CAUTION);
+          if (trace) {
+            expect(found.trace).toBe(1);
+            expect(new Set(found.paths).size).toBe(found.paths.length);
+            expect(found.paths.length).toBe(analysis.report.trace.length);
+          } else {
+            expect(found.appendix).toBe(0);
+            expect(found.paths).toEqual([]);
+            const pdf = await page.pdf({ format: 'A4', printBackground: true });
+            const pages = countPdfPages(pdf);
+            expect(pages, `${name} ${units} summary: ${pages} pages`).toBeLessThanOrEqual(4);
+            expect(pages).toBeGreaterThanOrEqual(2);
+            if (units === 'SI') writeFileSync(`test-artifacts/report-${name}-summary.pdf`, pdf);
+          }
+          await page.close();
+        }
+      }
+    }
+  });
 });

@@ -83,6 +83,28 @@ describe('<report-view> in the app (coal-room demo)', () => {
     expect(h.problems).toEqual([]);
   });
 
+  it('the trace switch: off prints the summary alone (≤ 4 A4 pages, caution kept); on adds the appendix, each trace entry once', async () => {
+    const page = await h.open();
+    await reportReady(page);
+    const frame = page.locator('report-view [data-role="report"]');
+    const s = await state(page);
+    expect(await frame.locator('section.lr-section-trace').count()).toBe(1);
+    const paths = await frame.locator('section.lr-section-trace .lr-formula code').allTextContents();
+    expect(new Set(paths).size).toBe(paths.length);
+    expect(paths.length).toBe(s.analysis.report.trace.length);
+    expect(await frame.locator('.lr-formula').count()).toBe(paths.length); // none outside the trace appendix
+    await page.locator('report-view [data-role="with-trace"]').uncheck();
+    await expect.poll(() => frame.locator('section.lr-section-trace').count(), { timeout: 10_000 }).toBe(0);
+    expect(await frame.locator('section.lr-appendix').count()).toBe(0);
+    expect((await text(frame)).replace(/\s+/g, ' ')).toContain(CAUTION);
+    const pdf = await page.pdf({ format: 'A4', printBackground: true });
+    writeFileSync(resolve(ARTIFACTS, 'results-app-summary.pdf'), pdf);
+    expect(pdfPageCount(pdf)).toBeLessThanOrEqual(4);
+    await page.locator('report-view [data-role="with-trace"]').check();
+    await expect.poll(() => frame.locator('section.lr-section-trace').count(), { timeout: 10_000 }).toBe(1);
+    expect(h.problems).toEqual([]);
+  });
+
   it('"Download HTML report" saves <title>-report.html: a whole HTML file with the caution and each layer', async () => {
     const page = await h.open();
     await reportReady(page);

@@ -42,7 +42,7 @@ describe('lamina CLI', () => {
     expect(f.out()).toMatch(/--no-trace\s+with --markdown or --html: the summary alone, without the appendix/);
     expect(f.out()).toContain(CAUTION);
   });
-  it('check --markdown --no-trace prints the summary with both cautions and no appendix; without it the trace appendix is there, each entry once', async () => {
+  it('check --markdown --no-trace prints the summary with both cautions and no appendix; without it the trace appendix is there, each entry once', { timeout: 60_000 }, async () => {
     const file = presetFiles().find((x) => x.includes('coal-room'))!;
     const full = fakeIo();
     await run(['check', file, '--markdown'], full.io);
@@ -59,7 +59,7 @@ describe('lamina CLI', () => {
     expect(new Set(paths).size).toBe(paths.length);
     expect(short.out().length).toBeLessThan(full.out().length / 3);
   });
-  it('check --html OUT --no-trace writes the summary; --no-trace alone is a usage error (exit 2)', async () => {
+  it('check --html OUT --no-trace writes the summary; --no-trace alone is a usage error (exit 2)', { timeout: 60_000 }, async () => {
     const file = presetFiles().find((x) => x.includes('coal-room'))!;
     const f = fakeIo();
     await run(['check', file, '--html', 'out.html', '--no-trace'], f.io);

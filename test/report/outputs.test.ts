@@ -6,7 +6,7 @@ import { buildReportDocument } from '../../src/report/report-document';
 import { renderMarkdown } from '../../src/report/render-markdown';
 import { escapeHtml, renderHtml, renderHtmlBody, REPORT_CSS } from '../../src/report/render-html';
 import { resultsCsv, spanCurveCsv } from '../../src/report/results-csv';
-import { MODES, MODE_LABEL } from '../../src/analysis/check-labels';
+import { MODES, modeLabel } from '../../src/analysis/check-labels';
 import { expectClose } from '../helpers/expect-close';
 import { HOSTILE, allCases, hostileCase, presetCase, type Case } from './fixtures';
 
@@ -59,8 +59,8 @@ describe('every output', () => {
         expect(text).toContain(layer.name);
       }
       for (const m of MODES) {
-        expect(md).toContain(MODE_LABEL[m]);
-        expect(text).toContain(MODE_LABEL[m]);
+        expect(md).toContain(modeLabel(m, c.project.opening.type));
+        expect(text).toContain(modeLabel(m, c.project.opening.type));
       }
       const mdAt = titles.map((t) => md.indexOf(`## ${t}`));
       const htmlAt = titles.map((t) => html.indexOf(`>${t}</h2>`));

@@ -36,6 +36,13 @@ describe('buildReportDocument — structure', () => {
       expect(doc.sections.filter((s) => s.appendix).map((s) => s.id)).toEqual(['strength', 'trace', 'assumptions']);
     }
   });
+  it('an overhang (quarry bench): the summary says overhang, never span or abutment (an overhang has one root and no arch)', () => {
+    const c = presetCase('quarry-bench-overhang');
+    const doc = buildReportDocument({ project: c.project, analysis: c.analysis, curve: c.curve, units: 'SI', trace: false });
+    const text = JSON.stringify(doc.sections.map((s) => s.blocks.map((b) => (b.kind === 'chart' ? [b.title, b.caption ?? ''] : b))));
+    expect(text).toContain('overhang');
+    expect([...text.matchAll(/.{0,40}\b(spans?|abutments?)\b.{0,20}/gi)].map((m) => m[0])).toEqual([]);
+  });
   it('trace: false leaves the appendix out and keeps the summary and both cautions', () => {
     for (const c of allCases()) {
       const doc = buildReportDocument({ project: c.project, analysis: c.analysis, curve: c.curve, units: 'SI', trace: false });
@@ -158,8 +165,8 @@ describe('buildReportDocument — checks', () => {
         if (v && v.maxCompression_MPa !== null) expectClose(demand as number, v.maxCompression_MPa + sh, 1e-12); // fc + σh (METHODS §3a)
         else expect(demand).toBe(null);
         expect(cellValue(t, /^crushing/, 3).value).toBe(v ? v.fsCrushing : null);
-        expect(cellValue(t, /^abutment sliding/, 3).value).toBe(v ? v.fsSliding : null);
-        expect(cellValue(t, /^midspan deflection/, 1).value).toBe(v ? v.deflectionRatio : null);
+        expect(cellValue(t, /sliding \(voussoir/, 3).value).toBe(v ? v.fsSliding : null);
+        expect(cellValue(t, /deflection δ\/t/, 1).value).toBe(v ? v.deflectionRatio : null);
         expect(cellValue(t, /^snap-through/, 3).value).toBe(v === null ? null : v.snapThrough ? 0 : 1);
       });
     }

@@ -14,6 +14,8 @@ export interface BeamProfileOptions {
   units: UnitSystem;
   designStrength_MPa?: number;
   title?: string;
+  /** The opening's word for its length: "span" (default) or "overhang". */
+  spanWord?: string;
   width?: number;
   height?: number;
 }
@@ -66,7 +68,7 @@ export function beamProfileSvg(profile: BeamProfile, options: BeamProfileOptions
   parts.push(text(12, 20, title, { size: 13, weight: 'bold' }));
   parts.push(text(12, 36, 'Elastic beam, net of horizontal stress; tension positive', { size: 10, fill: INK.muted }));
   parts.push(`<clipPath id="${ID}p1"><rect x="${num(left)}" y="${num(p1.top)}" width="${num(right - left)}" height="${num(p1.bottom - p1.top)}"/></clipPath>`);
-  parts.push(axis({ scale: x, orient: 'bottom', at: p1.bottom, label: axisLabel('Distance along the span', len.unit), ticks: 8, gridTo: p1.top }));
+  parts.push(axis({ scale: x, orient: 'bottom', at: p1.bottom, label: axisLabel(`Distance along the ${options.spanWord ?? 'span'}`, len.unit), ticks: 8, gridTo: p1.top }));
   parts.push(axis({ scale: y1, orient: 'left', at: left, label: axisLabel('Net tension', st.unit), ticks: 6, gridTo: right }));
   parts.push(line(left, y1(0), right, y1(0), INK.axis, 1.2));
   // Right-hand labels of the stress panel, spread apart so that none overlap.
@@ -104,7 +106,7 @@ export function beamProfileSvg(profile: BeamProfile, options: BeamProfileOptions
     ),
   );
 
-  parts.push(axis({ scale: x, orient: 'bottom', at: p2.bottom, label: axisLabel('Distance along the span', len.unit), ticks: 8, gridTo: p2.top }));
+  parts.push(axis({ scale: x, orient: 'bottom', at: p2.bottom, label: axisLabel(`Distance along the ${options.spanWord ?? 'span'}`, len.unit), ticks: 8, gridTo: p2.top }));
   parts.push(axis({ scale: y2, orient: 'left', at: left, label: axisLabel('Deflection, down', def.unit), ticks: 4, gridTo: right }));
   parts.push(line(left, y2(0), right, y2(0), INK.axis, 1.2));
   parts.push(`<path class="deflection" d="${path(D, y2)}" fill="none" stroke="${DEFLECTION.color}" stroke-width="2"/>`);

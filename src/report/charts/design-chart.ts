@@ -1,7 +1,8 @@
 /**
  * Design chart of one mode: contours of FS/target over span × thickness for one layer, with the
  * target contour (FS/target = 1) bold and labelled, the region below the target hatched, and the
- * current design point marked.
+ * current design point marked. Where the project has support, two lines give the largest span
+ * meeting every counted check against the layer's thickness, with this support and without it.
  */
 import { max, min } from 'd3-array';
 import { contours } from 'd3-contour';
@@ -10,14 +11,16 @@ import type { DesignChart } from '../../analysis/types';
 import type { Mode } from '../../model/types';
 import type { UnitSystem } from '../../model/units';
 import { gridMapping, labelPoint } from './contour-grid';
-import { MODE_STYLE } from './fs-span';
+import { MODE_STYLE, SUPPORT_STYLE } from './fs-span';
 import { MODE_SHORT as MODE_NAME } from '../../analysis/check-labels';
-import { ID, INK, axis, axisLabel, displayUnit, emptyNote, escapeXml, formatValue, marker, num, svgDocument, text } from './svg';
+import { ID, INK, axis, axisLabel, displayUnit, emptyNote, escapeXml, formatValue, legend, marker, num, svgDocument, text } from './svg';
 
 export interface DesignChartOptions {
   units: UnitSystem;
   currentSpan_m?: number;
   currentThickness_m?: number;
+  /** The opening's word for its length: "span" (default) or "overhang". */
+  spanWord?: string;
   width?: number;
   height?: number;
   title?: string;
@@ -125,8 +128,28 @@ export function designChartSvg(chart: DesignChart, mode: Mode, options: DesignCh
   });
   parts.push(`<rect x="${num(left)}" y="${num(top)}" width="${num(right - left)}" height="${num(bottom - top)}" fill="none" stroke="${INK.axis}" stroke-width="1"/>`);
 
-  parts.push(axis({ scale: x, orient: 'bottom', at: bottom, label: axisLabel('Span', len.unit), ticks: 7 }));
+  parts.push(axis({ scale: x, orient: 'bottom', at: bottom, label: axisLabel((options.spanWord ?? 'span').replace(/^./, (c) => c.toUpperCase()), len.unit), ticks: 7 }));
   parts.push(axis({ scale: y, orient: 'left', at: left, label: axisLabel('Thickness', len.unit), ticks: 6 }));
+
+  // With support: the largest span meeting every counted check against thickness, with and without it.
+  const sc = chart.support ?? null;
+  if (sc && sc.thicknesses_m.length >= 2) {
+    for (const [key, st, cls] of [['unsupported_m', SUPPORT_STYLE.unsupported, 'unsupported'], ['withSupport_m', SUPPORT_STYLE.withSupport, 'with-support']] as const) {
+      const pts = sc.thicknesses_m.map((t, k) => {
+        const s = sc[key][k];
+        return s === null || !Number.isFinite(s) ? null : [x(len.convert(s)), y(len.convert(t))] as [number, number];
+      });
+      let d = '';
+      let pen = false;
+      for (const p of pts) {
+        if (!p) { pen = false; continue; }
+        d += `${pen ? 'L' : 'M'}${num(p[0])},${num(p[1])}`;
+        pen = true;
+      }
+      if (d) parts.push(`<path class="support-curve ${cls}" d="${d}" fill="none" stroke="${st.color}" stroke-width="${key === 'withSupport_m' ? 2.6 : 1.6}"${st.dash ? ` stroke-dasharray="${st.dash}"` : ''}/>`);
+      pts.forEach((p, k) => { if (p && k % 3 === (key === 'withSupport_m' ? 0 : 1)) parts.push(marker(st.marker, p[0], p[1], st.color, 3.4, key === 'withSupport_m')); });
+    }
+  }
 
   const cs = options.currentSpan_m;
   const ct = options.currentThickness_m;
@@ -155,9 +178,19 @@ export function designChartSvg(chart: DesignChart, mode: Mode, options: DesignCh
   parts.push(text(kx + 28, top + 63, 'other levels', { size: 10 }));
   parts.push(marker('diamond', kx + 11, top + 78, MODE_STYLE[mode].color, 5, true));
   parts.push(text(kx + 28, top + 81, 'current design', { size: 10 }));
+  let ky = top + 90;
   if (missing.some((m) => m === 1)) {
-    parts.push(`<rect x="${num(kx)}" y="${num(top + 90)}" width="22" height="12" fill="url(#${ID}na)" stroke="#888888" stroke-width="0.5"/>`);
-    parts.push(text(kx + 28, top + 100, 'does not apply', { size: 10 }));
+    parts.push(`<rect x="${num(kx)}" y="${num(ky)}" width="22" height="12" fill="url(#${ID}na)" stroke="#888888" stroke-width="0.5"/>`);
+    parts.push(text(kx + 28, ky + 10, 'does not apply', { size: 10 }));
+    ky += 18;
+  }
+  if (sc) {
+    parts.push(legend([
+      { label: 'with support', style: SUPPORT_STYLE.withSupport },
+      { label: 'without support', style: SUPPORT_STYLE.unsupported },
+    ], kx, ky + 6, 120, 1));
+    parts.push(text(kx, ky + 44, 'largest span meeting', { size: 9, fill: INK.muted }));
+    parts.push(text(kx, ky + 56, 'every counted check', { size: 9, fill: INK.muted }));
   }
 
   const defs =
@@ -166,7 +199,8 @@ export function designChartSvg(chart: DesignChart, mode: Mode, options: DesignCh
     `<pattern id="${ID}na" patternUnits="userSpaceOnUse" width="8" height="8">` +
     `<rect width="8" height="8" fill="#eeeeee"/><path d="M0,4H8M4,0V8" stroke="#bbbbbb" stroke-width="0.8"/></pattern>`;
   const desc =
-    `${MODE_NAME[mode]} of layer ${chart.layer + 1} over spans ${formatValue(X[0])} to ${formatValue(X[nx - 1])} ${len.unit} ` +
-    `and thicknesses ${formatValue(Y[0])} to ${formatValue(Y[ny - 1])} ${len.unit}; FS/target from ${formatValue(vMin)} to ${formatValue(vMax)}.`;
+    `${MODE_NAME[mode]} of layer ${chart.layer + 1} over ${options.spanWord ?? 'span'}s ${formatValue(X[0])} to ${formatValue(X[nx - 1])} ${len.unit} ` +
+    `and thicknesses ${formatValue(Y[0])} to ${formatValue(Y[ny - 1])} ${len.unit}; FS/target from ${formatValue(vMin)} to ${formatValue(vMax)}.` +
+    (sc ? ` Also the largest ${options.spanWord ?? 'span'} meeting every counted check against thickness, with this support and without it.` : '');
   return svgDocument({ width, height, title, desc, defs, body: parts.join(''), className: 'lamina-chart design-chart' });
 }

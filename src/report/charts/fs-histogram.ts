@@ -41,7 +41,9 @@ export function fsHistogramSvg(u: Pick<UncertaintyReport, 'histogram' | 'pf' | '
   parts.push(text(x(1) + 4, top - 10, `FS = 1 (P_f ${formatValue(u.pf)})`, { size: 10 }));
   if (options.target !== undefined && options.target !== null && options.target !== 1) {
     parts.push(line(x(options.target), top, x(options.target), bottom, PALETTE.green, 1.5, '2 2'));
-    parts.push(text(x(options.target) + 4, top + 4, `target ${formatValue(options.target)}`, { size: 10, fill: PALETTE.green }));
+    const tx = x(options.target);
+    const nearRight = tx > right - 70; // label to the left of the line, inside the plot
+    parts.push(text(nearRight ? tx - 4 : tx + 4, top + 4, `target ${formatValue(options.target)}`, { size: 10, fill: PALETTE.green, ...(nearRight ? { anchor: 'end' as const } : {}) }));
   }
   if (u.histogram.above > 0) parts.push(text(right, bottom + 44, `${u.histogram.above} samples above ${num(bins[bins.length - 1].x1)} not drawn`, { anchor: 'end', size: 9, fill: INK.muted }));
   return svgDocument({

@@ -2,7 +2,8 @@
  * Factor of safety against span, one line per mode, each divided by its target so that every
  * target sits on the one line FS/target = 1 (log axis). Deflection enters as limit/(δ/t),
  * snap-through as a shaded "snaps" region. A vertical marker shows each mode's largest span and
- * another the current span.
+ * another the current span. Where the project has support, two more lines give the least
+ * FS/target over every counted check (support rows included) with this support and unsupported.
  */
 import { max, min } from 'd3-array';
 import { scaleLinear, scaleLog } from 'd3-scale';
@@ -33,6 +34,12 @@ export const MODE_STYLE: Record<Mode, SeriesStyle> = {
 
 
 const LINE_MODES: Mode[] = ['tension', 'crushing', 'sliding', 'deflection'];
+
+/** The governing FS/target of the whole check table with and without the project's support. */
+export const SUPPORT_STYLE: Record<'withSupport' | 'unsupported', SeriesStyle> = {
+  withSupport: { color: PALETTE.black, dash: null, marker: 'plus' },
+  unsupported: { color: INK.muted, dash: '6 3', marker: 'circle' },
+};
 const MARKER_MODES: Mode[] = ['tension', 'crushing', 'sliding', 'snapThrough', 'deflection'];
 
 /** A small label with a white halo, readable over lines. */
@@ -72,6 +79,8 @@ export function fsSpanSvg(curve: SpanCurve, maxSpan: MaxSpanReport | null, optio
     const r = ratio(m, i);
     if (r !== null) all.push(r);
   }
+  const sc = curve.support ?? null;
+  if (sc) for (const v of [...sc.withSupport, ...sc.unsupported]) if (v !== null && v > 0 && Number.isFinite(v)) all.push(v);
   const lo = Math.max(1e-3, Math.min(0.5, min(all) ?? 0.5));
   const hi = Math.min(1e4, Math.max(2, max(all) ?? 2));
   const yLo = 10 ** Math.floor(Math.log10(lo));
@@ -132,6 +141,21 @@ export function fsSpanSvg(curve: SpanCurve, maxSpan: MaxSpanReport | null, optio
       parts.push(marker(st.marker, x(X[i]), y(p), st.color, 3.2, !excluded));
     }
   }
+  // With support: the governing FS/target of the whole check table, with and without the support.
+  if (sc && sc.spans_m.length >= 2) {
+    const SX = sc.spans_m.map((s) => len.convert(s));
+    for (const [key, st, cls] of [['unsupported', SUPPORT_STYLE.unsupported, 'unsupported'], ['withSupport', SUPPORT_STYLE.withSupport, 'with-support']] as const) {
+      const pts = sc[key].map((v) => (v !== null && v > 0 && Number.isFinite(v) ? v : null));
+      const d = d3line<number | null>().defined((p) => p !== null).x((_, i) => x(SX[i])).y((p) => y(p as number)).digits(2)(pts) ?? '';
+      parts.push(`<path class="support-curve ${cls}" d="${d}" fill="none" stroke="${st.color}" stroke-width="${key === 'withSupport' ? 2.6 : 1.6}"${st.dash ? ` stroke-dasharray="${st.dash}"` : ''}/>`);
+      const every = Math.max(1, Math.round(SX.length / 5));
+      for (let i = key === 'withSupport' ? 0 : Math.floor(every / 2); i < SX.length; i += every) {
+        const p = pts[i];
+        if (p === null || p < yLo || p > yHi) continue;
+        parts.push(marker(st.marker, x(SX[i]), y(p), st.color, 3.4, key === 'withSupport'));
+      }
+    }
+  }
   parts.push('</g>');
 
   parts.push(halo(right - 4, y(1) - 5, targetLabel, INK.axis, true, 0, 'end'));
@@ -165,6 +189,10 @@ export function fsSpanSvg(curve: SpanCurve, maxSpan: MaxSpanReport | null, optio
     label: `${MODE_NAME[m]}${notCounted(m) ? ' (not counted)' : m === 'deflection' ? ' (limit / (δ/t))' : ` (target ${formatValue(t[m])})`}`,
     style: MODE_STYLE[m],
   }));
+  if (sc) {
+    items.push({ label: 'with this support', style: SUPPORT_STYLE.withSupport });
+    items.push({ label: 'without support', style: SUPPORT_STYLE.unsupported });
+  }
   parts.push(legend(items, right + 14, top + 8, 150, 1));
   parts.push(
     `<rect x="${num(right + 14)}" y="${num(top + 8 + items.length * 16 - 6)}" width="22" height="11" fill="url(#${ID}snaps)" stroke="${MODE_STYLE.snapThrough.color}"/>` +
@@ -172,6 +200,10 @@ export function fsSpanSvg(curve: SpanCurve, maxSpan: MaxSpanReport | null, optio
   );
   parts.push(text(right + 14, top + 8 + (items.length + 1) * 16 + 4, 'dashed verticals: largest', { size: 9, fill: INK.muted }));
   parts.push(text(right + 14, top + 8 + (items.length + 1) * 16 + 16, `${word} meeting the target`, { size: 9, fill: INK.muted }));
+  if (sc) {
+    parts.push(text(right + 14, top + 8 + (items.length + 1) * 16 + 32, 'with/without support: least', { size: 9, fill: INK.muted }));
+    parts.push(text(right + 14, top + 8 + (items.length + 1) * 16 + 44, 'FS/target of all counted checks', { size: 9, fill: INK.muted }));
+  }
 
   const defs =
     `<pattern id="${ID}snaps" patternUnits="userSpaceOnUse" width="8" height="8" patternTransform="rotate(45)">` +
@@ -185,7 +217,8 @@ export function fsSpanSvg(curve: SpanCurve, maxSpan: MaxSpanReport | null, optio
     `FS divided by its target against ${word} from ${formatValue(X[0])} to ${formatValue(xMax)} ${len.unit}, log scale; ` +
     `current ${word} ${formatValue(len.convert(curve.currentSpan_m))} ${len.unit}.` +
     (LINE_MODES.some(notCounted) ? ` Not counted at the current ${word}: ${LINE_MODES.filter(notCounted).map((m) => MODE_NAME[m]).join(', ')}.` : '') +
-    (spanList ? ` Largest spans: ${spanList}.` : '') +
-    (maxSpan && maxSpan.governing !== null ? ` Governing ${formatValue(len.convert(maxSpan.governing))} ${len.unit}.` : '');
+    (spanList ? ` Largest ${word === 'span' ? 'spans' : `${word}s`}: ${spanList}.` : '') +
+    (maxSpan && maxSpan.governing !== null ? ` Governing ${formatValue(len.convert(maxSpan.governing))} ${len.unit}.` : '') +
+    (sc ? ' Also the least FS/target over every counted check, with this support and unsupported.' : '');
   return svgDocument({ width, height, title, desc, defs, body: parts.join(''), className: 'lamina-chart fs-span' });
 }

@@ -44,9 +44,9 @@ export function pfSpanSvg(u: Pick<UncertaintyReport, 'pfVersusSpan' | 'samplesPe
   for (let d = lowest; d <= 1.0000001; d *= 10) decades.push(d);
   parts.push(axis({ scale: y, orient: 'left', at: left, label: 'P_f', tickValues: decades, format: (v) => formatValue(v), gridTo: right }));
   parts.push(axis({ scale: x, orient: 'bottom', at: bottom, label: axisLabel(word, len.unit) }));
-  const band = area<(typeof pts)[number]>().x((p) => x(len.convert(p.span_m))).y0((p) => at(p.pfInterval[0])).y1((p) => at(p.pfInterval[1]))(pts);
+  const band = area<(typeof pts)[number]>().x((p) => x(len.convert(p.span_m))).y0((p) => at(p.pfInterval[0])).y1((p) => at(p.pfInterval[1])).digits(2)(pts);
   if (band) parts.push(`<path d="${band}" fill="${PALETTE.blue}" fill-opacity="0.18" stroke="none"/>`);
-  const path = d3line<(typeof pts)[number]>().x((p) => x(len.convert(p.span_m))).y((p) => at(p.pf))(pts);
+  const path = d3line<(typeof pts)[number]>().x((p) => x(len.convert(p.span_m))).y((p) => at(p.pf)).digits(2)(pts);
   if (path) parts.push(`<path d="${path}" fill="none" stroke="${PALETTE.blue}" stroke-width="1.8"/>`);
   for (const p of pts) parts.push(marker('circle', x(len.convert(p.span_m)), at(p.pf), PALETTE.blue, 3.5, p.pf > 0));
   if (u.acceptablePf !== null) {

@@ -90,7 +90,7 @@ export function strataColumnSvg(project: Project, analysis: Analysis | null, opt
   }
   if (!cantilever) spanText += `, ${opening.ends} ends`;
   parts.push(dimension(spanX0, roofY + voidDepth + 12, spanX1, roofY + voidDepth + 12, spanText, { x: (spanX0 + spanX1) / 2, y: roofY + voidDepth + 26 }));
-  parts.push(text(left, roofY + voidDepth + 44, 'Thicknesses to scale; the span is drawn to its own horizontal scale.', { size: 9, fill: INK.muted, italic: true }));
+  parts.push(text(left, roofY + voidDepth + 44, `Thicknesses to scale; the ${cantilever ? 'overhang' : 'span'} is drawn to its own horizontal scale.`, { size: 9, fill: INK.muted, italic: true }));
 
   // Layers, to scale.
   const layerX0 = cantilever ? left : left;

@@ -31,7 +31,7 @@ export function chartsSection(ctx: SectionContext): Section {
   const blocks: Array<Block | null> = [];
   blocks.push(chart('Strata column', () => strataColumnSvg(project, analysis, { units })));
   if (curve) {
-    blocks.push(chart('Factor of safety versus span', () => fsSpanSvg(curve, analysis.report.maxSpan_m, { units, spanWord: ctx.verdict.spanWord })));
+    blocks.push(chart(`Factor of safety versus ${ctx.verdict.spanWord}`, () => fsSpanSvg(curve, analysis.report.maxSpan_m, { units, spanWord: ctx.verdict.spanWord })));
   }
   // The chart of the governing check: the beam (or slab) for tension, the arch for a voussoir mode.
   const mode = analysis.report.governing?.mode ?? 'tension';
@@ -44,7 +44,7 @@ export function chartsSection(ctx: SectionContext): Section {
       }));
     } else {
       blocks.push(chart(`Beam profile, layer ${focus + 1}: ${layer.name}`, () =>
-        beamProfileSvg(beamProfile(project, analysis, focus), { units, designStrength_MPa: layer.strength.design_MPa, title: `Layer ${focus + 1}: ${layer.name}` }),
+        beamProfileSvg(beamProfile(project, analysis, focus), { units, designStrength_MPa: layer.strength.design_MPa, title: `Layer ${focus + 1}: ${layer.name}`, spanWord: ctx.verdict.spanWord === 'overhang' ? 'overhang' : 'span' }),
       `Intact-beam fibre tension and deflection along the ${ctx.verdict.spanWord}.`));
     }
   }

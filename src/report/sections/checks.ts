@@ -1,6 +1,7 @@
 /** The check table and the largest spans (summary); the notes and layer results behind them (appendix A). */
 import type { CheckRow, Mode } from '../../model/types';
-import { MODE_LABEL, STATUS_LEGEND, STATUS_TEXT } from '../../analysis/check-labels';
+import { MODE_LABEL, modeLabel, STATUS_LEGEND, STATUS_TEXT } from '../../analysis/check-labels';
+import type { Verdict } from '../../analysis/verdict';
 import type { Block, Cell, Section } from '../document-types';
 import { fsText, quantityText, titleWithUnit } from '../format';
 import { MISSING, numberText } from '../number-text';
@@ -20,7 +21,7 @@ export function isGoverning(row: CheckRow, ctx: SectionContext): boolean {
 }
 
 export function checkRowCells(row: CheckRow, ctx: SectionContext): Cell[] {
-  const label = MODE_LABEL[row.mode];
+  const label = modeLabel(row.mode, ctx.project.opening.type);
   return [
     textCell(isGoverning(row, ctx) ? `${label} (governing)` : label),
     amount(row, row.demand, ctx),
@@ -32,14 +33,17 @@ export function checkRowCells(row: CheckRow, ctx: SectionContext): Cell[] {
   ];
 }
 
-const SPAN_NOTE: Record<Mode | 'governing', string> = {
-  tension: 'layers in which tension counts; strengths held at current-span values; a jointed layer stops at its joint spacing',
-  crushing: 'arch thrust reaches UCS / target',
-  sliding: 'FS sliding rises with span, so sliding never limits the span from above',
-  snapThrough: 'largest span at which an arch still forms',
-  deflection: 'δ/t reaches the limit',
-  governing: 'smallest of the counted modes',
-};
+/** Why each largest span is what it is, in the opening's own word (span, overhang, entry width). */
+function spanNote(word: Verdict['spanWord']): Record<Mode | 'governing', string> {
+  return {
+    tension: `layers in which tension counts; strengths held at current-${word} values; a jointed layer stops at its joint spacing`,
+    crushing: 'arch thrust reaches UCS / target',
+    sliding: `FS sliding rises with ${word}, so sliding never limits the ${word} from above`,
+    snapThrough: `largest ${word} at which an arch still forms`,
+    deflection: 'δ/t reaches the limit',
+    governing: 'smallest of the counted modes',
+  };
+}
 
 export function checksSection(ctx: SectionContext): Section {
   const { analysis, units, project } = ctx;
@@ -57,7 +61,9 @@ export function checksSection(ctx: SectionContext): Section {
       return [textCell(`${r.layerIndex + 1} ${report.layers[r.layerIndex]?.name ?? ''}`), ...c.slice(0, 6), textCell(r.reason ? `no: ${r.reason}` : 'yes')];
     }),
   });
-  blocks.push({ kind: 'heading', level: 3, text: 'Largest span per mode' });
+  const word = ctx.verdict.spanWord;
+  const SPAN_NOTE = spanNote(word);
+  blocks.push({ kind: 'heading', level: 3, text: `Largest ${word} per mode` });
   const spans = report.maxSpan_m;
   if (spans === null) {
     blocks.push({ kind: 'paragraph', text: 'No span search was run for this project.' });
@@ -66,11 +72,11 @@ export function checksSection(ctx: SectionContext): Section {
     blocks.push({
       kind: 'table',
       caption: `Largest ${ctx.verdict.spanWord} meeting the target (searched up to 100 m; current ${ctx.verdict.spanWord} ${quantityText(project.opening.span_m, 'length', units)}${project.opening.type === 'intersection' ? `, w2/w1 held, design span the diagonal ${quantityText(report.opening.designSpan_m, 'length', units)}` : ''})`,
-      columns: [{ title: 'Mode' }, { title: titleWithUnit('Largest span', 'length', units), numeric: true }, { title: 'Note' }],
+      columns: [{ title: 'Mode' }, { title: titleWithUnit(`Largest ${word}`, 'length', units), numeric: true }, { title: 'Note' }],
       rows: modes.map((m): Cell[] => {
         const value = spans[m];
-        const label = m === 'governing' ? 'governing (all counted modes)' : MODE_LABEL[m];
-        const note = value === null ? (m === 'sliding' ? SPAN_NOTE.sliding : 'the mode counts in no layer at the current span') : value >= 100 ? 'target holds up to the 100 m search cap' : SPAN_NOTE[m];
+        const label = m === 'governing' ? 'governing (all counted modes)' : modeLabel(m, project.opening.type);
+        const note = value === null ? (m === 'sliding' ? SPAN_NOTE.sliding : `the mode counts in no layer at the current ${word}`) : value >= 100 ? 'target holds up to the 100 m search cap' : SPAN_NOTE[m];
         return [textCell(label), qCell(value, 'length', units), textCell(note)];
       }),
     });
@@ -88,7 +94,7 @@ export function resultBlocks(ctx: SectionContext): Block[] {
     kind: 'table',
     caption: 'Why each check counts or not, and what it compares',
     columns: [{ title: 'Layer' }, { title: 'Mode' }, { title: 'Note' }],
-    rows: ctx.rows.map((r) => [textCell(`${r.layerIndex + 1}`), textCell(MODE_LABEL[r.mode]), textCell(r.reason ? `not counted: ${r.reason} — ${r.note}` : r.note)]),
+    rows: ctx.rows.map((r) => [textCell(`${r.layerIndex + 1}`), textCell(modeLabel(r.mode, ctx.project.opening.type)), textCell(r.reason ? `not counted: ${r.reason} — ${r.note}` : r.note)]),
   });
   blocks.push({ kind: 'heading', level: 3, text: 'Intact beam results' });
   blocks.push({

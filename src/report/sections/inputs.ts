@@ -41,7 +41,7 @@ export function inputsSection(ctx: SectionContext): Section {
       ...(o.type === 'slab' && o.edges ? [{ key: 'Slab edges', value: `short edges ${o.edges.short}, long edges ${o.edges.long}` }] : []),
       { key: 'Surcharge on top of the analysed strata', value: inputQuantityText(project.loads.surcharge_kPa, 'pressure', units) },
       { key: 'Standing support (upward, capped at the load it relieves)', value: inputQuantityText(project.support.standing_kPa, 'pressure', units) },
-      { key: 'Horizontal stress along the span (compression +)', value: inputQuantityText(project.loads.horizontalStress_MPa, 'stress', units) },
+      { key: `Horizontal stress along the ${project.opening.type === 'cantilever' ? 'overhang' : 'span'} (compression +)`, value: inputQuantityText(project.loads.horizontalStress_MPa, 'stress', units) },
     ],
   });
 

@@ -34,7 +34,6 @@ import './caution-banner';
 import './verdict-line';
 import './project-bar';
 import './verdict-chip';
-import { workerRunner } from '../uncertainty/worker-runner';
 import type { UncertaintyRunner } from '../compute/types';
 
 const SECTIONS = [
@@ -70,8 +69,8 @@ export class LaminaApp extends LitElement {
   store!: ProjectStore;
   state!: AppState;
   tracePath: string | null = null;
-  /** Runs the uncertainty study off the main thread (a worker, started on the first run). */
-  runner: UncertaintyRunner = workerRunner();
+  /** Runs the uncertainty study off the main thread: main.ts passes the compute client's runner (its run worker). */
+  runner: UncertaintyRunner | null = null;
   private unsubscribe: (() => void) | null = null;
   private lastAnalysis: unknown = null;
   private firstResultsMarked = false;
@@ -610,7 +609,9 @@ export class LaminaApp extends LitElement {
         ? html`<p class="stale-note" role="status"><span class="stale-word">Stale</span>results are for the last accepted values; a field above holds a refused value.</p>`
         : nothing;
     const results = (RESULT_SECTIONS as readonly string[]).includes(s.id);
-    return html`<h2 id="${s.id}-h" class=${results ? 'results-h' : ''} tabindex="-1" aria-busy=${busy ? 'true' : 'false'}><span class="num-badge">${n}</span> ${s.title}</h2>${stale}`;
+    // An overhang is not a span: the span section says so for a cantilever.
+    const title = s.id === 'span' && this.state?.project.opening.type === 'cantilever' ? 'Overhang and thickness' : s.title;
+    return html`<h2 id="${s.id}-h" class=${results ? 'results-h' : ''} tabindex="-1" aria-busy=${busy ? 'true' : 'false'}><span class="num-badge">${n}</span> ${title}</h2>${stale}`;
   }
 
   override render() {

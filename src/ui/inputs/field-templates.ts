@@ -71,3 +71,25 @@ export function errorFor(errors: ReadonlyArray<{ path: string; message: string }
   const e = errors?.find((x) => x.path === path);
   return e ? e.message : '';
 }
+
+/**
+ * A `<quantity-input>` on its own line for a form: the value in the file unit of `quantity`
+ * (or a plain number with `unitText`), shown in `units`, with the model's error for `path`.
+ */
+export function quantityField(opts: {
+  label: string; path: string; value: number | null; quantity: string; units: string;
+  errors: ReadonlyArray<{ path: string; message: string }>; unitText?: string; nullable?: boolean; hint?: string;
+}) {
+  return html`<quantity-input
+    class="line"
+    label=${opts.label}
+    path=${opts.path}
+    .value=${opts.value}
+    quantity=${opts.quantity}
+    units=${opts.units}
+    unit-text=${opts.unitText ?? ''}
+    ?nullable=${opts.nullable ?? false}
+    hint=${opts.hint ?? ''}
+    error=${errorFor(opts.errors, opts.path)}
+  ></quantity-input>`;
+}

@@ -7,13 +7,14 @@
  * @fires project-replace - the opening type, the slab edge option or the tensile basis changed
  * @fires app-notice - { notice } when switching the tensile basis also switched the tension target
  */
-import { LitElement, html, css, nothing } from 'lit';
+import { LitElement, html, nothing } from 'lit';
 import type { Project, OpeningType, TensileBasis } from '../../model/types';
 import { DEFAULT_TENSION_TARGET } from '../../model/defaults';
 import type { UnitSystem } from '../../model/units';
 import { tokens } from '../styles/tokens';
 import { sheet } from '../styles/sheet';
-import { checkboxField, errorFor, selectField } from './field-templates';
+import { formGrid } from '../styles/form-grid';
+import { checkboxField, errorFor, quantityField, selectField } from './field-templates';
 import { fireReplace } from './events';
 import './quantity-input';
 
@@ -68,42 +69,7 @@ export class OpeningLoadsForm extends LitElement {
   units: UnitSystem = 'SI';
   fieldErrors: ReadonlyArray<{ path: string; message: string }> = [];
 
-  static override styles = [
-    tokens,
-    sheet,
-    css`
-      :host {
-        display: block;
-      }
-      .grid {
-        display: grid;
-        grid-template-columns: repeat(auto-fit, minmax(min(22rem, 100%), 1fr));
-        gap: 0 1.5rem;
-      }
-      fieldset {
-        min-width: 0;
-        border: none;
-        border-top: 1px solid var(--lam-rule);
-        margin: 0.4rem 0;
-        padding: 0.3rem 0;
-      }
-      legend {
-        font-weight: 600;
-        padding: 0 0.3em 0 0;
-      }
-      .line {
-        display: block;
-        margin: 0.25rem 0;
-      }
-      .field-label {
-        display: inline-block;
-        min-width: 11em;
-      }
-      select {
-        max-width: 100%;
-      }
-    `,
-  ];
+  static override styles = [tokens, sheet, formGrid];
 
   private changeType(type: OpeningType): void {
     const p = structuredClone(this.project);
@@ -145,18 +111,7 @@ export class OpeningLoadsForm extends LitElement {
   }
 
   private q(label: string, path: string, value: number | null, quantity: string, extra: { unitText?: string; nullable?: boolean; hint?: string } = {}) {
-    return html`<quantity-input
-      class="line"
-      label=${label}
-      path=${path}
-      .value=${value}
-      quantity=${quantity}
-      units=${this.units}
-      unit-text=${extra.unitText ?? ''}
-      ?nullable=${extra.nullable ?? false}
-      hint=${extra.hint ?? ''}
-      error=${errorFor(this.fieldErrors, path)}
-    ></quantity-input>`;
+    return quantityField({ label, path, value, quantity, units: this.units, errors: this.fieldErrors, ...extra });
   }
 
   override render() {

@@ -9,12 +9,13 @@
  * @fires project-edit - one field changed (quantity inputs and selects)
  * @fires project-replace - bolts or Q ratings switched on or off (one undo step)
  */
-import { LitElement, html, css, nothing } from 'lit';
+import { LitElement, html, nothing } from 'lit';
 import type { BoltPattern, Project, QRatings } from '../../model/types';
 import type { UnitSystem } from '../../model/units';
 import { tokens } from '../styles/tokens';
 import { sheet } from '../styles/sheet';
-import { errorFor, selectField } from './field-templates';
+import { formGrid } from '../styles/form-grid';
+import { errorFor, quantityField, selectField } from './field-templates';
 import { fireReplace } from './events';
 import './quantity-input';
 
@@ -43,51 +44,10 @@ export class SupportForm extends LitElement {
   units: UnitSystem = 'SI';
   fieldErrors: ReadonlyArray<{ path: string; message: string }> = [];
 
-  static override styles = [
-    tokens,
-    sheet,
-    css`
-      :host {
-        display: block;
-      }
-      .grid {
-        display: grid;
-        grid-template-columns: repeat(auto-fit, minmax(min(22rem, 100%), 1fr));
-        gap: 0 1.5rem;
-      }
-      fieldset {
-        min-width: 0;
-        border: none;
-        border-top: 1px solid var(--lam-rule);
-        margin: 0.4rem 0;
-        padding: 0.3rem 0;
-      }
-      legend {
-        font-weight: 600;
-        padding: 0 0.3em 0 0;
-      }
-      .line {
-        display: block;
-        margin: 0.25rem 0;
-      }
-      select {
-        max-width: 100%;
-      }
-    `,
-  ];
+  static override styles = [tokens, sheet, formGrid];
 
-  private q(label: string, path: string, value: number | null, quantity: string, extra: { unitText?: string; hint?: string } = {}) {
-    return html`<quantity-input
-      class="line"
-      label=${label}
-      path=${path}
-      .value=${value}
-      quantity=${quantity}
-      units=${this.units}
-      unit-text=${extra.unitText ?? ''}
-      hint=${extra.hint ?? ''}
-      error=${errorFor(this.fieldErrors, path)}
-    ></quantity-input>`;
+  private q(label: string, path: string, value: number | null, quantity: string, extra: { unitText?: string; nullable?: boolean; hint?: string } = {}) {
+    return quantityField({ label, path, value, quantity, units: this.units, errors: this.fieldErrors, ...extra });
   }
 
   private setBolts(on: boolean): void {

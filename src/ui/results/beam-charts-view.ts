@@ -17,7 +17,7 @@ import type { Mode, Project } from '../../model/types';
 import type { UnitSystem } from '../../model/units';
 import type { Analysis, DesignChart } from '../../analysis/types';
 import { beamProfileSvg, voussoirArchSvg, slabContourSvg, designChartSvg } from '../../report/charts';
-import { MODE_NAME } from '../../analysis/check-labels';
+import { modeName } from '../../analysis/check-labels';
 import { displayValue } from './display-value';
 import { tracedNumber } from './traced-number';
 import { resultsStyles } from './results-styles';
@@ -99,6 +99,7 @@ export class BeamChartsView extends LitElement {
       const lr = a.report.layers[i]!;
       this.profileSvg = safe(() =>
         beamProfileSvg(beamProfile(p, a, i), {
+          spanWord: p.opening.type === 'cantilever' ? 'overhang' : 'span',
           units: u,
           designStrength_MPa: lr.strength.crossJointed ? undefined : lr.strength.design_MPa,
           title: `${lr.name}: net fibre tension and deflection along the ${p.opening.type === 'cantilever' ? 'overhang' : 'span'}`,
@@ -139,6 +140,7 @@ export class BeamChartsView extends LitElement {
               units: u,
               currentSpan_m: p.opening.span_m,
               currentThickness_m: layer?.thickness_m,
+              spanWord: p.opening.type === 'cantilever' ? 'overhang' : 'span',
             }),
           )
         : '';
@@ -215,7 +217,7 @@ export class BeamChartsView extends LitElement {
               : nothing}
             ${chartSlot(this.beamDirty ? '' : this.slabSvg, 'slab-contour', 680, 400, this.beamDirty) ?? html`<p class="empty">No slab stress field.</p>`}`
         : nothing}
-      <h3>Design chart: span × thickness</h3>
+      <h3>Design chart: ${this.project?.opening.type === 'cantilever' ? 'overhang' : 'span'} × thickness</h3>
       <div class="controls">
         <label for="chart-layer">Layer</label>
         <select id="chart-layer" data-role="chart-layer" @change=${this.chooseChartLayer}>
@@ -223,7 +225,7 @@ export class BeamChartsView extends LitElement {
         </select>
         <label for="chart-mode">Mode</label>
         <select id="chart-mode" data-role="chart-mode" @change=${this.chooseMode}>
-          ${CHART_MODES.map((m) => html`<option value=${m} ?selected=${m === this.mode}>${MODE_NAME[m]}</option>`)}
+          ${CHART_MODES.map((m) => html`<option value=${m} ?selected=${m === this.mode}>${modeName(m, this.project?.opening.type ?? '')}</option>`)}
         </select>
       </div>
       ${chartSlot(this.designDirty ? '' : this.designSvg, 'design-chart', 640, 420, this.designDirty && this.chart !== null) ?? html`<p class="empty">No design chart for this layer and mode.</p>`}

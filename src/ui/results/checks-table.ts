@@ -11,7 +11,7 @@ import type { Project } from '../../model/types';
 import type { UnitSystem } from '../../model/units';
 import type { Analysis } from '../../analysis/types';
 import { numberText } from '../../report/number-text';
-import { MODE_LABEL, STATUS_TEXT, statusDescription } from '../../analysis/check-labels';
+import { modeLabel, STATUS_TEXT, statusDescription } from '../../analysis/check-labels';
 import { buildVerdict } from '../../analysis/verdict';
 import { checkRowViews, type CheckRowView, type CheckValue } from './check-rows';
 import { displayValue } from './display-value';
@@ -69,7 +69,7 @@ export class ChecksTable extends LitElement {
       class=${view.governing ? 'governing' : ''}
     >
       ${first ? html`<th scope="rowgroup" rowspan=${span}>${r.layer}</th>` : nothing}
-      <td>${MODE_LABEL[view.mode]}${view.governing ? html` <strong>(governing)</strong>` : nothing}</td>
+      <td>${modeLabel(view.mode, this.project?.opening.type ?? '')}${view.governing ? html` <strong>(governing)</strong>` : nothing}</td>
       <td class="num">${this.value(view.demand)}</td>
       <td class="num">${this.value(view.capacity)}</td>
       <td class="num">${this.fs(view)}</td>

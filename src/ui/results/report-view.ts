@@ -94,6 +94,8 @@ export class ReportView extends LitElement {
   @property({ attribute: false }) curve: SpanCurve | null = null;
   @property() units: UnitSystem = 'SI';
 
+  /** Include the appendix (layer results, strength chain, calculation trace, methods); off: the summary alone. */
+  @state() private withTrace = true;
   @state() private body = '';
   @state() private error: string | null = null;
   /** The reader opened the report (it is built and shown only then). */
@@ -143,7 +145,7 @@ export class ReportView extends LitElement {
   }
 
   protected override willUpdate(changed: PropertyValues): void {
-    if (changed.has('project') || changed.has('analysis') || changed.has('curve') || changed.has('units')) {
+    if (changed.has('project') || changed.has('analysis') || changed.has('curve') || changed.has('units') || changed.has('withTrace')) {
       this.dirty = true;
       this.pending?.cancel();
       this.pending = null;
@@ -193,6 +195,7 @@ export class ReportView extends LitElement {
           curve: this.curve,
           units: this.units,
           version: pkg.version,
+          trace: this.withTrace,
         });
         this.body = renderHtmlBody(this.doc);
         this.error = null;
@@ -208,7 +211,7 @@ export class ReportView extends LitElement {
 
   private onBeforePrint = (): void => {
     if (!this.build() && this.printContainer && !this.printContainer.innerHTML) {
-      this.printContainer.textContent = 'The report was still loading: close this print preview and use "Print / Save as PDF" in section 7 of the worksheet.';
+      this.printContainer.textContent = 'The report was still loading: close this print preview and use "Print / Save as PDF" in the Report section of the worksheet.';
     }
   };
 
@@ -246,7 +249,11 @@ export class ReportView extends LitElement {
         </button>
         <button type="button" class="action" data-role="print" ?disabled=${!ready} @click=${this.print}>Print / Save as PDF</button>
         <button type="button" class="action" data-role="download" ?disabled=${!ready} @click=${this.download}>Download HTML report</button>
-        <span class="note" role="status">${this.open && this.dirty && this.body ? 'Updating the report to the current values…' : 'The printout is this report only, with the caution at the start and the end.'}</span>
+        <label class="trace-switch"
+          ><input type="checkbox" data-role="with-trace" .checked=${this.withTrace} @change=${(e: Event) => (this.withTrace = (e.target as HTMLInputElement).checked)} />
+          With the calculation trace (appendix)</label
+        >
+        <span class="note" role="status">${this.open && this.dirty && this.body ? 'Updating the report to the current values…' : 'The printout is this report only, with the caution at the start and the end: a summary of a few pages, then, when chosen, the appendix with every step of the calculation.'}</span>
       </div>
       ${!this.open
         ? html`<p class="note" data-role="closed">The calculation report (inputs, strength chain, checks, the full calculation trace and the charts) is built when you show it, print it or download it.</p>`

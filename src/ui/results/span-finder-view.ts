@@ -16,7 +16,7 @@ import type { Analysis, SpanCurve } from '../../analysis/types';
 import { fsSpanSvg } from '../../report/charts';
 import { THICKNESS_MIN_M } from '../../analysis/thickness-limits';
 import { numberText } from '../../report/number-text';
-import { MODE_NAME } from '../../analysis/check-labels';
+import { modeName } from '../../analysis/check-labels';
 import { spanWordOf } from '../../analysis/verdict';
 import { adoptableSpan } from './adoptable-span';
 import { displayText, displayValue } from './display-value';
@@ -27,13 +27,16 @@ import { NearViewport, chartSlot } from './near-viewport';
 
 const SPAN_MODES: readonly Mode[] = ['tension', 'crushing', 'sliding', 'snapThrough', 'deflection'];
 
-const WHY_NULL: Record<Mode, string> = {
-  tension: 'does not limit the span (no layer without cross-joints carries net tension, or the mode does not apply)',
-  crushing: 'does not limit the span here',
-  sliding: 'never limits the span: the sliding FS rises with span; a shortfall shows at the current span',
-  snapThrough: 'does not limit the span here',
-  deflection: 'does not limit the span here',
-};
+/** Why a mode has no largest span, in the opening's word ("span", "overhang", "entry width"). */
+function whyNull(word: string): Record<Mode, string> {
+  return {
+    tension: `does not limit the ${word} (no layer without cross-joints carries net tension, or the mode does not apply)`,
+    crushing: `does not limit the ${word} here`,
+    sliding: `never limits the ${word}: the sliding FS rises with ${word}; a shortfall shows at the current ${word}`,
+    snapThrough: `does not limit the ${word} here`,
+    deflection: `does not limit the ${word} here`,
+  };
+}
 
 @customElement('span-finder-view')
 export class SpanFinderView extends LitElement {
@@ -110,10 +113,10 @@ export class SpanFinderView extends LitElement {
             const v = m ? m[k] : null;
             const d = displayValue(v, 'length', u);
             return html`<tr data-mode=${k}>
-              <th scope="row">${MODE_NAME[k]}</th>
+              <th scope="row">${modeName(k, p.opening.type)}</th>
               <td class="num">${v === null ? '—' : tracedNumber(`maxSpan_m.${k}`, d.text, d.unit, v)}</td>
               <td class="note">
-                ${v === null ? (k !== 'sliding' && !counted(k) ? `counts in no layer at the current ${spanWord}` : WHY_NULL[k]) : v >= current ? `meets the target at the current ${spanWord}` : `below the current ${spanWord}: this mode fails now`}
+                ${v === null ? (k !== 'sliding' && !counted(k) ? `counts in no layer at the current ${spanWord}` : whyNull(spanWord)[k]) : v >= current ? `meets the target at the current ${spanWord}` : `below the current ${spanWord}: this mode fails now`}
                 ${k === 'sliding' && slidingShort
                   ? html`<br /><strong>Sliding falls short at the current ${spanWord}</strong> (least FS ${numberText(leastSliding)} against
                       ${numberText(p.design.fsTarget.sliding)}); a shorter ${spanWord} makes it worse, so it must be resolved on its own.`
@@ -130,13 +133,13 @@ export class SpanFinderView extends LitElement {
                 ? '—'
                 : tracedNumber('maxSpan_m.governing', displayValue(m.governing, 'length', u).text, displayValue(m.governing, 'length', u).unit, m.governing)}
             </td>
-            <td class="note">${governingMode ? `set by ${MODE_NAME[governingMode]}` : m?.governing === null ? `no mode limits the ${spanWord}` : ''}</td>
+            <td class="note">${governingMode ? `set by ${modeName(governingMode, p.opening.type)}` : m?.governing === null ? `no mode limits the ${spanWord}` : ''}</td>
           </tr>
           <tr data-mode="current">
             <th scope="row">Current ${spanWord}</th>
             <td class="num" data-role="current-span" data-si-value=${current}>${displayText(current, 'length', u, inputSignificant(u !== 'SI'))}</td>
             <td class="note">
-              ${adopt === null ? '' : adopt >= current ? 'within the governing largest span' : html`<strong>exceeds the governing largest span</strong>`}
+              ${adopt === null ? '' : adopt >= current ? `within the governing largest ${spanWord}` : html`<strong>exceeds the governing largest ${spanWord}</strong>`}
             </td>
           </tr>
         </tfoot>

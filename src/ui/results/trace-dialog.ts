@@ -196,7 +196,7 @@ export class TraceDialog extends LitElement {
         <dt>With values</dt>
         <dd class="formula" data-role="substituted" aria-busy=${f ? 'false' : 'true'}>${f ? safeText(() => f.substitutedText(entry.formula, entry.values), entry.formula) : '…'}</dd>
         <dt>Result</dt>
-        <dd class="formula result" data-role="result">${valueText(entry.result, entry.unit, u)}</dd>
+        <dd class="formula result" data-role="result">${valueText(entry.result, entry.unit, u, entry.path)}</dd>
       </dl>
       ${symbols.length
         ? html`<table data-role="values">
@@ -206,7 +206,7 @@ export class TraceDialog extends LitElement {
               ${symbols.map(
                 ([name, v]) => html`<tr>
                   <th scope="row">${safeText(() => symbolText(name), name)} <span class="note">(${name})</span></th>
-                  <td class="num">${valueText(v.value, v.unit, u)}</td>
+                  <td class="num">${valueText(v.value, v.unit, u, entry.path)}</td>
                 </tr>`,
               )}
             </tbody>

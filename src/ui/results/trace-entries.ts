@@ -70,10 +70,10 @@ export function safeText(render: () => string, fallback: string): string {
 }
 
 /** A traced value with its unit, plus the US equivalent in brackets when US units are shown. */
-export function valueText(value: number, unit: string, units: UnitSystem): string {
+export function valueText(value: number, unit: string, units: UnitSystem, path = ''): string {
   const base = withUnit(numberText(value, PRECISION.trace), unit);
   if (units !== 'US') return base;
-  const q = quantityOfUnit(unit);
+  const q = quantityOfUnit(unit, path);
   if (!q || !Number.isFinite(value)) return base;
   return `${base} (${numberText(toDisplay(value, q, 'US'))} ${unitLabel(q, 'US')})`;
 }

@@ -76,7 +76,9 @@ export class UncertaintySection extends LitElement {
       .field-name { display: block; font-size: 0.85em; color: var(--lam-muted, #555); }
       .errors { border-left: 4px solid var(--lam-bad, #b00020); padding: 0.3rem 0.6rem; margin: 0.5rem 0; }
       .errors code { font-weight: 600; }
-      progress { width: min(24rem, 100%); }
+      progress { width: min(14rem, 60%); }
+      /* The bar changes while a run goes: keep its layout and paint inside its own box. */
+      label.progress { contain: strict; display: inline-block; width: min(34rem, 100%); height: 1.6em; overflow: hidden; white-space: nowrap; }
       .pf { font-size: 1.15rem; font-weight: 600; }
       .stale { border: 2px dashed var(--lam-bad, #b00020); padding: 0.2rem 0.5rem; display: inline-block; }
       .charts { display: grid; grid-template-columns: repeat(auto-fit, minmax(min(100%, 30rem), 1fr)); gap: 1rem; }
@@ -91,11 +93,29 @@ export class UncertaintySection extends LitElement {
     return this.project?.uncertainty ?? null;
   }
 
-  private get key(): string {
-    return this.project ? JSON.stringify(this.project) : '';
-  }
+  /** The project as text (a result is stale when it differs); recomputed only when the project changes. */
+  private key = '';
+  /** Chart strings of the shown result, rebuilt only when the result, the units or the span change. */
+  private charts: { for: unknown; units: UnitSystem; span: number; histogram: string; sensitivity: string; pfSpan: string | null } | null = null;
+  /** Progress reported by the worker, shown at most once per animation frame. */
+  private pendingProgress: { done: number; total: number } | null = null;
+  private progressFrame = 0;
+  /** Per project: the samplable paths and the layers offering a one-click Brazilian lognormal. */
+  private paths: string[] = [];
+  private brazilian: { i: number; n: number }[] = [];
 
   protected override willUpdate(changed: PropertyValues<this>): void {
+    if (changed.has('project')) {
+      const p = this.project;
+      this.key = p ? JSON.stringify(p) : '';
+      this.paths = p ? samplablePaths(p) : [];
+      this.brazilian = p
+        ? p.layers.flatMap((_, i) => {
+            const b = brazilianVariable(p, i);
+            return b.spec === null ? [] : [{ i, n: b.n }];
+          })
+        : [];
+    }
     // An edit while a run is going makes that run stale: cancel it.
     if (changed.has('project') && this.run.kind === 'running' && this.key !== this.runningKey) {
       this.abort?.abort();
@@ -145,10 +165,18 @@ export class UncertaintySection extends LitElement {
       const result = await this.runner(project, {}, {
         signal: abort.signal,
         onProgress: (done, total) => {
-          if (this.abort === abort) this.run = { kind: 'running', done, total };
+          if (this.abort !== abort) return;
+          this.pendingProgress = { done, total };
+          // A run reports every chunk: redraw the bar at most 4 times a second (each redraw is a
+          // style and layout pass on the main thread, which typing elsewhere must not wait for).
+          this.progressFrame ||= window.setTimeout(() => {
+            this.progressFrame = 0;
+            if (this.abort === abort && this.pendingProgress && this.run.kind === 'running') this.run = { kind: 'running', ...this.pendingProgress };
+          }, 250);
         },
       });
       if (this.abort !== abort) return;
+      performance.mark('lamina:uncertainty-result'); // the result is here; rendering it follows
       this.last = { result, key };
       this.run = { kind: 'done', result, key };
     } catch (err) {
@@ -214,11 +242,8 @@ export class UncertaintySection extends LitElement {
         <td><button type="button" aria-label=${`Remove ${v.path}`} @click=${() => this.setVariables(vars.filter((_, k) => k !== j))}>Remove</button></td>
       </tr>`;
     });
-    const suggestions = samplablePaths(project).filter((p) => !vars.some((v) => v.path === p));
-    const brazilian = project.layers.flatMap((_, i) => {
-      const b = brazilianVariable(project, i);
-      return b.spec === null ? [] : [{ i, n: b.n }];
-    });
+    const suggestions = this.paths.filter((p) => !vars.some((v) => v.path === p));
+    const brazilian = this.brazilian;
     return html`
       <div class="scroll">
         <table class="vars" data-role="uncertainty-variables">
@@ -259,7 +284,7 @@ export class UncertaintySection extends LitElement {
     return html`<div class="bar" data-role="uncertainty-run">
       ${r.kind === 'running'
         ? html`<button type="button" data-role="cancel-run" @click=${() => this.cancel()}>Cancel</button>
-            <label>Running <progress data-role="run-progress" max=${r.total || 1} value=${r.done}></progress>
+            <label class="progress">Running <progress data-role="run-progress" max=${r.total || 1} value=${r.done}></progress>
             ${r.total ? `${r.done} of ${r.total} samples` : 'starting…'}</label>`
         : html`<button type="button" data-role="start-run" ?disabled=${!canRun} @click=${() => void this.start()}>Run ${this.block ? `${this.block.samples} samples` : ''}</button>`}
       ${!this.runner ? html`<span class="hint">No runner: the uncertainty run is not available here.</span>` : nothing}
@@ -273,8 +298,18 @@ export class UncertaintySection extends LitElement {
     if (!last) return nothing;
     const u = last.result;
     const stale = last.key !== this.key;
-    const target = u.governing?.target ?? null;
     const modes = Object.keys(u.byMode) as Mode[];
+    const span = project.opening.span_m;
+    if (!this.charts || this.charts.for !== u || this.charts.units !== this.units || this.charts.span !== span) {
+      const spanWord = project.opening.type === 'intersection' ? 'entry width' : project.opening.type === 'cantilever' ? 'overhang' : 'span';
+      this.charts = {
+        for: u, units: this.units, span,
+        histogram: fsHistogramSvg(u, { target: u.governing?.target ?? null }),
+        sensitivity: sensitivitySvg(u),
+        pfSpan: u.pfVersusSpan.length > 1 ? pfSpanSvg(u, { units: this.units, currentSpan_m: span, spanWord }) : null,
+      };
+    }
+    const charts = this.charts;
     return html`<div data-role="uncertainty-result" data-stale=${stale ? 'true' : 'false'}>
       ${stale ? html`<p class="stale" role="status">Stale: the project changed after this run — these numbers are for the earlier project. Run again.</p>` : nothing}
       <p><span class="pf" data-role="pf">P_f = ${prob(u.pf)}</span>
@@ -294,11 +329,9 @@ export class UncertaintySection extends LitElement {
           <td>${u.byModeInterval[m] ? `${prob(u.byModeInterval[m]![0])} – ${prob(u.byModeInterval[m]![1])}` : '—'}</td></tr>`)}</tbody>
       </table>
       <div class="charts">
-        <div data-role="fs-histogram">${unsafeSVG(fsHistogramSvg(u, { target }))}</div>
-        <div data-role="sensitivity">${unsafeSVG(sensitivitySvg(u))}</div>
-        ${u.pfVersusSpan.length > 1
-          ? html`<div data-role="pf-span">${unsafeSVG(pfSpanSvg(u, { units: this.units, currentSpan_m: project.opening.span_m, spanWord: project.opening.type === 'intersection' ? 'entry width' : project.opening.type === 'cantilever' ? 'overhang' : 'span' }))}</div>`
-          : nothing}
+        <div data-role="fs-histogram">${unsafeSVG(charts.histogram)}</div>
+        <div data-role="sensitivity">${unsafeSVG(charts.sensitivity)}</div>
+        ${charts.pfSpan ? html`<div data-role="pf-span">${unsafeSVG(charts.pfSpan)}</div>` : nothing}
       </div>
       <details><summary>What P_f means</summary><p>${PF_MEANING}</p></details>
     </div>`;

@@ -45,3 +45,19 @@ describe('designChartSvg', () => {
     expectEscaped(designChartSvg(design(), 'tension', { units: 'SI', title: EVIL }));
   });
 });
+
+describe('designChartSvg with support', () => {
+  it('draws the largest span with and without the support against thickness, named in the key', () => {
+    const c = design();
+    const t = c.thicknesses_m;
+    const s = c.spans_m;
+    const withCurve = { ...c, support: { thicknesses_m: [t[0], t[t.length - 1]], withSupport_m: [s[s.length - 1], s[1]], unsupported_m: [null, s[0]] } };
+    const svg = designChartSvg(withCurve, 'tension', { units: 'SI' });
+    expectWellFormed(svg);
+    expectNoBadNumbers(svg);
+    expectLabels(svg, ['with support', 'without support', 'every counted check']);
+    expect(svg).toMatch(/<path class="support-curve with-support" d="M[\d.,]+L[\d.,]+"/);
+    expect(svg).not.toMatch(/<path class="support-curve unsupported" d="M[\d.,]+L/); // one point only: no line
+    expect(designChartSvg(c, 'tension', { units: 'SI' })).not.toContain('support-curve');
+  });
+});

@@ -71,3 +71,17 @@ describe('fsSpanSvg', () => {
     expect(normalise(fsSpanSvg(curve(), MAX_SPAN, { units: 'SI' }))).toMatchSnapshot();
   });
 });
+
+describe('fsSpanSvg with support', () => {
+  it('draws the least FS/target with this support and unsupported, named in the legend; without support, neither', () => {
+    const base = curve();
+    const withSupport = { ...base, support: { spans_m: [base.spans_m[0], base.spans_m[base.spans_m.length - 1]], withSupport: [3, 0.8], unsupported: [1.2, 0.3] } };
+    const svg = fsSpanSvg(withSupport, MAX_SPAN, { units: 'SI' });
+    expectWellFormed(svg);
+    expectNoBadNumbers(svg);
+    expectLabels(svg, ['with this support', 'without support', 'FS/target of all counted checks']);
+    expect(svg).toMatch(/<path class="support-curve with-support" d="M[\d.,]+L[\d.,]+"/);
+    expect(svg).toMatch(/<path class="support-curve unsupported" d="M[\d.,]+L[\d.,]+" [^>]*stroke-dasharray/);
+    expect(fsSpanSvg(base, MAX_SPAN, { units: 'SI' })).not.toContain('support-curve');
+  });
+});
