@@ -163,8 +163,36 @@ export class LabTestsPanel extends LitElement {
   private readonly view = new NearViewport(this);
   private stripDirty = true;
 
+  /** The lab statistics and strength of layer `i` in `a` (all this panel reads of an analysis). */
+  private analysisKey(a: Analysis | null, i: number): string {
+    if (!a) return '';
+    return JSON.stringify([a.layers.length, a.layers[i]?.lab ?? null, a.report.layers[i]?.strength ?? null]);
+  }
+
+  /**
+   * A new analysis alone (after an edit elsewhere, e.g. a thickness) leaves the panel as it was
+   * unless the shown layer's lab statistics or strength changed: it is then not re-rendered.
+   */
+  protected override shouldUpdate(changed: PropertyValues<this>): boolean {
+    if (changed.size === 1 && changed.has('analysis') && this.project) {
+      const before = changed.get('analysis') as Analysis | null | undefined;
+      const i = this.layerIndex;
+      if (before && this.analysis && this.analysisKey(before, i) === this.analysisKey(this.analysis, i)) return false;
+    }
+    return true;
+  }
+
+  /** Units and the shown layer's lab statistics the strip plot was drawn for (redrawn only when they change). */
+  private stripKey: string | null = null;
+
   protected override willUpdate(changed: PropertyValues<this>): void {
-    if (changed.has('analysis') || changed.has('units') || changed.has('layer') || changed.has('project')) this.stripDirty = true;
+    if (changed.has('analysis') || changed.has('units') || changed.has('layer') || changed.has('project')) {
+      const key = `${this.units} ${JSON.stringify(this.lab)}`;
+      if (key !== this.stripKey) {
+        this.stripDirty = true;
+        this.stripKey = key;
+      }
+    }
     if (this.stripDirty && this.view.near) {
       this.stripDirty = false;
       const lab = this.lab;

@@ -12,6 +12,15 @@ import { strataColumnSvg } from '../../report/charts/strata-column';
 import { tokens } from '../styles/tokens';
 import { sheet } from '../styles/sheet';
 
+/**
+ * What the strata column draws of an analysis (`strataColumnSvg` reads only these): the bending
+ * groups, the per-layer group numbers and the predicted bed separations. Equal keys, equal drawing.
+ */
+export function columnAnalysisKey(analysis: Analysis | null): string {
+  if (!analysis) return '';
+  return JSON.stringify([analysis.groups?.map((g) => [g.first, g.last]) ?? null, analysis.report.layers.map((l) => l.group), analysis.separations]);
+}
+
 export class StrataColumn extends LitElement {
   static override properties = {
     project: { attribute: false },
@@ -25,6 +34,8 @@ export class StrataColumn extends LitElement {
   units: UnitSystem = 'SI';
   private svg = '';
   private failure = '';
+  /** The inputs of the drawn SVG: it is redrawn only when one of them changes. */
+  private drawn: { project: Project; units: UnitSystem; key: string } | null = null;
 
   static override styles = [
     tokens,
@@ -40,11 +51,18 @@ export class StrataColumn extends LitElement {
     if (changed.has('project') || changed.has('analysis') || changed.has('units')) {
       if (!this.project) {
         this.svg = '';
+        this.drawn = null;
         return;
       }
+      // An analysis of another project (stale while the next one runs) would bracket the wrong layers.
+      const analysis = this.analysis && this.analysis.report.layers.length === this.project.layers.length ? this.analysis : null;
+      // A new analysis of the same project usually brackets the same groups and separations: the
+      // drawing is then the same, and is not rebuilt.
+      const key = columnAnalysisKey(analysis);
+      const d = this.drawn;
+      if (d && d.project === this.project && d.units === this.units && d.key === key) return;
+      this.drawn = { project: this.project, units: this.units, key };
       try {
-        // An analysis of another project (stale while the next one runs) would bracket the wrong layers.
-        const analysis = this.analysis && this.analysis.report.layers.length === this.project.layers.length ? this.analysis : null;
         this.svg = strataColumnSvg(this.project, analysis, { units: this.units });
         this.failure = '';
       } catch (err) {

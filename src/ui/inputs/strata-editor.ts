@@ -8,7 +8,7 @@
  * @fires project-edit - one layer field changed
  * @fires project-replace - a layer was added, removed or moved
  */
-import { LitElement, html, css, nothing, type TemplateResult } from 'lit';
+import { LitElement, html, css, nothing, type PropertyValues, type TemplateResult } from 'lit';
 import type { Layer, Project, RockClass } from '../../model/types';
 import type { Quantity, UnitSystem } from '../../model/units';
 import type { Analysis } from '../../analysis/types';
@@ -18,7 +18,7 @@ import { sheet } from '../styles/sheet';
 import { errorFor, selectField, textField } from './field-templates';
 import { fireReplace } from './events';
 import './quantity-input';
-import './strata-column';
+import { columnAnalysisKey } from './strata-column';
 
 interface NumberRow {
   kind: 'number';
@@ -356,6 +356,19 @@ export class StrataEditor extends LitElement {
       <button type="button" class="add" @click=${this.addLayer}>+ Add a layer above</button>
       <p class="hint">Layer 1 is the immediate roof; layers are listed upward. A new layer starts from a generic 0.5 m sedimentary bed with 3 MPa Brazilian strength — replace every value.</p>
     </div>`;
+  }
+
+  /**
+   * A new analysis alone (the usual case after an edit: the inputs rendered at the edit) changes
+   * nothing here unless it changes the layers' bending groups or bed separations (the group
+   * labels and the strata column): the editor and its column are then not re-rendered.
+   */
+  protected override shouldUpdate(changed: PropertyValues<this>): boolean {
+    if (changed.size === 1 && changed.has('analysis')) {
+      const before = changed.get('analysis') as Analysis | null | undefined;
+      if (before && this.analysis && columnAnalysisKey(before) === columnAnalysisKey(this.analysis)) return false;
+    }
+    return true;
   }
 
   private goToCard(e: Event, i: number): void {

@@ -240,7 +240,15 @@ export class TraceDialog extends LitElement {
       </div>`;
   }
 
+  /** Closed, a new report or units change nothing on screen: the dialog is not re-rendered. */
+  protected override shouldUpdate(changed: PropertyValues): boolean {
+    if (this.open || changed.has('open')) return true;
+    for (const k of changed.keys()) if (k !== 'report' && k !== 'units') return true;
+    return false;
+  }
+
   override render() {
+    if (!this.open) return html`<dialog aria-labelledby="trace-title" @close=${this.onClose}></dialog>`;
     const trace = this.report?.trace ?? [];
     const entry = trace.find((t) => t.path === this.current);
     // The steps the opened number uses (stays the same list while stepping through it).

@@ -250,8 +250,10 @@ export class ProjectStore {
       chartPending: true,
       notice: migrationNotice(checked.warnings) ?? (source ? `${/^(File|Demo|Project link)\b/.test(source) ? 'Loaded' : 'Applied'}: ${source}.` : this.state.notice),
     });
-    this.autosave(checked.project);
+    // The analysis is posted first: the autosave (a synchronous storage write) runs while the
+    // worker computes.
     this.requestAnalysis();
+    this.autosave(checked.project);
     return true;
   }
 
@@ -269,8 +271,8 @@ export class ProjectStore {
     this.deps.mark?.('lamina:edit');
     this.clearRefused(null);
     this.set({ project, pending: true, chartPending: true });
-    this.autosave(project);
     this.requestAnalysis();
+    this.autosave(project);
     return true;
   }
 
