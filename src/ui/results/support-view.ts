@@ -65,9 +65,19 @@ export class SupportView extends LitElement {
       }
       dl {
         display: grid;
-        grid-template-columns: max-content 1fr;
+        grid-template-columns: minmax(0, max-content) minmax(8rem, 1fr);
         gap: 0.15rem 1rem;
         margin: 0.3rem 0;
+      }
+      /* Narrow screens: each label above its value, so no value is pushed off the page. */
+      @media (max-width: 34rem) {
+        dl {
+          grid-template-columns: minmax(0, 1fr);
+          gap: 0 0;
+        }
+        dd {
+          margin-bottom: 0.35rem;
+        }
       }
       dt {
         font-weight: 600;
