@@ -7,6 +7,28 @@ export default defineConfig({
   // only for a study: src/ui/compute/compute-core.ts).
   worker: { format: 'es' },
   server: { host: '127.0.0.1', port: 5173 },
+  // The dev server pre-bundles every dependency at start-up. Left to discovery, a dependency
+  // first met in a lazily loaded module or in the worker makes Vite re-bundle mid-session and
+  // answer the page's pending imports with 504 "Outdated Optimize Dep".
+  optimizeDeps: {
+    entries: ['index.html', 'src/ui/compute/compute.worker.ts'],
+    include: [
+      'lit',
+      'lit/decorators.js',
+      'lit/directives/style-map.js',
+      'lit/directives/unsafe-html.js',
+      'lit/directives/unsafe-svg.js',
+      'mathjs',
+      'd3-array',
+      'd3-contour',
+      'd3-dsv',
+      'd3-geo',
+      'd3-interpolate',
+      'd3-random',
+      'd3-scale',
+      'd3-shape',
+    ],
+  },
   test: {
     projects: [
       {

@@ -19,6 +19,7 @@ import { empiricalReport, supportReport } from './support-report';
 import { suspensionOf } from './support';
 import { supportNeeded } from './support-needed';
 import type { StrengthChain } from '../strength/chain';
+import { inOpeningWords } from '../model/span-wording';
 
 const MPa = 1e-6;
 const kPa = 1e-3;
@@ -37,7 +38,7 @@ function analyseWithState(project: Project): { analysis: Analysis; chains: Stren
   const p = projectToSI(project);
   const state = evaluate(p);
   const warnings: Warning[] = [];
-  const trace = new TraceBuilder();
+  const trace = new TraceBuilder(project.opening.type);
 
   const groups: GroupDetail[] = state.shared.groups.map((g) => ({
     first: g.first,
@@ -159,7 +160,7 @@ function analyseWithState(project: Project): { analysis: Analysis; chains: Stren
     // The support needed is a separate search (`withSupportNeeded`): the plain analysis stays one pass.
     support: supportReport(project, p, state, trace, warnings, { needed: null, reason: null }),
     empirical: empiricalReport(project, p, state, trace),
-    warnings,
+    warnings: warnings.map((w) => ({ ...w, message: inOpeningWords(w.message, project.opening.type) })),
     trace: trace.entries,
   };
   return { analysis: { report, layers: details, groups, grouping, separations }, chains: state.layers.map((l) => l.chain) };

@@ -33,6 +33,7 @@ import { evaluate } from './evaluate';
 import { projectToSI } from './inputs';
 import type { StrengthChain } from '../strength/chain';
 import { SPAN_CAP_M } from './span-finder';
+import { inOpeningWords } from '../model/span-wording';
 
 export const NO_SUPPORT_NEEDED = 'no support needed';
 
@@ -237,7 +238,7 @@ export function supportNeeded(project: Project, hints: SupportNeededHints = {}):
     }
   }
   return {
-    needed: { standing_kPa: pa === null ? null : pa / 1e3, boltSpacing_m: spacing, boltLength_m: length, maxSpan_m: span > 0 ? span : null, reasons },
+    needed: { standing_kPa: pa === null ? null : pa / 1e3, boltSpacing_m: spacing, boltLength_m: length, maxSpan_m: span > 0 ? span : null, reasons: reasons.map((r) => inOpeningWords(r, project.opening.type)) },
     reason: null,
   };
 }

@@ -4,6 +4,7 @@
  * published source. Evaluating `formula` with the values (as mathjs units) reproduces `result`
  * (a test checks this for every entry), so the trace cannot drift from the computation.
  */
+import { inOpeningWords } from '../model/span-wording';
 import type { TraceEntry } from '../model/types';
 
 export type TraceValues = Record<string, [number, string]>;
@@ -11,17 +12,20 @@ export type TraceValues = Record<string, [number, string]>;
 export class TraceBuilder {
   readonly entries: TraceEntry[] = [];
 
+  /** The opening type words the labels and notes (an overhang's entries never name a span). */
+  constructor(private readonly openingType = 'beam') {}
+
   add(path: string, label: string, formula: string, values: TraceValues, result: number, unit: string, source: string, note?: string): TraceEntry {
     const entry: TraceEntry = {
       path,
-      label,
+      label: inOpeningWords(label, this.openingType),
       formula,
       values: Object.fromEntries(Object.entries(values).map(([k, [value, u]]) => [k, { value, unit: u }])),
       result,
       unit,
       source,
     };
-    if (note) entry.note = note;
+    if (note) entry.note = inOpeningWords(note, this.openingType);
     this.entries.push(entry);
     return entry;
   }

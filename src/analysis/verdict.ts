@@ -9,6 +9,7 @@
  */
 import type { CheckRow, CheckStatusKind, Governing, Project, Report } from '../model/types';
 import { formatQuantity, type UnitSystem } from '../model/units';
+import { inOpeningWords, openingWords } from '../model/span-wording';
 import { MODE_NAME, STATUS_SYMBOL, VOUSSOIR_MODES } from './check-labels';
 
 export type VerdictSentenceId = 'governing' | 'intact' | 'cracked' | 'basis' | 'result' | 'span';
@@ -54,7 +55,7 @@ const fsAgainst = (row: CheckRow): string => `FS ${fix(row.fs as number)} agains
 const who = (row: CheckRow): string => layerPhrase(row.layerIndex, row.layer);
 
 export function spanWordOf(project: Project): Verdict['spanWord'] {
-  return project.opening.type === 'cantilever' ? 'overhang' : project.opening.type === 'intersection' ? 'entry width' : 'span';
+  return openingWords(project.opening.type).span as Verdict['spanWord'];
 }
 
 function governingSentence(report: Report): string {
@@ -166,13 +167,13 @@ export function buildVerdict(project: Project, report: Report, units: UnitSystem
     below: counted.filter((r) => r.status === 'below').length,
     spanWord: spanWordOf(project),
     largestSpan_m: report.maxSpan_m?.governing ?? null,
-    sentences: [
+    sentences: ([
       { id: 'governing', strong: true, text: governingSentence(report) },
       { id: 'intact', strong: false, text: intactSentence(project, report) },
       { id: 'cracked', strong: false, text: crackedSentence(project, report) },
       { id: 'basis', strong: false, text: basisSentence(project) },
       { id: 'result', strong: true, text: resultSentence(report) },
       { id: 'span', strong: false, text: spanSentence(project, report, units) },
-    ],
+    ] satisfies VerdictSentence[]).map((s) => ({ ...s, text: inOpeningWords(s.text, project.opening.type) })),
   };
 }

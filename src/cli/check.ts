@@ -20,6 +20,7 @@ import { writeOutput } from './output';
 import { caution, checkText, spanLines, supportLines } from './text-report';
 import { samplingFlags, uncertaintyFor, uncertaintyLines, type SamplingFlags } from './uncertainty';
 import { ProjectError } from '../model/validate';
+import { openingWords } from '../model/span-wording';
 
 export function laminaVersion(): string {
   return version;
@@ -174,14 +175,15 @@ export async function runSpan(args: ParsedArgs, io: Io): Promise<ExitCode> {
   if (args.flags['--json']) {
     io.out(JSON.stringify({ schema: 'lamina-span/1', span_m: project.opening.span_m, maxSpan_m: maxSpan, minimumThickness: { layer: project.layers[layer - 1].name, thickness_m: minT } }, null, 2) + '\n');
   } else {
+    const words = openingWords(project.opening.type);
     const lines = [
       `Lamina span — ${project.title}`,
       caution(),
       '',
-      `Current span: ${formatQuantity(project.opening.span_m, 'length', units)}${project.opening.type === 'slab' ? ' (slab: aspect ratio held fixed)' : ''}`,
-      ...spanLines(maxSpan, units),
+      `Current ${words.span}: ${formatQuantity(project.opening.span_m, 'length', units)}${project.opening.type === 'slab' ? ' (slab: aspect ratio held fixed)' : ''}`,
+      ...spanLines(maxSpan, units, words.span),
       '',
-      `Minimum thickness of layer ${layer} (${project.layers[layer - 1].name}) at the current span: ${minT === null ? 'none up to the search limit meets every target' : formatQuantity(minT, 'length', units)} (now ${formatQuantity(project.layers[layer - 1].thickness_m, 'length', units)})`,
+      `Minimum thickness of layer ${layer} (${project.layers[layer - 1].name}) at the current ${words.span}: ${minT === null ? 'none up to the search limit meets every target' : formatQuantity(minT, 'length', units)} (now ${formatQuantity(project.layers[layer - 1].thickness_m, 'length', units)})`,
       '',
       caution(),
       '',
@@ -220,7 +222,7 @@ export async function runSupport(args: ParsedArgs, io: Io): Promise<ExitCode> {
       `Lamina support — ${project.title}`,
       caution(),
       '',
-      `Span: ${formatQuantity(project.opening.span_m, 'length', units)}`,
+      `${openingWords(project.opening.type).Span}: ${formatQuantity(project.opening.span_m, 'length', units)}`,
       ...(lines.length ? lines : ['No support given and none searched.']),
       '',
       caution(),

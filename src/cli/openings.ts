@@ -10,7 +10,8 @@ import { csvFormatRows } from 'd3-dsv';
 import { checkOpening, type OpeningResult } from '../analysis/openings';
 import { parseOpeningsCsv, type OpeningField, type OpeningsCsv } from '../model/openings-csv';
 import { displayUnit, fileUnit, formatQuantity, toDisplay, unitLabel, type Quantity, type UnitSystem } from '../model/units';
-import { MODE_NAME } from '../analysis/check-labels';
+import { modeName } from '../analysis/check-labels';
+import { openingWords } from '../model/span-wording';
 import { numberText } from '../report/number-text';
 import { UsageError, type ParsedArgs } from './args';
 import { neutraliseCsvText as safeCsvText } from '../report/csv-cell';
@@ -78,11 +79,14 @@ function textTable(results: readonly OpeningResult[], units: UnitSystem): string
   const L = (v: number | null) => formatQuantity(v, 'length', units);
   const rows = results.map((r) => [
     String(r.row), r.name, r.opening.type, `${L(r.opening.span_m)}${r.opening.length_m !== null ? ` × ${L(r.opening.length_m)}` : ''}`,
-    r.governing ? `${MODE_NAME[r.governing.mode]} in ${r.governing.layer}` : 'no check applies',
+    r.governing ? `${modeName(r.governing.mode, r.opening.type)} in ${r.governing.layer}` : 'no check applies',
     r.governing ? numberText(r.governing.fs, 3) : '—', r.governing ? numberText(r.governing.target, 3) : '—',
     r.status === 'meets' ? 'meets ✓' : r.status === 'below' ? 'below ✗' : 'n/a –', L(r.maxSpan_m),
   ]);
-  const header = ['row', 'name', 'type', 'span', 'governing', 'FS', 'target', 'status', 'largest span'];
+  // The length column in the openings' own word: "overhang" when every row is a cantilever.
+  const words = new Set(results.map((r) => openingWords(r.opening.type).span === 'overhang' ? 'overhang' : 'span'));
+  const word = [...words].sort().reverse().join(' or ') || 'span';
+  const header = ['row', 'name', 'type', word, 'governing', 'FS', 'target', 'status', `largest ${word}`];
   const widths = header.map((h, i) => Math.max(h.length, ...rows.map((r) => r[i].length)));
   const line = (cells: string[]) => '  ' + cells.map((c, i) => c.padEnd(widths[i])).join('  ').trimEnd();
   return [line(header), ...rows.map(line)];

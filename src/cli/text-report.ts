@@ -5,6 +5,7 @@ import { CAUTION } from '../model/caution';
 import { formatQuantity, type UnitSystem } from '../model/units';
 import { modeLabel, STATUS_TEXT } from '../analysis/check-labels';
 import { buildVerdict } from '../analysis/verdict';
+import { openingWords } from '../model/span-wording';
 import { numberText } from '../report/number-text';
 
 const fs = (x: number | null) => (x === null ? '—' : numberText(x, 3));
@@ -18,13 +19,15 @@ export function caution(): string {
 }
 
 export function spanLines(maxSpan: MaxSpanReport | null, units: UnitSystem, word = 'span'): string[] {
+  // An overhang has no arch, so sliding is not applicable to it at all.
+  const slidingWhy = word === 'overhang' ? ' (an overhang forms no arch)' : ` (FS sliding rises with ${word}: never limits it)`;
   if (!maxSpan) return [`Largest ${word}: not computed.`];
   const q = (v: number | null) => (v === null ? 'n/a' : formatQuantity(v, 'length', units));
   return [
     `Largest ${word} meeting the targets (modes counted at the current ${word}; all else fixed, to 1 mm; search cap 100 m):`,
     `  tension       ${q(maxSpan.tension)}`,
     `  crushing      ${q(maxSpan.crushing)}`,
-    `  sliding       ${q(maxSpan.sliding)}${maxSpan.sliding === null ? ' (FS sliding rises with span: never limits it)' : ''}`,
+    `  sliding       ${q(maxSpan.sliding)}${maxSpan.sliding === null ? slidingWhy : ''}`,
     `  snap-through  ${q(maxSpan.snapThrough)}`,
     `  deflection    ${q(maxSpan.deflection)}`,
     `  governing     ${q(maxSpan.governing)}`,
@@ -34,6 +37,7 @@ export function spanLines(maxSpan: MaxSpanReport | null, units: UnitSystem, word
 /** The support results and the empirical cross-check, as the report holds them (nothing re-derived). */
 export function supportLines(project: Project, report: Report, units: UnitSystem): string[] {
   const lines: string[] = [];
+  const words = openingWords(project.opening.type);
   const s = report.support;
   const b = project.support.bolts;
   if (s && b) {
@@ -63,14 +67,14 @@ export function supportLines(project: Project, report: Report, units: UnitSystem
       `  smallest standing support       ${q(n.standing_kPa, 'pressure')}`,
       `  largest square bolt spacing     ${q(n.boltSpacing_m, 'length')}`,
       `  shortest bolt length            ${q(n.boltLength_m, 'length')}`,
-      `  largest span with this support  ${q(n.maxSpan_m, 'length')}`,
+      `  ${`largest ${words.span} with this support`.padEnd(32)}${q(n.maxSpan_m, 'length')}`,
       ...n.reasons.map((x) => `  ${x}`),
     );
   }
   const e = report.empirical;
   if (e) {
     lines.push(
-      `Empirical cross-check (Q system, not counted): Q ${numberText(e.q, 3)}; largest unsupported span ${formatQuantity(e.unsupportedSpan_m, 'length', units)}; bolt length ${formatQuantity(e.boltLength_m, 'length', units)}.`,
+      `Empirical cross-check (Q system, not counted): Q ${numberText(e.q, 3)}; largest unsupported ${words.span} ${formatQuantity(e.unsupportedSpan_m, 'length', units)}; bolt length ${formatQuantity(e.boltLength_m, 'length', units)}.`,
       `  ${e.note}`,
     );
   }
@@ -100,7 +104,7 @@ export function checkText(project: Project, analysis: Analysis, units: UnitSyste
     lines.push(`Layer ${i + 1}: ${layer.name} — thickness ${L(layer.thickness_m)}, bending group ${layer.group + 1}, load ${P(layer.load_kPa)}`);
     lines.push(
       `  Strength: lab ${S(st.lab_MPa)} → direct ${S(st.direct_MPa)} → characteristic ${S(st.characteristic_MPa)} → block ${S(st.block_MPa)}; rock mass ${S(st.mass_MPa)} → design ${S(st.design_MPa)}`,
-      `            RQD ${numberText(st.rqd, 3)} %, GSI ${numberText(st.gsi, 3)}${st.crossJointed ? ', cross-jointed across the span (no tensile strength)' : ''}`,
+      `            RQD ${numberText(st.rqd, 3)} %, GSI ${numberText(st.gsi, 3)}${st.crossJointed ? `, cross-jointed across the ${verdict.spanWord} (no tensile strength)` : ''}`,
     );
     const e = layer.elastic;
     lines.push(

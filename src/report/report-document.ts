@@ -73,7 +73,7 @@ export function buildReportDocument(input: ReportInput): ReportDocument {
       chartsSection(ctx),
       ...[uncertaintySection(ctx)].filter((s) => s !== null),
       warningsSection(ctx),
-      ...(meta.appendix ? [strengthSection(ctx), traceSection(ctx), assumptionsSection()] : []),
+      ...(meta.appendix ? [strengthSection(ctx), traceSection(ctx), assumptionsSection(project.opening.type)] : []),
       closingSection(),
     ],
   };

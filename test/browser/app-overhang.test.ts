@@ -5,7 +5,7 @@
  * and no arch). Source of the rule: the trade's own words (an overhang is not a span).
  */
 import { describe, expect, it } from 'vitest';
-import { openApp, unstick, waitForResults, appSession } from './app-page';
+import { openApp, unstick, waitForResults, appSession, showReport } from './app-page';
 
 const session = appSession();
 
@@ -36,7 +36,7 @@ function deepText(selector: string) {
 }
 
 function spanWords(text: string): string[] {
-  return [...text.matchAll(/.{0,50}\b(spans?|abutments?)\b.{0,30}/gi)].map((m) => m[0]);
+  return [...text.matchAll(/.{0,50}\b(mid-?spans?|spans?|abutments?)\b.{0,30}/gi)].map((m) => m[0]);
 }
 
 describe('app: an overhang is called an overhang', () => {
@@ -45,6 +45,7 @@ describe('app: an overhang is called an overhang', () => {
     await unstick(page);
     await page.locator('project-bar #preset').selectOption('quarry-bench-overhang');
     await waitForResults(page);
+    await showReport(page);
     await page.locator('report-view [data-role="with-trace"]').uncheck();
     await page.locator('report-view [data-role="report"] section.lr-section-checks').waitFor({ timeout: 20_000 });
     await expect.poll(() => page.locator('report-view [data-role="report"] section.lr-section-trace').count()).toBe(0);
@@ -62,4 +63,36 @@ describe('app: an overhang is called an overhang', () => {
     expect(errors).toEqual([]);
     await context.close();
   });
+
+  it('quarry bench: the input help texts, the strength chain, the support needed and the full report with its appendix say overhang, never span, abutment or midspan', async () => {
+    const { page, context, errors } = await openApp(session.browser, session.url, { viewport: { width: 1280, height: 900 } });
+    await unstick(page);
+    await page.locator('project-bar #preset').selectOption('quarry-bench-overhang');
+    await waitForResults(page);
+    // The support needed is a second search: wait for its answer.
+    await expect.poll(() => page.evaluate(deepText('section:has(#support-h)'), 'section:has(#support-h)'), { timeout: 60_000 }).toContain('with this support');
+    await showReport(page);
+    await page.locator('report-view [data-role="with-trace"]').check();
+    await page.locator('report-view [data-role="report"] section.lr-section-trace').waitFor({ timeout: 60_000 });
+    const parts = {
+      opening: 'section:has(#opening-h)',
+      strata: 'section:has(#strata-h)',
+      strength: 'section:has(#strength-h)',
+      support: 'section:has(#support-h)',
+      report: 'article.lamina-report',
+    };
+    const texts: Record<string, string> = {};
+    for (const [name, sel] of Object.entries(parts)) {
+      texts[name] = await page.evaluate(deepText(sel), sel);
+      expect(spanWords(texts[name]), `${name} says span/abutment/midspan`).toEqual([]);
+    }
+    // The help texts name the overhang; the support and the report appendix are there and say so.
+    expect(texts.opening).toContain('along the overhang, compression positive');
+    expect(texts.strength).toContain('less than the overhang');
+    expect(texts.support).toContain('Largest overhang with this support');
+    for (const heading of ['Appendix A', 'Appendix B', 'Appendix C']) expect(texts.report).toContain(heading);
+    expect(texts.report).toContain('Overhang search');
+    expect(errors).toEqual([]);
+    await context.close();
+  }, 240_000);
 });

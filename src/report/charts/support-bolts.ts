@@ -13,6 +13,7 @@ import { scaleLinear } from 'd3-scale';
 import type { Project, Report } from '../../model/types';
 import type { UnitSystem } from '../../model/units';
 import { ID, INK, PALETTE, axis, axisLabel, dimension, displayUnit, emptyNote, escapeXml, formatValue, legend, line, num, svgDocument, text } from './svg';
+import { openingWords } from '../../model/span-wording';
 
 export interface SupportBoltsOptions {
   units: UnitSystem;
@@ -170,7 +171,7 @@ export function supportBoltsSvg(project: Project, report: Report | null, options
     if (r === 'bonded' && anchor === i) parts.push(text(labelX, placed[i] + 23, 'anchor layer', { size: 10, fill: INK.muted }));
   });
 
-  const note = sameScale ? 'Drawn to one scale across and up.' : 'Heights to scale; the span has its own horizontal scale.';
+  const note = sameScale ? 'Drawn to one scale across and up.' : `Heights to scale; the ${openingWords(project.opening.type).span} has its own horizontal scale.`;
   parts.push(text(left, roofY + voidDepth + 58, note, { size: 9, fill: INK.muted, italic: true }));
   if (s && s.anchorLayer === null) {
     parts.push(text(left, roofY + voidDepth + 72, 'No anchorage credited: the anchorage zone crosses an interface.', { size: 10, weight: 'bold', fill: PALETTE.vermillion }));

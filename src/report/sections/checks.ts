@@ -1,5 +1,6 @@
 /** The check table and the largest spans (summary); the notes and layer results behind them (appendix A). */
 import type { CheckRow, Mode } from '../../model/types';
+import { isOverhang, openingWords } from '../../model/span-wording';
 import { MODE_LABEL, modeLabel, STATUS_LEGEND, STATUS_TEXT } from '../../analysis/check-labels';
 import type { Verdict } from '../../analysis/verdict';
 import type { Block, Cell, Section } from '../document-types';
@@ -66,7 +67,7 @@ export function checksSection(ctx: SectionContext): Section {
   blocks.push({ kind: 'heading', level: 3, text: `Largest ${word} per mode` });
   const spans = report.maxSpan_m;
   if (spans === null) {
-    blocks.push({ kind: 'paragraph', text: 'No span search was run for this project.' });
+    blocks.push({ kind: 'paragraph', text: `No ${openingWords(project.opening.type).span} search was run for this project.` });
   } else {
     const modes: Array<Mode | 'governing'> = ['tension', 'crushing', 'sliding', 'snapThrough', 'deflection', 'governing'];
     blocks.push({
@@ -97,14 +98,16 @@ export function resultBlocks(ctx: SectionContext): Block[] {
     rows: ctx.rows.map((r) => [textCell(`${r.layerIndex + 1}`), textCell(modeLabel(r.mode, ctx.project.opening.type)), textCell(r.reason ? `not counted: ${r.reason} — ${r.note}` : r.note)]),
   });
   blocks.push({ kind: 'heading', level: 3, text: 'Intact beam results' });
+  // An overhang has a root and a free end, no midspan: its bending tension is at the root.
+  const overhang = isOverhang(project.opening.type);
   blocks.push({
     kind: 'table',
     caption: 'Elastic beam per layer (net of horizontal stress, tension positive)',
     columns: [
       { title: 'Layer' }, { title: 'Group', numeric: true },
       { title: titleWithUnit('Load carried', 'pressure', units), numeric: true },
-      { title: titleWithUnit('Abutment/root tension', 'stress', units), numeric: true },
-      { title: titleWithUnit('Midspan tension', 'stress', units), numeric: true },
+      { title: titleWithUnit(overhang ? 'Root tension' : 'Abutment/root tension', 'stress', units), numeric: true },
+      ...(overhang ? [] : [{ title: titleWithUnit('Midspan tension', 'stress', units), numeric: true }]),
       { title: titleWithUnit('Max tension', 'stress', units), numeric: true },
       { title: 'At' },
       { title: titleWithUnit('Deflection', 'deflection', units), numeric: true },
@@ -112,7 +115,7 @@ export function resultBlocks(ctx: SectionContext): Block[] {
     ],
     rows: report.layers.map((l, i): Cell[] => [
       textCell(`${i + 1} ${l.name}`), nCell(l.group + 1, 3), qCell(l.load_kPa, 'pressure', units),
-      qCell(l.elastic.abutmentTension_MPa, 'stress', units), qCell(l.elastic.midspanTension_MPa, 'stress', units),
+      qCell(l.elastic.abutmentTension_MPa, 'stress', units), ...(overhang ? [] : [qCell(l.elastic.midspanTension_MPa, 'stress', units)]),
       qCell(l.elastic.maxTension_MPa, 'stress', units), textCell(l.elastic.at),
       qCell(l.elastic.deflection_mm, 'deflection', units), qCell(l.elastic.bucklingStress_MPa, 'stress', units),
     ]),

@@ -4,6 +4,7 @@
  * formulas are in the calculation trace (appendix B), once.
  */
 import type { Block, Cell, Section } from '../document-types';
+import { openingWords } from '../../model/span-wording';
 import { quantityText, titleWithUnit } from '../format';
 import { numberText } from '../number-text';
 import { strengthCharts } from './charts';
@@ -41,7 +42,7 @@ export function strengthSection(ctx: SectionContext): Section {
               `${b.clamped ? ` (clamped from ${quantityText(b.dEffRaw_mm, 'smallLength', units)} to the 10–200 mm range of the fit and ≥ d_lab)` : ''}, factor ${numberText(b.factor)}`,
           },
           { key: 'Modulus used in the mechanics', value: quantityText(detail.modulusUsed_GPa, 'modulus', units) },
-          { key: 'Cross-jointed at this span', value: layer.strength.crossJointed ? 'yes — no tensile strength across the joints (design = 0)' : 'no' },
+          { key: `Cross-jointed at this ${openingWords(ctx.project.opening.type).span}`, value: layer.strength.crossJointed ? 'yes — no tensile strength across the joints (design = 0)' : 'no' },
           { key: 'Design tensile strength', value: quantityText(layer.strength.design_MPa, 'stress', units) },
         ],
       });

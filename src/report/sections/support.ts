@@ -6,6 +6,7 @@
  * drawing (`charts/support-bolts.ts`) follows the pattern's results.
  */
 import { MODE_LABEL, STATUS_TEXT, SUPPORT_MODES } from '../../analysis/check-labels';
+import { openingWords } from '../../model/span-wording';
 import { formatQuantity } from '../../model/units';
 import { numberText } from '../number-text';
 import { supportBoltsSvg } from '../charts/support-bolts';
@@ -60,13 +61,13 @@ export function supportSection(ctx: SectionContext): Section | null {
       { key: 'Smallest standing support', value: q(n.standing_kPa, 'pressure') },
       { key: 'Largest square bolt spacing', value: q(n.boltSpacing_m, 'length') },
       { key: 'Shortest bolt length', value: q(n.boltLength_m, 'length') },
-      { key: 'Largest span with this support', value: q(n.maxSpan_m, 'length') },
+      { key: `Largest ${openingWords(ctx.project.opening.type).span} with this support`, value: q(n.maxSpan_m, 'length') },
     ] });
     for (const reason of n.reasons) blocks.push({ kind: 'paragraph', text: reason });
   }
   const e = r.empirical;
   if (e) {
-    blocks.push({ kind: 'paragraph', text: `Empirical cross-check (Q system, not counted): Q ${numberText(e.q, 3)}; largest unsupported span ${L(e.unsupportedSpan_m)}; bolt length ${L(e.boltLength_m)}. ${e.note}` });
+    blocks.push({ kind: 'paragraph', text: `Empirical cross-check (Q system, not counted): Q ${numberText(e.q, 3)}; largest unsupported ${openingWords(ctx.project.opening.type).span} ${L(e.unsupportedSpan_m)}; bolt length ${L(e.boltLength_m)}. ${e.note}` });
   }
   return { id: 'support', title: 'Support', blocks };
 }

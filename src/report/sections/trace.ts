@@ -1,5 +1,6 @@
 /** Appendix B: the full calculation trace, every entry once, grouped by layer, with the steps of each iteration. */
 import type { TraceEntry } from '../../model/types';
+import { openingWords } from '../../model/span-wording';
 import type { Block, Section } from '../document-types';
 import { traceBlock } from '../trace-block';
 import { stepsChart, stepsTable } from '../trace-steps';
@@ -17,7 +18,7 @@ export function traceSection(ctx: SectionContext): Section {
     const g = traceGroup(entry);
     if (g !== group) {
       const name = ctx.analysis.report.layers[g]?.name;
-      blocks.push({ kind: 'heading', level: 3, text: name !== undefined ? `Layer ${g + 1}: ${name}` : 'Whole roof: groups, governing check and largest spans' });
+      blocks.push({ kind: 'heading', level: 3, text: name !== undefined ? `Layer ${g + 1}: ${name}` : `Whole roof: groups, governing check and largest ${openingWords(ctx.project.opening.type).spans}` });
       group = g;
     }
     blocks.push(traceBlock(entry, ctx.units));

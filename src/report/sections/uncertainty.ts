@@ -12,6 +12,7 @@ import type { Block, Section } from '../document-types';
 import { numberText } from '../number-text';
 import { textCell } from './cells';
 import type { SectionContext } from './context';
+import { openingWords } from '../../model/span-wording';
 
 const prob = (p: number): string => (p === 0 ? '0' : numberText(p, 3));
 const maybe = (v: number | null, digits = 3): string => (v === null ? '—' : numberText(v, digits));
@@ -68,10 +69,11 @@ export function uncertaintySection(ctx: SectionContext): Section | null {
     },
   ];
   if (u.pfVersusSpan.length) {
+    const w = openingWords(ctx.project.opening.type);
     blocks.push({
       kind: 'table',
-      caption: `P_f against span (${u.samplesPerSpan} samples at each span, same seed)`,
-      columns: [{ title: 'Span (m)', numeric: true }, { title: 'P_f', numeric: true }, { title: '95 % interval' }, { title: 'β', numeric: true }],
+      caption: `P_f against ${w.span} (${u.samplesPerSpan} samples at each ${w.span}, same seed)`,
+      columns: [{ title: `${w.Span} (m)`, numeric: true }, { title: 'P_f', numeric: true }, { title: '95 % interval' }, { title: 'β', numeric: true }],
       rows: u.pfVersusSpan.map((p) => [
         { text: numberText(p.span_m, 3), value: p.span_m, numeric: true }, { text: prob(p.pf), value: p.pf, numeric: true },
         textCell(`${prob(p.pfInterval[0])} – ${prob(p.pfInterval[1])}`), { text: maybe(p.beta), value: p.beta, numeric: true },

@@ -17,6 +17,7 @@ import { formGrid } from '../styles/form-grid';
 import { checkboxField, errorFor, quantityField, selectField } from './field-templates';
 import { fireReplace } from './events';
 import './quantity-input';
+import { isOverhang, openingWords } from '../../model/span-wording';
 
 const OPENING_CHOICES = [
   { value: 'beam', label: 'Long opening — roof beam (plane strain)' },
@@ -118,6 +119,7 @@ export class OpeningLoadsForm extends LitElement {
     const p = this.project;
     if (!p) return nothing;
     const o = p.opening;
+    const w = openingWords(o.type);
     const spanLabel = o.type === 'cantilever' ? 'Overhang length' : o.type === 'slab' ? 'Span (short side)' : o.type === 'intersection' ? 'Entry width w1 (narrower)' : 'Span';
     return html`<div class="grid">
       <fieldset>
@@ -160,7 +162,7 @@ export class OpeningLoadsForm extends LitElement {
       <fieldset>
         <legend>Loads</legend>
         ${this.q('Surcharge on top', 'loads.surcharge_kPa', p.loads.surcharge_kPa, 'pressure', { hint: 'extra pressure on the top of the analysed strata' })}
-        ${this.q('Horizontal stress', 'loads.horizontalStress_MPa', p.loads.horizontalStress_MPa, 'stress', { hint: 'along the span, compression positive' })}
+        ${this.q('Horizontal stress', 'loads.horizontalStress_MPa', p.loads.horizontalStress_MPa, 'stress', { hint: `along the ${w.span}, compression positive` })}
         <p class="hint">Standing support and rock bolts: section 6, Support.</p>
       </fieldset>
       <fieldset>
@@ -168,7 +170,7 @@ export class OpeningLoadsForm extends LitElement {
         ${this.q('FS target, tension', 'design.fsTarget.tension', p.design.fsTarget.tension, '', { unitText: '—' })}
         ${this.q('FS target, crushing', 'design.fsTarget.crushing', p.design.fsTarget.crushing, '', { unitText: '—' })}
         ${this.q('FS target, sliding', 'design.fsTarget.sliding', p.design.fsTarget.sliding, '', { unitText: '—' })}
-        ${this.q('Deflection limit δ/t', 'design.deflectionLimitRatio', p.design.deflectionLimitRatio, '', { unitText: '—', hint: 'voussoir midspan deflection / thickness' })}
+        ${this.q('Deflection limit δ/t', 'design.deflectionLimitRatio', p.design.deflectionLimitRatio, '', { unitText: '—', hint: isOverhang(o.type) ? 'voussoir deflection / thickness (an overhang forms no arch)' : 'voussoir midspan deflection / thickness' })}
         ${o.type === 'cantilever'
           ? html`<p class="hint">An overhang has no voussoir arch: only the tension target applies to it.</p>`
           : nothing}

@@ -43,7 +43,7 @@ type Row = NumberRow | SelectRow | { kind: 'band'; label: string; note?: string 
 export const CARD_WIDTH_PX = 640;
 
 /** What λ counts (METHODS §7): shown next to the field in every form. */
-export const LAMBDA_HINT = 'fractures crossing the layer, along the span (not bedding partings)';
+export const LAMBDA_HINT = 'fractures crossing the layer, along the opening (not bedding partings)';
 
 const ROWS: Row[] = [
   { kind: 'band', label: 'Geometry and stiffness' },

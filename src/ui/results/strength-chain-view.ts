@@ -18,6 +18,7 @@ import { NearViewport, chartSlot } from './near-viewport';
 import { displayValue, displayText } from './display-value';
 import { tracedNumber } from './traced-number';
 import { resultsStyles } from './results-styles';
+import { openingWords } from '../../model/span-wording';
 
 const STEP_FIELD: Record<string, string> = {
   lab: 'lab_MPa',
@@ -63,6 +64,7 @@ export class StrengthChainView extends LitElement {
     const d = a.layers[i];
     const input = p.layers[i];
     const u = this.units;
+    const w = openingWords(p.opening.type);
     const st = lr.strength;
     const spacing = input?.jointing.crossJointSpacing_m ?? null;
     const span = p.opening.span_m;
@@ -132,7 +134,7 @@ export class StrengthChainView extends LitElement {
                   <th scope="row">Block size</th>
                   <td class="num">${displayText(d.blockSize.dEff_mm, 'smallLength', u)}</td>
                   <td class="note">
-                    Effective size min(thickness, joint spacing, span) = ${displayText(d.blockSize.dEffRaw_mm, 'smallLength', u)},
+                    Effective size min(thickness, joint spacing, ${w.span}) = ${displayText(d.blockSize.dEffRaw_mm, 'smallLength', u)},
                     ${d.blockSize.clamped ? html`<strong>clamped</strong> to the ${displayText(d.blockSize.dLab_mm, 'smallLength', u)}–${displayText(200, 'smallLength', u)} range of the size law,` : 'inside the size-law range,'}
                     factor (d_lab/d_eff)^0.18 = ${numberText(d.blockSize.factor)} (Hoek &amp; Brown 1980).
                   </td>
@@ -142,11 +144,11 @@ export class StrengthChainView extends LitElement {
             <th scope="row">Cross-jointed</th>
             <td class="num"><strong>${st.crossJointed ? 'yes' : 'no'}</strong></td>
             <td class="note">
-              Rule: a layer is cross-jointed when its cross-joint spacing is less than the span
+              Rule: a layer is cross-jointed when its cross-joint spacing is less than the ${w.span}
               (${spacing === null ? 'no cross-joints recorded' : `${displayText(spacing, 'length', u)} vs ${displayText(span, 'length', u)}`}).
               ${st.crossJointed
                 ? 'No tension is carried across open joints: the design tensile strength is 0 and the voussoir checks decide.'
-                : 'The layer is taken as continuous across the span: the design strength is the smaller of block and rock-mass values.'}
+                : `The layer is taken as continuous across the ${w.span}: the design strength is the smaller of block and rock-mass values.`}
             </td>
           </tr>
         </tbody>

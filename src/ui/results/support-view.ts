@@ -21,6 +21,7 @@ import { tokens } from '../styles/tokens';
 import { sheet } from '../styles/sheet';
 import { resultsStyles } from './results-styles';
 import { displayText } from './display-value';
+import { openingWords } from '../../model/span-wording';
 
 export interface SupportNeededState {
   needed: SupportNeededReport | null;
@@ -132,7 +133,7 @@ export class SupportView extends LitElement {
         <dt>Smallest standing support (bolts as given)</dt><dd data-key="standing">${r.standing_kPa === null ? 'none found' : displayText(r.standing_kPa, 'pressure', this.units)}</dd>
         <dt>Largest square bolt spacing</dt><dd data-key="spacing">${b ? this.len(s) : '— (no bolt pattern)'}</dd>
         <dt>Shortest bolt length</dt><dd data-key="length">${b ? this.len(r.boltLength_m) : '— (no bolt pattern)'}</dd>
-        <dt>Largest span with this support</dt><dd data-key="span">${this.len(r.maxSpan_m)}</dd>
+        <dt>Largest ${openingWords(p.opening.type).span} with this support</dt><dd data-key="span">${this.len(r.maxSpan_m)}</dd>
       </dl>
       <p class="hint">Each search holds every other input; “passes” means every counted check meets its target.</p>
       ${r.reasons.length ? html`<ul class="reasons">${r.reasons.map((x) => html`<li>${x}</li>`)}</ul>` : nothing}
