@@ -99,6 +99,11 @@ describe('<span-finder-view> in the app (coal-room demo)', () => {
 describe('<beam-charts-view> in the app', () => {
   it('off-screen charts are drawn only when scrolled near, in a place held at their size (nothing moves)', async () => {
     const page = await h.open({ width: 1280, height: 700 });
+    // the design chart's data comes from its own worker, after the results
+    await page.waitForFunction(() => {
+      const s = window.__lamina?.state();
+      return !!s && !s.chartPending && s.chart !== null;
+    });
     const boxes = () =>
       page.evaluate(() => {
         const view = document.querySelector('lamina-app')!.shadowRoot!.querySelector('beam-charts-view')!.shadowRoot!;

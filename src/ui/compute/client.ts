@@ -1,12 +1,14 @@
 /**
  * The compute client of the worksheet (`ComputeClient` in ./types.ts).
  *
- * `createWorkerClient()` runs the calculations in two instances of one worker script
- * (`compute.worker.ts`): the EDIT worker answers `analyse` and `chart` for each accepted edit;
- * the RUN worker (started on the first uncertainty run) runs the uncertainty, chunk by chunk.
- * A long run therefore never sits in front of the analysis of the next key. `analyse` and
- * `chart` keep at most one call of each waiting behind the one in the worker: a newer call
- * replaces a waiting one, which resolves `null`.
+ * `createWorkerClient()` runs the calculations in three instances of one worker script
+ * (`compute.worker.ts`), each started on its first call: the EDIT worker answers `analyse`
+ * for each accepted edit; the ASIDE worker answers `chart` (design chart, minimum thickness)
+ * and `support` (the support needed), which take tens of milliseconds; the RUN worker runs the
+ * uncertainty, chunk by chunk. Neither a chart nor a long run therefore sits in front of the
+ * analysis of the next key. `analyse`, `chart` and `support` keep at most one call of each
+ * waiting behind the one in its worker: a newer call replaces a waiting one, which resolves
+ * `null`.
  *
  * `createInThreadClient()` is the same interface on the calling thread (unit tests, node,
  * a browser without Worker); `createComputeClient()` picks the worker when it can and falls
@@ -156,7 +158,7 @@ export const defaultWorkerFactory: WorkerFactory = () =>
   new Worker(new URL('./compute.worker.ts', import.meta.url), { type: 'module', name: 'lamina-compute' });
 
 /**
- * The client over two workers. `onFailure` is called once if the edit worker fails (e.g. it
+ * The client over three workers. `onFailure` is called if the edit or the aside worker fails (e.g. it
  * could not start); every waiting call is rejected with the reason.
  */
 export function createWorkerClient(makeWorker: WorkerFactory = defaultWorkerFactory, onFailure?: (err: Error) => void): ComputeClient {
@@ -167,6 +169,17 @@ export function createWorkerClient(makeWorker: WorkerFactory = defaultWorkerFact
       if (closed) return { id: 0, promise: Promise.reject(new Error('the compute client was closed')) };
       editChannel ??= new WorkerChannel(makeWorker(), onFailure);
       return editChannel.call(...args);
+    },
+  };
+  // Charts and the support needed go to a third instance (started on the first such call):
+  // a design chart takes tens of milliseconds, and in the edit worker it would sit in front
+  // of the next key's analysis.
+  let asideChannel: WorkerChannel | null = null;
+  const aside = {
+    call: (...args: Parameters<WorkerChannel['call']>) => {
+      if (closed) return { id: 0, promise: Promise.reject(new Error('the compute client was closed')) };
+      asideChannel ??= new WorkerChannel(makeWorker(), onFailure);
+      return asideChannel.call(...args);
     },
   };
   let runs: WorkerChannel | null = null;
@@ -181,9 +194,9 @@ export function createWorkerClient(makeWorker: WorkerFactory = defaultWorkerFact
   };
   const analyse = new LatestOnly<Project, AnalysisOutcome>((project) => edits.call({ kind: 'analyse', project }).promise as Promise<AnalysisOutcome>);
   const chart = new LatestOnly<[Project, number], ChartOutcome>(
-    ([project, layer]) => edits.call({ kind: 'chart', project, layer }).promise as Promise<ChartOutcome>,
+    ([project, layer]) => aside.call({ kind: 'chart', project, layer }).promise as Promise<ChartOutcome>,
   );
-  const support = new LatestOnly<Project, SupportOutcome>((project) => edits.call({ kind: 'support', project }).promise as Promise<SupportOutcome>);
+  const support = new LatestOnly<Project, SupportOutcome>((project) => aside.call({ kind: 'support', project }).promise as Promise<SupportOutcome>);
   return {
     kind: 'worker',
     analyse: (project) => analyse.call(project),
@@ -203,6 +216,7 @@ export function createWorkerClient(makeWorker: WorkerFactory = defaultWorkerFact
     dispose: () => {
       closed = true;
       editChannel?.terminate();
+      asideChannel?.terminate();
       runs?.terminate();
       runs = null;
     },

@@ -1,8 +1,9 @@
 /// <reference lib="webworker" />
 /**
- * The worksheet's compute worker. The client starts two instances of this one script: one
- * answers the analysis of each edit (`analyse`, `chart`, `support`), the other runs the uncertainty
- * (`uncertainty`, `cancel`), so a long run never delays the analysis of the next key.
+ * The worksheet's compute worker. The client starts three instances of this one script: one
+ * answers the analysis of each edit (`analyse`), one the slower follow-ups (`chart`,
+ * `support`), the third runs the uncertainty (`uncertainty`, `cancel`), so neither a chart nor
+ * a long run delays the analysis of the next key.
  *
  * Analysis requests are answered one at a time, in order. An uncertainty run is drained one
  * chunk of samples at a time with a pause through a MessageChannel between chunks (no timer

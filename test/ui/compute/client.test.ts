@@ -139,6 +139,23 @@ describe('compute client over workers (protocol, with a stand-in worker)', () =>
     expect(workers[0].received.map((m) => m.kind)).toEqual(['analyse', 'analyse']);
   });
 
+  it('answers charts and the support needed in a worker of their own, so the next analysis never waits behind them', async () => {
+    const workers: FakeWorker[] = [];
+    const client = createWorkerClient(() => {
+      const w = new FakeWorker();
+      workers.push(w);
+      return w as unknown as Worker;
+    });
+    const project = presets()[0].project;
+    await client.analyse(project);
+    await Promise.all([client.chart(project, 0), client.supportNeeded(project)]);
+    await client.analyse(project);
+    expect(workers).toHaveLength(2);
+    expect(workers[0].received.map((m) => m.kind)).toEqual(['analyse', 'analyse']);
+    expect(workers[1].received.map((m) => m.kind)).toEqual(['chart', 'support']);
+    client.dispose();
+  });
+
   it('runs the uncertainty in a second worker; cancel reaches the worker and the promise rejects at once', async () => {
     const workers: FakeWorker[] = [];
     const client = createWorkerClient(() => {
