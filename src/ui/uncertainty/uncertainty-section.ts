@@ -14,6 +14,7 @@
  * @fires project-edit - { path, value } on `uncertainty`, `uncertainty.variables` or a field of one
  * @fires field-refused - { path, message: null } when the user dismisses a refused edit
  */
+import { openingWords } from '../../model/span-wording';
 import { LitElement, html, css, nothing, type PropertyValues } from 'lit';
 import { customElement, property, state } from 'lit/decorators.js';
 import { unsafeSVG } from 'lit/directives/unsafe-svg.js';
@@ -301,7 +302,7 @@ export class UncertaintySection extends LitElement {
     const modes = Object.keys(u.byMode) as Mode[];
     const span = project.opening.span_m;
     if (!this.charts || this.charts.for !== u || this.charts.units !== this.units || this.charts.span !== span) {
-      const spanWord = project.opening.type === 'intersection' ? 'entry width' : project.opening.type === 'cantilever' ? 'overhang' : 'span';
+      const spanWord = openingWords(project.opening.type).span;
       this.charts = {
         for: u, units: this.units, span,
         histogram: fsHistogramSvg(u, { target: u.governing?.target ?? null }),
