@@ -59,6 +59,13 @@ const nextTask = (): Promise<void> =>
     ch.port2.postMessage(null);
   });
 
+/**
+ * The longest an accepted edit's render waits for its results (ms). The worker answers an
+ * edit in a few ms; rendering the edit on its own first (marking every section "updating")
+ * costs a frame that delays the results behind it.
+ */
+const HOLD_MS = 100;
+
 export class LaminaApp extends LitElement {
   static override properties = {
     store: { attribute: false },
@@ -74,6 +81,9 @@ export class LaminaApp extends LitElement {
   private unsubscribe: (() => void) | null = null;
   private lastAnalysis: unknown = null;
   private firstResultsMarked = false;
+  /** An accepted edit's state, held back until its results land (or HOLD_MS passes). */
+  private held: AppState | null = null;
+  private holdTimer: ReturnType<typeof setTimeout> | null = null;
   private traceOpener: HTMLElement | null = null;
 
   static override styles = [
@@ -374,14 +384,54 @@ export class LaminaApp extends LitElement {
   override disconnectedCallback(): void {
     super.disconnectedCallback();
     this.unsubscribe?.();
+    if (this.holdTimer !== null) clearTimeout(this.holdTimer);
+    this.holdTimer = null;
     window.removeEventListener('keydown', this.onKey);
   }
 
   private onState(s: AppState): void {
+    if (this.holdsForResults(s)) {
+      // The typed text is already in its field; the rest of the sheet changes once, with the
+      // results (a worker answers in a few ms), not twice. A slow answer shows "updating…".
+      this.held = s;
+      this.holdTimer ??= setTimeout(() => this.releaseHeld(), HOLD_MS);
+      return;
+    }
+    if (this.holdTimer !== null) clearTimeout(this.holdTimer);
+    this.holdTimer = null;
+    this.held = null;
     this.state = s;
     if (s.analysis !== this.lastAnalysis && !s.pending) {
       this.lastAnalysis = s.analysis;
       void this.markResults();
+    }
+  }
+
+  /**
+   * Whether to hold `s` back: an accepted edit whose analysis is on its way, while the sheet
+   * shows valid results and nothing else about the page changed (no refusal, notice, units,
+   * file errors, undo state or autosave state to show).
+   */
+  private holdsForResults(s: AppState): boolean {
+    const shown = this.held ?? this.state;
+    if (!shown || !s.pending || shown.analysis === null || s.analysis !== shown.analysis) return false;
+    return (
+      s.fieldErrors.length === 0 &&
+      shown.fieldErrors.length === 0 &&
+      s.fileErrors === shown.fileErrors &&
+      s.units === shown.units &&
+      s.notice === shown.notice &&
+      s.autosave === shown.autosave &&
+      s.canUndo === shown.canUndo &&
+      s.canRedo === shown.canRedo
+    );
+  }
+
+  private releaseHeld(): void {
+    this.holdTimer = null;
+    if (this.held) {
+      this.state = this.held;
+      this.held = null;
     }
   }
 
@@ -724,7 +774,7 @@ export class LaminaApp extends LitElement {
       </section>
       <section class="print" aria-labelledby="report-h">
         ${this.heading(SECTIONS.findIndex((x) => x.id === 'report') + 1)}
-        <report-view .project=${rp} .analysis=${this.reportAnalysis(s)} .curve=${s.curve} .units=${s.units}></report-view>
+        <report-view .project=${rp} .analysis=${this.reportAnalysis(s)} .curve=${s.chartPending ? null : s.curve} .units=${s.units}></report-view>
       </section>
       <trace-dialog .report=${report} .path=${this.tracePath ?? ''} .units=${s.units} ?open=${this.tracePath !== null}></trace-dialog>
       <footer><caution-banner></caution-banner></footer>

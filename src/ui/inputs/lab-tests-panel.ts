@@ -33,6 +33,7 @@ import { fireReplace } from './events';
 import { tracedValue } from './traced-value';
 import './quantity-input';
 import { NearViewport, chartSlot } from '../results/near-viewport';
+import { DeferOffscreen } from '../app/defer-offscreen';
 
 export interface PasteProblem {
   row: number;
@@ -40,7 +41,7 @@ export interface PasteProblem {
   message: string;
 }
 
-export class LabTestsPanel extends LitElement {
+export class LabTestsPanel extends DeferOffscreen(LitElement) {
   static override properties = {
     project: { attribute: false },
     analysis: { attribute: false },

@@ -18,6 +18,7 @@ import { checkboxField, errorFor, quantityField, selectField } from './field-tem
 import { fireReplace } from './events';
 import './quantity-input';
 import { isOverhang, openingWords } from '../../model/span-wording';
+import { DeferOffscreen } from '../app/defer-offscreen';
 
 const OPENING_CHOICES = [
   { value: 'beam', label: 'Long opening — roof beam (plane strain)' },
@@ -59,7 +60,7 @@ const BASIS_CHOICES = [
   { value: 'jointed', label: 'Jointed — the whole roof taken as cracked (voussoir checks count)' },
 ] as const;
 
-export class OpeningLoadsForm extends LitElement {
+export class OpeningLoadsForm extends DeferOffscreen(LitElement) {
   static override properties = {
     project: { attribute: false },
     units: { type: String },

@@ -11,6 +11,7 @@ import type { Analysis } from '../../analysis/types';
 import { strataColumnSvg } from '../../report/charts/strata-column';
 import { tokens } from '../styles/tokens';
 import { sheet } from '../styles/sheet';
+import { afterNextPaint } from '../after-paint';
 
 /**
  * What the strata column draws of an analysis (`strataColumnSvg` reads only these): the bending
@@ -46,6 +47,15 @@ export class StrataColumn extends LitElement {
       }
     `,
   ];
+
+  /**
+   * Once drawn, the column is redrawn in a task after the next paint: an edit's results (the
+   * verdict, the checks) are painted first, the drawing of the inputs one frame later.
+   */
+  protected override async scheduleUpdate(): Promise<unknown> {
+    if (this.hasUpdated) await afterNextPaint();
+    return super.scheduleUpdate();
+  }
 
   protected override willUpdate(changed: PropertyValues<this>): void {
     if (changed.has('project') || changed.has('analysis') || changed.has('units')) {

@@ -19,6 +19,7 @@ import { errorFor, selectField, textField } from './field-templates';
 import { fireReplace } from './events';
 import './quantity-input';
 import { columnAnalysisKey } from './strata-column';
+import { DeferOffscreen } from '../app/defer-offscreen';
 
 interface NumberRow {
   kind: 'number';
@@ -104,7 +105,7 @@ const ROWS: Row[] = [
   { kind: 'number', label: 'Disturbance D', key: 'hoekBrown.disturbance', get: (l) => l.hoekBrown.disturbance, unitText: '0–1' },
 ];
 
-export class StrataEditor extends LitElement {
+export class StrataEditor extends DeferOffscreen(LitElement) {
   static override properties = {
     project: { attribute: false },
     analysis: { attribute: false },

@@ -18,6 +18,7 @@ import { formGrid } from '../styles/form-grid';
 import { errorFor, quantityField, selectField } from './field-templates';
 import { fireReplace } from './events';
 import './quantity-input';
+import { DeferOffscreen } from '../app/defer-offscreen';
 
 /** The pattern a user starts from when switching bolts on: 1.8 m, 100 kN at 1.2 × 1.2 m (common practice in coal roofs). */
 export const STARTING_BOLTS: BoltPattern = {
@@ -33,7 +34,7 @@ const ACTION_CHOICES = [
   { value: 'beamBuilding', label: 'Beam building — grouted bolts bond the beds they cross' },
 ] as const;
 
-export class SupportForm extends LitElement {
+export class SupportForm extends DeferOffscreen(LitElement) {
   static override properties = {
     project: { attribute: false },
     units: { type: String },

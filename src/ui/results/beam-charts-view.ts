@@ -22,6 +22,7 @@ import { displayValue } from './display-value';
 import { tracedNumber } from './traced-number';
 import { resultsStyles } from './results-styles';
 import { NearViewport, chartSlot } from './near-viewport';
+import { DeferOffscreen } from '../app/defer-offscreen';
 
 type ProfileCode = { beamProfile: typeof import('../../analysis/profile').beamProfile; slabField: typeof import('../../analysis/slab-field').slabField };
 let profileCode: Promise<ProfileCode> | null = null;
@@ -40,7 +41,7 @@ function safe(draw: () => string): string {
 }
 
 @customElement('beam-charts-view')
-export class BeamChartsView extends LitElement {
+export class BeamChartsView extends DeferOffscreen(LitElement) {
   static override styles = [resultsStyles];
 
   @property({ attribute: false }) project: Project | null = null;

@@ -17,9 +17,10 @@ import { checkRowViews, type CheckRowView, type CheckValue } from './check-rows'
 import { displayValue } from './display-value';
 import { tracedNumber } from './traced-number';
 import { resultsStyles } from './results-styles';
+import { DeferOffscreen } from '../app/defer-offscreen';
 
 @customElement('checks-table')
-export class ChecksTable extends LitElement {
+export class ChecksTable extends DeferOffscreen(LitElement) {
   static override styles = [resultsStyles];
 
   @property({ attribute: false }) project: Project | null = null;

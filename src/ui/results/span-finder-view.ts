@@ -24,6 +24,7 @@ import { inputSignificant } from '../../model/number-format';
 import { tracedNumber } from './traced-number';
 import { resultsStyles } from './results-styles';
 import { NearViewport, chartSlot } from './near-viewport';
+import { DeferOffscreen } from '../app/defer-offscreen';
 
 const SPAN_MODES: readonly Mode[] = ['tension', 'crushing', 'sliding', 'snapThrough', 'deflection'];
 
@@ -39,7 +40,7 @@ function whyNull(word: string): Record<Mode, string> {
 }
 
 @customElement('span-finder-view')
-export class SpanFinderView extends LitElement {
+export class SpanFinderView extends DeferOffscreen(LitElement) {
   static override styles = [resultsStyles];
 
   @property({ attribute: false }) project: Project | null = null;

@@ -19,6 +19,7 @@ import { displayValue, displayText } from './display-value';
 import { tracedNumber } from './traced-number';
 import { resultsStyles } from './results-styles';
 import { openingWords } from '../../model/span-wording';
+import { DeferOffscreen } from '../app/defer-offscreen';
 
 const STEP_FIELD: Record<string, string> = {
   lab: 'lab_MPa',
@@ -30,7 +31,7 @@ const STEP_FIELD: Record<string, string> = {
 };
 
 @customElement('strength-chain-view')
-export class StrengthChainView extends LitElement {
+export class StrengthChainView extends DeferOffscreen(LitElement) {
   static override styles = [resultsStyles];
 
   @property({ attribute: false }) project: Project | null = null;

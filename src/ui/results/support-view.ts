@@ -22,6 +22,7 @@ import { sheet } from '../styles/sheet';
 import { resultsStyles } from './results-styles';
 import { displayText } from './display-value';
 import { openingWords } from '../../model/span-wording';
+import { DeferOffscreen } from '../app/defer-offscreen';
 
 export interface SupportNeededState {
   needed: SupportNeededReport | null;
@@ -32,7 +33,7 @@ export interface SupportNeededState {
 /** The suggested spacing set out to the centimetre, rounded down (closer bolts, never sparser). */
 export const adoptableSpacing = (s: number): number => Math.floor(s * 100 + 1e-9) / 100;
 
-export class SupportView extends LitElement {
+export class SupportView extends DeferOffscreen(LitElement) {
   static override properties = {
     project: { attribute: false },
     analysis: { attribute: false },

@@ -37,6 +37,7 @@ import { resultsStyles } from '../results/results-styles';
 import { tokens } from '../styles/tokens';
 import { sheet } from '../styles/sheet';
 import { fieldName, quantityOf, samplablePaths } from './variable-fields';
+import { DeferOffscreen } from '../app/defer-offscreen';
 
 /** The block a first variable creates (the model's defaults: 20 000 samples, seed 1, Latin hypercube). */
 const NEW_BLOCK: Omit<Uncertainty, 'variables'> = { samples: 20000, seed: 1, method: 'latinHypercube', acceptablePf: null };
@@ -51,7 +52,7 @@ type RunState =
   | { kind: 'cancelled'; why: string };
 
 @customElement('uncertainty-section')
-export class UncertaintySection extends LitElement {
+export class UncertaintySection extends DeferOffscreen(LitElement) {
   @property({ attribute: false }) project: Project | null = null;
   @property({ attribute: false }) runner: UncertaintyRunner | null = null;
   @property() units: UnitSystem = 'SI';

@@ -1,0 +1,45 @@
+/**
+ * Off-screen parts of the sheet update after the next paint, not before it. When an edit's
+ * results land, every section gets new values; the ones on screen render in the same task
+ * (so the results a user is looking at are painted in the next frame) and the ones out of view
+ * render in a task of their own once that frame has been painted. Nothing is skipped: an
+ * off-screen part is up to date one frame later, long before anyone can scroll to it.
+ *
+ * `DeferOffscreen(LitElement)` gives a component this behaviour. Whether it is on screen comes
+ * from an IntersectionObserver on the host (no margin); until the first observation, and where
+ * there is no IntersectionObserver (tests in node), it counts as on screen.
+ */
+import type { LitElement } from 'lit';
+import { afterNextPaint } from '../after-paint';
+
+type LitConstructor = abstract new (...args: any[]) => LitElement; // eslint-disable-line @typescript-eslint/no-explicit-any
+
+export function DeferOffscreen<T extends LitConstructor>(Base: T) {
+  abstract class Deferring extends Base {
+    /** False while the host is out of the viewport (as last observed). */
+    protected onScreen = true;
+    private screenObserver: IntersectionObserver | null = null;
+
+    override connectedCallback(): void {
+      super.connectedCallback();
+      if (typeof IntersectionObserver === 'undefined' || typeof requestAnimationFrame === 'undefined') return;
+      this.screenObserver = new IntersectionObserver((entries) => {
+        this.onScreen = entries[entries.length - 1].isIntersecting;
+      });
+      this.screenObserver.observe(this);
+    }
+
+    override disconnectedCallback(): void {
+      super.disconnectedCallback();
+      this.screenObserver?.disconnect();
+      this.screenObserver = null;
+      this.onScreen = true;
+    }
+
+    protected override async scheduleUpdate(): Promise<unknown> {
+      if (!this.onScreen) await afterNextPaint();
+      return super.scheduleUpdate();
+    }
+  }
+  return Deferring;
+}
