@@ -6,8 +6,8 @@
  * the compute client (a Web Worker in the browser: `src/ui/compute/`), so typing never waits
  * for it. Each request carries a sequence number; an answer for an older project is dropped.
  * `pending` is true from an accepted edit until its analysis has landed, `chartPending` until
- * its design chart has: until then the results shown are the previous project's and the app
- * marks them as updating. `settled()` resolves once both have landed (tests, benchmark).
+ * its span curve and design chart have (they follow in a worker of their own): until then the
+ * results shown are the previous project's and the app marks them as updating. `settled()` resolves once both have landed (tests, benchmark).
  *
  * Two kinds of refusal are kept apart:
  * - a refused FIELD (`fieldErrors`): the field still holds the refused text, so its error stays
@@ -50,11 +50,15 @@ export interface AppState {
   units: UnitSystem;
   analysis: Analysis | null;
   /**
-   * The project `analysis` and `curve` were computed for: the current project once they have
-   * landed, the previous one while `pending`. Results views render against it, so what they
-   * show always belongs together (and is marked updating while `pending`).
+   * The project `analysis` was computed for: the current project once it has landed, the
+   * previous one while `pending`. Results views render against it, so what they show always
+   * belongs together (and is marked updating while `pending`).
    */
   resultsProject: Project | null;
+  /**
+   * The FS-versus-span curve. It comes with the design chart, after the analysis: while
+   * `chartPending` it may belong to the previous values (the span section says "updating…").
+   */
   curve: SpanCurve | null;
   chart: DesignChart | null;
   chartLayer: number;
@@ -354,7 +358,7 @@ export class ProjectStore {
         if (out !== null && seq === this.seq) this.landAnalysis(project, out);
       },
       (err: unknown) => {
-        if (seq === this.seq) this.landAnalysis(project, { analysis: null, curve: null, error: `The analysis failed: ${errorText(err)}`, timings: { analyse: 0, curve: 0 } });
+        if (seq === this.seq) this.landAnalysis(project, { analysis: null, error: `The analysis failed: ${errorText(err)}`, timings: { analyse: 0 } });
       },
     );
   }
@@ -366,7 +370,7 @@ export class ProjectStore {
     const timings = { ...this.state.timings, ...out.timings };
     if (out.analysis) {
       const supportPending = Boolean(this.deps.compute.supportNeeded);
-      this.set({ analysis: out.analysis, resultsProject: project, curve: out.curve, error: out.error, chartLayer, pending: false, chartPending: true, supportPending, timings });
+      this.set({ analysis: out.analysis, resultsProject: project, error: out.error, chartLayer, pending: false, chartPending: true, supportPending, timings });
       this.requestChart(project, chartLayer);
       // after the results and the chart, in the same worker: never in their way
       if (supportPending) this.requestSupport(project);
@@ -397,15 +401,18 @@ export class ProjectStore {
     const seq = ++this.chartSeq;
     const landed = (out: ChartOutcome | null) => {
       if (out === null || seq !== this.chartSeq || project !== this.state.project || layer !== this.state.chartLayer) return;
-      this.set({ chart: out.chart, minThickness_m: out.minThickness_m, chartPending: false, timings: { ...this.state.timings, ...out.timings } });
+      this.set({ curve: out.curve, chart: out.chart, minThickness_m: out.minThickness_m, chartPending: false, timings: { ...this.state.timings, ...out.timings } });
     };
     this.deps.compute.chart(project, layer).then(landed, () =>
-      landed({ layer, chart: null, minThickness_m: null, timings: { chart: 0, minThickness: 0 } }),
+      landed({ layer, curve: null, chart: null, minThickness_m: null, timings: { curve: 0, chart: 0, minThickness: 0 } }),
     );
   }
 
   private set(patch: Partial<AppState>): void {
-    const fieldErrors = [...this.refused.values()].flat();
+    // The same array while the refusals are the same, so views given it do not re-render.
+    const flat = [...this.refused.values()].flat();
+    const prev = this.state.fieldErrors;
+    const fieldErrors = flat.length === prev.length && flat.every((e, i) => e === prev[i]) ? prev : flat;
     this.state = {
       ...this.state,
       ...patch,

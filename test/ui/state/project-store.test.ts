@@ -81,7 +81,7 @@ function manualCompute() {
     },
   };
 }
-const outcome = (p: Project): AnalysisOutcome => ({ analysis: analyse(p), curve: null, error: null, timings: { analyse: 1, curve: 1 } });
+const outcome = (p: Project): AnalysisOutcome => ({ analysis: analyse(p), error: null, timings: { analyse: 1 } });
 const tick = () => new Promise((r) => setTimeout(r, 0));
 
 function twoLayers(): Project {
@@ -140,7 +140,7 @@ describe('ProjectStore', () => {
     // a chart requested for an older project is dropped too
     expect(m.charts).toHaveLength(1);
     s.edit('layers[0].thickness_m', 0.6);
-    m.charts[0].resolve({ layer: 0, chart: { layer: 0 } as never, minThickness_m: 0.3, timings: { chart: 1, minThickness: 1 } });
+    m.charts[0].resolve({ layer: 0, curve: null, chart: { layer: 0 } as never, minThickness_m: 0.3, timings: { curve: 1, chart: 1, minThickness: 1 } });
     await tick();
     expect(s.getState().chart).toBeNull();
     expect(s.getState().pending).toBe(true);
@@ -149,7 +149,7 @@ describe('ProjectStore', () => {
     await tick();
     expect(s.getState().pending).toBe(false);
     expect(s.getState().chartPending).toBe(true);
-    m.charts[1].resolve({ layer: 0, chart: { layer: 0 } as never, minThickness_m: 0.3, timings: { chart: 1, minThickness: 1 } });
+    m.charts[1].resolve({ layer: 0, curve: null, chart: { layer: 0 } as never, minThickness_m: 0.3, timings: { curve: 1, chart: 1, minThickness: 1 } });
     await tick();
     expect(s.getState().chartPending).toBe(false);
     expect(s.getState().chart).toEqual({ layer: 0 });
