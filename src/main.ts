@@ -7,6 +7,8 @@
 import { validateProject } from './model/validate';
 import { ProjectStore, type AppState } from './ui/state/project-store';
 import { defaultDeps } from './ui/state/default-deps';
+import { createComputeClient, defaultWorkerFactory } from './ui/compute/client';
+import { ANALYSIS_FUNCTIONS } from './ui/compute/compute-core';
 import { initialProject } from './ui/state/initial-project';
 import { writeAutosave, type KeyValueStorage } from './ui/state/autosave';
 import { SHARE_PREFIX, decodeShareHash } from './ui/state/share-link';
@@ -31,6 +33,8 @@ export interface LaminaTestHook {
   state(): AppState;
   store: ProjectStore;
   app: LaminaApp;
+  /** Where the last analysis ran: in the page ('local', a quick one) or in the edit worker. */
+  analyseRoute(): 'local' | 'worker' | null;
   /** Edit, and resolve once its analysis (from the worker) has rendered. */
   editNow(path: string, value: unknown): Promise<{ accepted: boolean; rendered_ms: number; frame_ms: number }>;
 }
@@ -45,8 +49,10 @@ declare global {
 function boot(): void {
   const storage = browserStorage();
   const first = initialProject(location.hash, storage, validateProject);
-  // One compute client: its edit worker analyses each edit, its run worker runs the studies.
-  const deps = defaultDeps(storage);
+  // One compute client. The first analysis and each quick edit run in this thread (so the first
+  // results never wait for a worker to boot); slower edits go to its edit worker, the span
+  // curve and design chart to its aside worker, the uncertainty studies to its run worker.
+  const deps = defaultDeps(storage, createComputeClient(defaultWorkerFactory, ANALYSIS_FUNCTIONS));
   const store = new ProjectStore(deps, first.project);
   if (first.source === 'link') {
     // The project now lives in the autosave; drop the hash so a reload keeps later edits.
@@ -81,6 +87,7 @@ function boot(): void {
     state: () => store.getState(),
     store,
     app,
+    analyseRoute: () => deps.compute.analyseRoute ?? null,
     editNow: (path, value) => app.editNow(path, value),
   };
 }

@@ -113,8 +113,10 @@ describe('compute client in chromium', () => {
 });
 
 describe('the worksheet on the worker', () => {
-  it('first results come from the worker; fast typing ends on the results of the last value, and results are never shown as current for another project', async () => {
+  it('first results are computed in the page; fast typing ends on the results of the last value, and results are never shown as current for another project', async () => {
     const { page, context, errors } = await openApp(session.browser, session.url);
+    // the first analysis ran in the page (no worker to boot before the first results)
+    expect(await page.evaluate(() => window.__lamina!.analyseRoute())).toBe('local');
     await loadClient(page);
     // every state the store publishes: not pending ⇒ the results are the current project's
     await page.evaluate(() => {

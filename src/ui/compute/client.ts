@@ -18,6 +18,8 @@ import type { Project, UncertaintyReport } from '../../model/types';
 import type { ComputeRequest, ComputeResponse } from './protocol';
 import type { AnalysisOutcome, ChartOutcome, ComputeClient, RunHooks, SupportOutcome, UncertaintyRunRequest } from './types';
 import { analysisJob, chartJob, supportJob, type AnalysisFunctions } from './jobs';
+import { createQuickPath } from './quick-path';
+import { whenSettledAfterPaint } from '../after-paint';
 
 export const abortError = (): DOMException => new DOMException('The uncertainty run was cancelled.', 'AbortError');
 
@@ -174,12 +176,20 @@ export function createWorkerClient(makeWorker: WorkerFactory = defaultWorkerFact
   // Charts and the support needed go to a third instance (started on the first such call):
   // a design chart takes tens of milliseconds, and in the edit worker it would sit in front
   // of the next key's analysis.
+  // It starts once the page has painted and settled: the first results never share the
+  // machine with a worker booting for a chart that is off screen.
   let asideChannel: WorkerChannel | null = null;
+  let asideGate: Promise<void> | null = null;
   const aside = {
-    call: (...args: Parameters<WorkerChannel['call']>) => {
-      if (closed) return { id: 0, promise: Promise.reject(new Error('the compute client was closed')) };
-      asideChannel ??= new WorkerChannel(makeWorker(), onFailure);
-      return asideChannel.call(...args);
+    send: (body: RequestBody): Promise<unknown> => {
+      if (closed) return Promise.reject(new Error('the compute client was closed'));
+      if (asideChannel) return asideChannel.call(body).promise;
+      asideGate ??= whenSettledAfterPaint();
+      return asideGate.then(() => {
+        if (closed) throw new Error('the compute client was closed');
+        asideChannel ??= new WorkerChannel(makeWorker(), onFailure);
+        return asideChannel.call(body).promise;
+      });
     },
   };
   let runs: WorkerChannel | null = null;
@@ -194,9 +204,9 @@ export function createWorkerClient(makeWorker: WorkerFactory = defaultWorkerFact
   };
   const analyse = new LatestOnly<Project, AnalysisOutcome>((project) => edits.call({ kind: 'analyse', project }).promise as Promise<AnalysisOutcome>);
   const chart = new LatestOnly<[Project, number], ChartOutcome>(
-    ([project, layer]) => aside.call({ kind: 'chart', project, layer }).promise as Promise<ChartOutcome>,
+    ([project, layer]) => aside.send({ kind: 'chart', project, layer }) as Promise<ChartOutcome>,
   );
-  const support = new LatestOnly<Project, SupportOutcome>((project) => aside.call({ kind: 'support', project }).promise as Promise<SupportOutcome>);
+  const support = new LatestOnly<Project, SupportOutcome>((project) => aside.send({ kind: 'support', project }) as Promise<SupportOutcome>);
   return {
     kind: 'worker',
     analyse: (project) => analyse.call(project),
@@ -271,12 +281,14 @@ export function createInThreadClient(fns?: AnalysisFunctions): ComputeClient {
 }
 
 /**
- * The worker client where `Worker` exists, else the in-thread client. If the edit worker
+ * The worker client where `Worker` exists, else the in-thread client. With `local` (the
+ * analysis functions loaded in this thread), the first analysis and every edit whose analysis
+ * is known to be quick run in this thread (./quick-path.ts). If the edit worker
  * fails (it could not start), the analysis moves to an in-thread client; calls that were
  * waiting are answered by it.
  */
-export function createComputeClient(makeWorker: WorkerFactory = defaultWorkerFactory): ComputeClient {
-  if (typeof Worker === 'undefined') return createInThreadClient();
+export function createComputeClient(makeWorker: WorkerFactory = defaultWorkerFactory, local: AnalysisFunctions | null = null): ComputeClient {
+  if (typeof Worker === 'undefined') return createInThreadClient(local ?? undefined);
   let fallback: ComputeClient | null = null;
   let current: ComputeClient;
   try {
@@ -292,11 +304,18 @@ export function createComputeClient(makeWorker: WorkerFactory = defaultWorkerFac
       if (fallback && current === fallback && !(err instanceof DOMException && err.name === 'AbortError')) return call(fallback);
       throw err;
     });
+  // An edit whose analysis is known to be quick runs in this thread (./quick-path.ts); so does
+  // the first one, at start-up, while no worker has started (the page's first results never
+  // wait for a worker to boot).
+  const quick = createQuickPath({ slow: (project) => retry((c) => c.analyse(project)), local: () => local, firstLocal: local !== null });
   return {
     get kind() {
       return current.kind;
     },
-    analyse: (project) => retry((c) => c.analyse(project)),
+    get analyseRoute() {
+      return quick.lastRoute;
+    },
+    analyse: (project) => quick.analyse(project),
     chart: (project, layer) => retry((c) => c.chart(project, layer)),
     supportNeeded: (project) => retry((c) => c.supportNeeded(project)),
     runUncertainty: (project, request, hooks) => current.runUncertainty(project, request, hooks),

@@ -20,7 +20,6 @@ const now = (): number => (typeof performance !== 'undefined' ? performance.now(
 
 export function analysisJob(project: Project, fns: AnalysisFunctions): AnalysisOutcome {
   let analysis: Analysis | null = null;
-  let curve: SpanCurve | null = null;
   let error: string | null = null;
   const t0 = now();
   try {
@@ -28,20 +27,20 @@ export function analysisJob(project: Project, fns: AnalysisFunctions): AnalysisO
   } catch (err) {
     error = `The analysis failed: ${errorText(err)}`;
   }
-  const t1 = now();
-  if (analysis) {
-    try {
-      curve = fns.spanCurve(project);
-    } catch {
-      curve = null;
-    }
-  }
-  return { analysis, curve, error, timings: { analyse: t1 - t0, curve: now() - t1 } };
+  return { analysis, error, timings: { analyse: now() - t0 } };
 }
 
+/** The span curve, then the design chart and minimum thickness of `layer` (each failure alone gives null). */
 export function chartJob(project: Project, layer: number, fns: AnalysisFunctions): ChartOutcome {
+  let curve: SpanCurve | null = null;
   let chart: DesignChart | null = null;
   let minThickness_m: number | null = null;
+  const tc = now();
+  try {
+    curve = fns.spanCurve(project);
+  } catch {
+    curve = null;
+  }
   const t0 = now();
   try {
     chart = fns.designChart(project, layer);
@@ -55,7 +54,7 @@ export function chartJob(project: Project, layer: number, fns: AnalysisFunctions
   } catch {
     minThickness_m = null;
   }
-  return { layer, chart, minThickness_m, timings: { chart: t1 - t0, minThickness: now() - t1 } };
+  return { layer, curve, chart, minThickness_m, timings: { curve: t0 - tc, chart: t1 - t0, minThickness: now() - t1 } };
 }
 
 

@@ -34,22 +34,25 @@ export type UncertaintyRunner = (
 
 import type { Analysis, DesignChart, SpanCurve } from '../../analysis/types';
 
-/** The analysis of one project: the report and details, and the FS-versus-span curve. */
+/** The analysis of one project: the report and details (what each edit waits for). */
 export interface AnalysisOutcome {
   analysis: Analysis | null;
-  curve: SpanCurve | null;
   /** the analysis failed: the message for the user (never a stack trace) */
   error: string | null;
-  /** milliseconds spent in each step, measured where it ran */
-  timings: { analyse: number; curve: number };
+  /** milliseconds spent, measured where it ran */
+  timings: { analyse: number };
 }
 
-/** The design chart and the minimum thickness of one layer. */
+/**
+ * What follows the analysis, off the edit's path: the FS-versus-span curve, and the design
+ * chart and the minimum thickness of one layer.
+ */
 export interface ChartOutcome {
   layer: number;
+  curve: SpanCurve | null;
   chart: DesignChart | null;
   minThickness_m: number | null;
-  timings: { chart: number; minThickness: number };
+  timings: { curve: number; chart: number; minThickness: number };
 }
 
 /** The support needed, or why there is none (`analysis/support-needed.ts`). */
@@ -71,6 +74,8 @@ export interface ComputeClient {
   runUncertainty: UncertaintyRunner;
   /** 'worker' or 'in-thread' (for tests and the status of the page) */
   readonly kind: 'worker' | 'in-thread';
+  /** Where the last `analyse` ran when the client chooses per call (./quick-path.ts); tests and the benchmark read it. */
+  readonly analyseRoute?: 'local' | 'worker' | null;
   /** Ends the workers; later calls reject. */
   dispose(): void;
 }
