@@ -8,5 +8,6 @@ export { slabField } from './slab-field';
 export { minimumThickness } from './thickness';
 export { buildVerdict, layerPhrase, spanWordOf, type Verdict, type VerdictSentence } from './verdict';
 export { MODES, VOUSSOIR_MODES, MODE_LABEL, MODE_NAME, MODE_SHORT, STATUS_TEXT, STATUS_WORD, STATUS_SYMBOL, STATUS_LEGEND, statusDescription } from './check-labels';
-export { targetFor, REASONS } from './check-table';
+export { targetFor, REASONS, allCountedMeet } from './check-table';
+export { acceptablePfMet, probabilityRow, withProbabilityRow, withUncertainty, WHOLE_ROOF } from './probability-row';
 export type * from './types';
