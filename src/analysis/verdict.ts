@@ -11,6 +11,7 @@ import type { CheckRow, CheckStatusKind, Governing, Project, Report } from '../m
 import { formatQuantity, type UnitSystem } from '../model/units';
 import { inOpeningWords, openingWords } from '../model/span-wording';
 import { MODE_NAME, STATUS_SYMBOL, VOUSSOIR_MODES } from './check-labels';
+import { allCountedMeet } from './check-table';
 
 export type VerdictSentenceId = 'governing' | 'intact' | 'cracked' | 'basis' | 'result' | 'span';
 
@@ -25,6 +26,12 @@ export interface Verdict {
   governing: Governing | null;
   /** Status of the governing row ("meets" / "below"), null when nothing counts. */
   status: CheckStatusKind | null;
+  /**
+   * Every counted row together: "below" when any is below its target, "meets" when none is,
+   * null when nothing counts. It differs from `status` only through the P_f row, which counts
+   * but never governs (a governing FS that meets, an acceptable P_f not shown to be met).
+   */
+  overall: CheckStatusKind | null;
   /** Counted rows with a value, and how many of them are below target. */
   counted: number;
   below: number;
@@ -170,6 +177,7 @@ export function buildVerdict(project: Project, report: Report, units: UnitSystem
   return {
     governing: g,
     status: row ? row.status : null,
+    overall: counted.length === 0 ? null : allCountedMeet(report.checks) ? 'meets' : 'below',
     counted: counted.length,
     below: counted.filter((r) => r.status === 'below').length,
     spanWord: spanWordOf(project),

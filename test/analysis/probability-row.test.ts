@@ -57,6 +57,7 @@ describe('the probability-of-failure row of the check table (METHODS §16)', () 
     expect(row.note).toContain(`seed ${metBlock.seed}`);
     expect(allCountedMeet(a.report.checks)).toBe(true);
     expect(meetsTargets(met, a.report)).toBe(true);
+    expect(buildVerdict(met, a.report).overall).toBe('meets');
     expect(metBlock.meetsAcceptablePf).toBe(true);
   }, 60_000);
 
@@ -77,6 +78,9 @@ describe('the probability-of-failure row of the check table (METHODS §16)', () 
     const v = buildVerdict(notMet, a.report);
     expect(v.below).toBe(1);
     expect(v.governing?.mode).toBe('tension');
+    // the governing FS meets; all counted rows together do not
+    expect(v.status).toBe('meets');
+    expect(v.overall).toBe('below');
     expect(v.sentences.find((s) => s.id === 'result')!.text).toContain('probability of failure');
   }, 60_000);
 

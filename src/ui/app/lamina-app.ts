@@ -671,7 +671,7 @@ export class LaminaApp extends LitElement {
       </div>
       <div class="pin" aria-label="Caution and verdict">
         <caution-banner compact></caution-banner>
-        <verdict-chip .project=${rp} .analysis=${s.analysis} ?stale=${s.stale} ?pending=${s.pending}></verdict-chip>
+        <verdict-chip .project=${rp} .analysis=${ra} ?stale=${s.stale} ?pending=${s.pending}></verdict-chip>
       </div>
       <div class="messages">
         ${this.renderAutosave(s)}
