@@ -40,8 +40,8 @@ export function modeLabel(mode: CheckMode, openingType: string): string {
 /** Table order of the support modes (after the layer modes). */
 export const SUPPORT_MODES: readonly CheckMode[] = ['bolt', 'skin', 'interlayerShear'];
 
-/** What the P_f row shows in place of a layer (it belongs to the whole roof). */
-export { WHOLE_ROOF } from './probability-row';
+/** What the P_f row (METHODS §16) shows in place of a layer: it belongs to the whole roof. */
+export const WHOLE_ROOF = 'whole roof';
 
 /** Names inside a sentence ("… governs: crushing of the arch in layer 1"). */
 export const MODE_NAME: Record<CheckMode, string> = {

@@ -25,7 +25,7 @@ import type { ProjectSI } from './inputs';
 import { applySupportRows } from './support';
 
 // The probability-of-failure row of the whole roof (METHODS §16) is a row of this table.
-export { acceptablePfMet, probabilityRow, withProbabilityRow, withUncertainty, WHOLE_ROOF } from './probability-row';
+export { acceptablePfMet, probabilityRow, withProbabilityRow, withUncertainty } from './probability-row';
 
 const MPa = 1e-6;
 

@@ -13,12 +13,11 @@
  *     allCountedMeet(a.report.checks) // false when the interval's upper end exceeds acceptablePf
  */
 import type { CheckRow, UncertaintyReport } from '../model/types';
+import { WHOLE_ROOF } from './check-labels';
 import type { Analysis } from './types';
 
 export const PF_MODE = 'probabilityOfFailure' as const;
-
-/** What the row names instead of a layer. */
-export const WHOLE_ROOF = 'whole roof';
+export { WHOLE_ROOF };
 
 /** The cap on the row's FS (an upper end of 0 cannot occur, but the FS stays finite). */
 const FS_CAP = 1e6;
