@@ -23,6 +23,7 @@ export const MODE_LABEL: Record<CheckMode, string> = {
   bolt: 'bolt load (suspension)',
   skin: 'skin between bolts',
   interlayerShear: 'interlayer shear (beam building)',
+  probabilityOfFailure: 'probability of failure P_f (uncertainty run)',
 };
 
 /**
@@ -39,6 +40,9 @@ export function modeLabel(mode: CheckMode, openingType: string): string {
 /** Table order of the support modes (after the layer modes). */
 export const SUPPORT_MODES: readonly CheckMode[] = ['bolt', 'skin', 'interlayerShear'];
 
+/** What the P_f row (METHODS §16) shows in place of a layer: it belongs to the whole roof. */
+export const WHOLE_ROOF = 'whole roof';
+
 /** Names inside a sentence ("… governs: crushing of the arch in layer 1"). */
 export const MODE_NAME: Record<CheckMode, string> = {
   tension: 'tension',
@@ -49,6 +53,7 @@ export const MODE_NAME: Record<CheckMode, string> = {
   bolt: 'the bolt load',
   skin: 'the skin between bolts',
   interlayerShear: 'the interlayer shear of the bolted beam',
+  probabilityOfFailure: 'the probability of failure against the acceptable P_f',
 };
 
 /** The name inside a sentence for an opening type (an overhang has no abutments). */
@@ -68,6 +73,7 @@ export const MODE_SHORT: Record<CheckMode, string> = {
   bolt: 'bolt',
   skin: 'skin',
   interlayerShear: 'interlayer shear',
+  probabilityOfFailure: 'P_f',
 };
 
 export const STATUS_WORD: Record<CheckStatusKind, string> = { meets: 'meets', below: 'below', info: 'info', na: 'n/a' };

@@ -13,14 +13,19 @@
  * - Voussoir rows never count for a block, s/t < 2 (METHODS §3a).
  * FS conventions: tension = design strength / net max tension; crushing = σc / (fc + σh);
  * sliding = fc·n·tanφ/(γ′s); deflection = limit/(δ/t) against 1; snap-through = 1 (stands)
- * or 0 (snaps) against 1. Bolt rows (`support.ts`) follow the layer rows. Governing: of the counted rows, the smallest FS/target (a standing
- * arch's snap-through row never governs); ties go to the lower layer.
+ * or 0 (snaps) against 1. Bolt rows (`support.ts`) follow the layer rows; the probability-of-
+ * failure row of the whole roof (`probability-row.ts`, only with an uncertainty run and an
+ * acceptable P_f) comes last. Governing: of the counted rows, the smallest FS/target (a
+ * standing arch's snap-through row and the P_f row never govern); ties go to the lower layer.
  */
 import type { CheckRow, CheckStatusKind, Design, Governing, Mode } from '../model/types';
 import { MODES } from './check-labels';
 import type { LayerState, State } from './evaluate';
 import type { ProjectSI } from './inputs';
 import { applySupportRows } from './support';
+
+// The probability-of-failure row of the whole roof (METHODS §16) is a row of this table.
+export { acceptablePfMet, probabilityRow, withProbabilityRow, withUncertainty } from './probability-row';
 
 const MPa = 1e-6;
 
@@ -195,14 +200,16 @@ export function checkTable(p: ProjectSI, state: State): CheckRow[] {
 
 /**
  * Whether a counted row with this FS can govern: a standing arch's snap-through row (FS 1, a
- * yes/no check that is met) never does; every other counted row can. The uncertainty run's
- * governing FS per sample follows the same rule.
+ * yes/no check that is met) never does, nor does the probability-of-failure row (it counts,
+ * but the governing row is a factor of safety: `probability-row.ts`); every other counted row
+ * can. The uncertainty run's governing FS per sample follows the same rule.
  */
 export function canGovern(mode: CheckRow['mode'], fs: number): boolean {
+  if (mode === 'probabilityOfFailure') return false;
   return !(mode === 'snapThrough' && fs > 0);
 }
 
-/** The counted row with the smallest FS/target (ties: the lower layer); a standing arch's snap-through row never governs. */
+/** The counted row with the smallest FS/target (ties: the lower layer); a standing arch's snap-through row and the P_f row never govern. */
 export function governingRow(rows: readonly CheckRow[]): CheckRow | null {
   let best: CheckRow | null = null;
   let bestRatio = Infinity;
@@ -220,10 +227,11 @@ export function governingRow(rows: readonly CheckRow[]): CheckRow | null {
 
 export function governingOf(rows: readonly CheckRow[]): Governing | null {
   const g = governingRow(rows);
-  return g === null ? null : { layerIndex: g.layerIndex, layer: g.layer, mode: g.mode, fs: g.fs as number, target: g.target };
+  // Only layer rows can govern (`canGovern`), so the index is a number.
+  return g === null ? null : { layerIndex: g.layerIndex ?? 0, layer: g.layer, mode: g.mode, fs: g.fs as number, target: g.target };
 }
 
-/** True when every counted check meets its target (CLI exit code 0). */
+/** True when every counted check meets its target, the P_f row included when there is one (CLI exit code 0). */
 export function allCountedMeet(rows: readonly CheckRow[]): boolean {
   return rows.every((r) => r.status !== 'below');
 }

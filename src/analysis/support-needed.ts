@@ -83,7 +83,7 @@ export function cannotFixSentence(project: Project, what: string, rows?: readonl
   const below = (rows ?? rowsOf(project)).filter((r) => r.status === 'below');
   if (below.length === 0) return `${what}: nothing in the range searched passes.`;
   const worst = below.reduce((a, b) => ((a.fs as number) / a.target <= (b.fs as number) / b.target ? a : b));
-  return `${what} cannot fix ${MODE_NAME[worst.mode]} of layer ${worst.layerIndex + 1} “${worst.layer}” (FS ${+(worst.fs as number).toPrecision(3)} against ${worst.target}).`;
+  return `${what} cannot fix ${MODE_NAME[worst.mode]} of ${worst.layerIndex === null ? 'the whole roof' : `layer ${worst.layerIndex + 1} “${worst.layer}”`} (FS ${+(worst.fs as number).toPrecision(3)} against ${worst.target}).`;
 }
 
 export interface SupportNeeded {

@@ -204,7 +204,7 @@ export function applySupportRows(
       extra.push(row(p, a.anchorLayer, 'bolt', null, target, false, SUPPORT_REASONS.nothingHangs, null, b.capacity * kN, 'kN', 'suspension: no layer lies wholly below the anchorage zone'));
     } else {
       for (const r of out) {
-        if (s.suspended.includes(r.layerIndex)) {
+        if (r.layerIndex !== null && s.suspended.includes(r.layerIndex)) {
           r.counts = false;
           r.reason = SUPPORT_REASONS.suspended;
           r.status = r.fs === null ? 'na' : 'info';

@@ -11,6 +11,7 @@ import type { CheckRow, CheckStatusKind, Governing, Project, Report } from '../m
 import { formatQuantity, type UnitSystem } from '../model/units';
 import { inOpeningWords, openingWords } from '../model/span-wording';
 import { MODE_NAME, STATUS_SYMBOL, VOUSSOIR_MODES } from './check-labels';
+import { allCountedMeet } from './check-table';
 
 export type VerdictSentenceId = 'governing' | 'intact' | 'cracked' | 'basis' | 'result' | 'span';
 
@@ -25,6 +26,12 @@ export interface Verdict {
   governing: Governing | null;
   /** Status of the governing row ("meets" / "below"), null when nothing counts. */
   status: CheckStatusKind | null;
+  /**
+   * Every counted row together: "below" when any is below its target, "meets" when none is,
+   * null when nothing counts. It differs from `status` only through the P_f row, which counts
+   * but never governs (a governing FS that meets, an acceptable P_f not shown to be met).
+   */
+  overall: CheckStatusKind | null;
   /** Counted rows with a value, and how many of them are below target. */
   counted: number;
   below: number;
@@ -52,7 +59,7 @@ function least(rows: readonly CheckRow[]): CheckRow | null {
 }
 
 const fsAgainst = (row: CheckRow): string => `FS ${fix(row.fs as number)} against a target of ${fix(row.target)}`;
-const who = (row: CheckRow): string => layerPhrase(row.layerIndex, row.layer);
+const who = (row: CheckRow): string => (row.layerIndex === null ? `the ${row.layer}` : layerPhrase(row.layerIndex, row.layer));
 
 export function spanWordOf(project: Project): Verdict['spanWord'] {
   return openingWords(project.opening.type).span as Verdict['spanWord'];
@@ -75,7 +82,7 @@ function countNote(rows: readonly CheckRow[]): string {
     return reason ? ` Not counted (${reason}).` : ' Not counted.';
   }
   if (counted.length === rows.filter((r) => r.fs !== null).length) return ' It counts.';
-  const layers = [...new Set(counted.map((r) => r.layerIndex + 1))];
+  const layers = [...new Set(counted.flatMap((r) => (r.layerIndex === null ? [] : [r.layerIndex + 1])))];
   return ` It counts for layer${layers.length > 1 ? 's' : ''} ${layers.join(', ')} only; the other rows say why not.`;
 }
 
@@ -128,14 +135,21 @@ function basisSentence(project: Project): string {
     : `Design basis “jointed”: the whole roof is taken as already cracked, so tension is shown for information only and the voussoir checks decide (except for blocks, span/thickness < 2).`;
 }
 
+/** One row below its target, in the result sentence. */
+function belowPhrase(r: CheckRow): string {
+  // The P_f row (METHODS §16): judged by the upper end of the 95 % interval, not by an FS.
+  if (r.mode === 'probabilityOfFailure') {
+    return `the probability of failure of the ${r.layer} (95 % upper end ${fix(r.demand as number)} above the acceptable P_f ${fix(r.capacity as number)})`;
+  }
+  return `${r.mode === 'snapThrough' ? 'snap-through' : r.mode} in ${who(r)}${r.mode === 'snapThrough' ? '' : ` (FS ${fix(r.fs as number)}, target ${fix(r.target)})`}`;
+}
+
 function resultSentence(report: Report): string {
   const below = report.checks.filter((r) => r.status === 'below');
   if (below.length === 0) {
     return report.checks.some((r) => r.counts) ? `Result: every check that counts meets its target ${STATUS_SYMBOL.meets}.` : 'Result: no check counts at this span.';
   }
-  const list = below
-    .map((r) => `${r.mode === 'snapThrough' ? 'snap-through' : r.mode} in ${who(r)}${r.mode === 'snapThrough' ? '' : ` (FS ${fix(r.fs as number)}, target ${fix(r.target)})`}`)
-    .join('; ');
+  const list = below.map(belowPhrase).join('; ');
   return `Result: ${below.length} check${below.length > 1 ? 's' : ''} below target ${STATUS_SYMBOL.below} — ${list}.`;
 }
 
@@ -163,6 +177,7 @@ export function buildVerdict(project: Project, report: Report, units: UnitSystem
   return {
     governing: g,
     status: row ? row.status : null,
+    overall: counted.length === 0 ? null : allCountedMeet(report.checks) ? 'meets' : 'below',
     counted: counted.length,
     below: counted.filter((r) => r.status === 'below').length,
     spanWord: spanWordOf(project),

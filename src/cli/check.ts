@@ -6,6 +6,7 @@
 import { version } from '../../package.json';
 import { analyse, analyseWithSupportNeeded, meetsTargets } from '../analysis/analyse';
 import { spanCurve } from '../analysis/span-curve';
+import { withUncertainty } from '../analysis/probability-row';
 import { minimumThickness } from '../analysis/thickness';
 import type { Analysis } from '../analysis/types';
 import type { Project } from '../model/types';
@@ -133,15 +134,16 @@ function checkOne(source: InputSource, io: Io, o: CheckOptions): CheckEntry {
   // The uncertainty run (METHODS §16): a bad variable refuses the file with its field path.
   try {
     const block = uncertaintyFor(project, o.sampling, io, file);
-    if (block) analysis = { ...analysis, report: { ...analysis.report, uncertainty: block } };
+    // The run's block in the report and, with an acceptable P_f, its counted row in the check table.
+    if (block) analysis = withUncertainty(analysis, block);
   } catch (e) {
     if (!(e instanceof ProjectError)) throw e;
     io.err(`lamina: input refused: ${file}: ${e.issues.map((i) => i.message).join('; ')}\n`);
     return { file, status: 'refused', exit: EXIT_REFUSED, errors: e.issues };
   }
   const u = analysis.report.uncertainty;
-  // An acceptable P_f in the file counts like a check: not shown to be met → exit 1.
-  const exit = meetsTargets(project, analysis.report) && u?.meetsAcceptablePf !== false ? EXIT_MEETS : EXIT_BELOW;
+  // From the check table alone: an acceptable P_f not shown to be met is a counted row below → exit 1.
+  const exit = meetsTargets(project, analysis.report) ? EXIT_MEETS : EXIT_BELOW;
   const curve = o.reports || typeof o.csv === 'string' ? spanCurve(project) : null;
   const doc = () => o.reports!.reportDocument({ project, analysis, curve: curve!, text, units: o.units, version: laminaVersion(), trace: o.trace });
   if (typeof o.html === 'string') writeOutput(io, '--html', o.html, o.reports!.renderHtml(doc()));

@@ -129,6 +129,13 @@ export function checkText(project: Project, analysis: Analysis, units: UnitSyste
     }
     lines.push('');
   });
+  // The whole roof's row: an uncertainty run's P_f against the file's acceptable P_f (METHODS §16).
+  const roof = r.checks.filter((x) => x.layerIndex === null);
+  if (roof.length) {
+    lines.push('Whole roof:', `  ${pad('check', 42)}${pad('FS', 9)}${pad('target', 8)}status`);
+    for (const row of roof) lines.push(`  ${pad(modeLabel(row.mode, r.opening.type), 42)}${pad(fs(row.fs), 9)}${pad(numberText(row.target, 3), 8)}${STATUS_TEXT[row.status]}`, `    ${row.note}`);
+    lines.push('');
+  }
   lines.push('Verdict:');
   for (const s of verdict.sentences) lines.push(`  ${s.text}`);
   lines.push('', ...spanLines(r.maxSpan_m, units, verdict.spanWord));

@@ -82,7 +82,7 @@ export function uncertaintyLines(u: UncertaintyReport): string[] {
   if (u.form) lines.push(`  FORM on the governing check: β = ${u.form.beta === null ? '—' : numberText(u.form.beta, 3)}, P_f = ${u.form.pf === null ? '—' : pct(u.form.pf)}${u.form.converged ? '' : ' (not converged)'}`);
   const ranked = u.sensitivity.filter((s) => s.rankCorrelation !== null).sort((a, b) => Math.abs(b.rankCorrelation as number) - Math.abs(a.rankCorrelation as number));
   if (ranked.length) lines.push(`  sensitivity (rank correlation with the governing FS): ${ranked.map((s) => `${s.path} ${numberText(s.rankCorrelation as number, 2)}`).join(', ')}`);
-  if (u.acceptablePf !== null) lines.push(`  acceptable P_f ${pct(u.acceptablePf)} (the file's): ${u.meetsAcceptablePf ? 'met ✓' : 'not shown to be met ✗'} (judged by the interval's upper end)`);
+  if (u.acceptablePf !== null) lines.push(`  acceptable P_f ${pct(u.acceptablePf)} (the file's): ${u.meetsAcceptablePf ? 'met ✓' : 'not shown to be met ✗'} (judged by the interval's upper end; a counted row of the check table)`);
   if (u.plateInterpolation) lines.push(`  slab plate coefficients interpolated: largest relative error ${numberText(100 * u.plateInterpolation.maxRelativeError, 2)} %`);
   lines.push('  P_f is the chance that some counted check has FS < 1 given the stated input distributions only; it does not cover the model\'s own error or inputs not varied.');
   return lines;

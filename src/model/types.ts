@@ -279,8 +279,14 @@ export type Mode = 'tension' | 'crushing' | 'sliding' | 'snapThrough' | 'deflect
 /** Modes of the support rows (METHODS §12): FS per bolt, a hanging layer between bolts, an interface of a bonded set. */
 export type SupportMode = 'bolt' | 'skin' | 'interlayerShear';
 
+/**
+ * The mode of the one row of the whole roof (METHODS §16): the probability of failure of an
+ * uncertainty run against the file's `uncertainty.acceptablePf`. It counts but never governs.
+ */
+export type RoofMode = 'probabilityOfFailure';
+
 /** Every mode a check-table row can have. */
-export type CheckMode = Mode | SupportMode;
+export type CheckMode = Mode | SupportMode | RoofMode;
 
 /** How a check stands: meets/below its target (counted), info (computed, not counted), n/a. */
 export type CheckStatusKind = 'meets' | 'below' | 'info' | 'na';
@@ -290,14 +296,23 @@ export type CheckStatusKind = 'meets' | 'below' | 'info' | 'na';
  * every layer. `counts` says whether it takes part in the verdict; `reason` says why not.
  */
 export interface CheckRow {
-  layerIndex: number;
+  /** The layer's index; null for the row of the whole roof (the probability of failure). */
+  layerIndex: number | null;
+  /** The layer's name; "whole roof" for the probability-of-failure row. */
   layer: string;
   mode: CheckMode;
-  /** MPa for tension and crushing, δ/t for deflection, kN per bolt, kPa interlayer shear; null where the check has no demand figure. */
+  /**
+   * MPa for tension and crushing, δ/t for deflection, kN per bolt, kPa interlayer shear, a
+   * probability for the P_f row (the 95 % interval's upper end against the acceptable P_f);
+   * null where the check has no demand figure.
+   */
   demand: number | null;
   capacity: number | null;
-  unit: 'MPa' | 'ratio' | 'kN' | 'kPa' | null;
-  /** null where the check does not apply. Snap-through: 1 stands, 0 snaps. Deflection: limit/(δ/t). */
+  unit: 'MPa' | 'ratio' | 'kN' | 'kPa' | 'probability' | null;
+  /**
+   * null where the check does not apply. Snap-through: 1 stands, 0 snaps. Deflection: limit/(δ/t).
+   * P_f row: acceptable P_f / the interval's upper end (capped at 1e6), against a target of 1.
+   */
   fs: number | null;
   target: number;
   counts: boolean;

@@ -1,7 +1,8 @@
 /**
  * CSV exports (d3-dsv `csvFormat`, RFC 4180 quoting): the per-layer check results, one row per
- * layer × mode, and the FS-versus-span curve. Units are in the column names; numbers are
- * written at full precision in the chosen unit system; a value that does not apply is an empty
+ * layer × mode (and the whole roof's P_f row, with an empty layer number, when an uncertainty
+ * run with an acceptable P_f is in the report), and the FS-versus-span curve. Units are in the
+ * column names (P_f and δ/t are plain numbers in the ratio columns); numbers are written at full precision in the chosen unit system; a value that does not apply is an empty
  * cell. Text cells that a spreadsheet would evaluate (`=…`, `+…`, `-…`, `@…`) get a leading
  * apostrophe (`csv-cell.ts`, OWASP "CSV Injection"); numbers are never touched. The caution is
  * not written into the CSV (a data table must parse as one); it is in every report that shows
@@ -36,13 +37,14 @@ export function resultsCsv(analysis: Analysis, units: UnitSystem, _project?: Pro
   ];
   const g = analysis.report.governing;
   const rows = analysis.report.checks.map((r) => csvSafeRow({
-    layer: r.layerIndex + 1,
+    layer: r.layerIndex === null ? '' : r.layerIndex + 1,
     layer_name: r.layer,
     mode: r.mode,
     [`demand_${stress}`]: r.unit === 'MPa' ? display(r.demand, 'stress', units) : '',
     [`capacity_${stress}`]: r.unit === 'MPa' ? display(r.capacity, 'stress', units) : '',
-    demand_ratio: r.unit === 'ratio' ? plain(r.demand) : '',
-    limit_ratio: r.unit === 'ratio' ? plain(r.capacity) : '',
+    // Plain numbers: δ/t and its limit, or the P_f row's upper end and the acceptable P_f.
+    demand_ratio: r.unit === 'ratio' || r.unit === 'probability' ? plain(r.demand) : '',
+    limit_ratio: r.unit === 'ratio' || r.unit === 'probability' ? plain(r.capacity) : '',
     fs: plain(r.fs),
     target: r.target,
     fs_over_target: r.fs === null ? '' : r.fs / r.target,

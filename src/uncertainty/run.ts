@@ -15,6 +15,7 @@
  */
 import { sampleEvaluator, type SampledField } from '../analysis/sample-evaluate';
 import { analyse } from '../analysis/analyse';
+import { acceptablePfMet } from '../analysis/probability-row';
 import { spanCurve } from '../analysis/span-curve';
 import type { Mode, Project, UncertaintyReport } from '../model/types';
 import { ProjectError } from '../model/validate';
@@ -141,6 +142,7 @@ export function* uncertaintySteps(project: Project, options: UncertaintyRunOptio
     samplesPerSpan: bySpan.length ? samplesPerSpan : 0,
     plateInterpolation: evaluator.plateInterpolation,
     acceptablePf,
-    meetsAcceptablePf: acceptablePf === null ? null : mc.failure.interval[1] <= acceptablePf,
+    // The check table's rule (its P_f row, `probability-row.ts`), restated in the block.
+    meetsAcceptablePf: acceptablePf === null ? null : acceptablePfMet(mc.failure.interval, acceptablePf),
   };
 }

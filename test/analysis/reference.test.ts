@@ -56,7 +56,7 @@ function compare(project: Project, label: string): void {
   if (project.opening.type !== 'slab') {
     // which checks count, per layer and mode (METHODS §10)
     for (const row of r.checks) {
-      if (row.fs === null) continue;
+      if (row.fs === null || row.layerIndex === null) continue;
       expect(row.counts, `${label} layer ${row.layerIndex} ${row.mode} counts`).toBe(ref.counts[row.layerIndex][row.mode as Mode]);
     }
     const g = r.governing;

@@ -6,13 +6,19 @@
  * References: the one-click lognormal against the ISRM Brazilian formula σt = 2P/(πDt)
  * (ISRM 1978) over the preset's valid discs, computed here; the run's P_f against
  * `runUncertainty` in node on the same project (the library path; test/browser/uncertainty-repro
- * shows the two engines count the same failures).
+ * shows the two engines count the same failures). A current run adds the acceptable P_f's row to
+ * the checks (status as node's check table gives it) and its section to the report; after an
+ * edit neither the row nor the old numbers are printed.
  */
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { appSession, openApp, waitForResults } from './app-page';
+import { appSession, openApp, showReport, waitForResults } from './app-page';
+import { analyse } from '../../src/analysis/analyse';
+import { withUncertainty } from '../../src/analysis/probability-row';
 import { parseProject } from '../../src/model/validate';
+import { NO_CURRENT_RUN } from '../../src/report/sections/uncertainty';
+import { numberText } from '../../src/report/number-text';
 import { runUncertainty } from '../../src/uncertainty/run';
 import type { Project } from '../../src/model/types';
 
@@ -140,4 +146,64 @@ describe('the uncertainty section', () => {
     expect(errors).toEqual([]);
     await context.close();
   }, 90_000);
+
+  it('a current run is in the checks (the acceptable P_f row) and in the report with its method and seed; after an edit the report prints no old numbers', async () => {
+    const { page, context, errors } = await openApp(session.browser, session.url);
+    const raw = presetRaw('drift-limestone');
+    raw.uncertainty = {
+      samples: 2000, seed: 11, method: 'latinHypercube', acceptablePf: 1e-3,
+      variables: [
+        { path: 'layers[0].thickness_m', distribution: 'lognormal', cov: 0.3 },
+        { path: 'opening.span_m', distribution: 'uniform', min: 8, max: 16 },
+      ],
+    };
+    await load(page, raw);
+    const checks = page.locator('checks-table');
+    expect(await checks.locator('tr[data-mode=probabilityOfFailure]').count()).toBe(0); // no run yet
+    await section(page).locator('[data-role=start-run]').click();
+    await section(page).locator('[data-role=uncertainty-result]').waitFor({ state: 'attached', timeout: 60_000 });
+
+    // node's check table with node's run of the same file: the row and its status
+    const p = parseProject(raw).project;
+    const inNode = runUncertainty(p);
+    const nodeRow = withUncertainty(analyse(p), inNode).report.checks.find((r) => r.mode === 'probabilityOfFailure')!;
+    const row = checks.locator('tr[data-mode=probabilityOfFailure]');
+    await expect.poll(() => row.count()).toBe(1);
+    expect(await row.getAttribute('data-status')).toBe(nodeRow.status);
+    expect(await row.getAttribute('data-counts')).toBe('true');
+    expect(await row.textContent()).toContain('whole roof');
+    expect(await row.getAttribute('class')).not.toContain('governing');
+    // the verdict line counts it: with the P_f row below, the tally says so (the deterministic checks of this preset meet)
+    expect(nodeRow.status).toBe('below'); // P_f ≈ 0.4 here, far above 1e-3
+    await expect.poll(() => page.locator('verdict-line p').first().textContent()).toMatch(/1 of \d+ counted checks below target/);
+    // the pinned chip gives the status of every counted check, not only the governing one
+    expect(await page.locator('verdict-chip p').first().textContent()).toMatch(/below ✗.*1 other counted check below/s);
+
+    await showReport(page);
+    const report = page.locator('report-view [data-role="report"]');
+    const u = report.locator('section.lr-section-uncertainty');
+    await expect.poll(() => u.count(), { timeout: 30_000 }).toBe(1);
+    const text = (await u.textContent()) ?? '';
+    expect(text).toContain(`P_f${numberText(inNode.pf, 3)} (95 % interval ${numberText(inNode.pfInterval[0], 3)} – ${numberText(inNode.pfInterval[1], 3)}`);
+    expect(text).toContain('Latin hypercube sampling, 2000 samples, seed 11');
+    expect(await u.locator('svg').count()).toBeGreaterThanOrEqual(2); // histogram, sensitivity (and P_f against span)
+    expect(await report.locator('section.lr-section-checks').textContent()).toContain('whole roof');
+    // the print copy is the same report
+    expect(await page.evaluate(() => document.getElementById('lamina-print-report')?.textContent ?? '')).toContain('seed 11');
+
+    // an edit: the run is stale; the report says there is no current run and prints none of its numbers
+    await page.evaluate(() => window.__lamina!.editNow('layers[0].unitWeight_kNm3', 27)); // the preset has 26
+    await expect.poll(() => u.textContent(), { timeout: 30_000 }).toContain(NO_CURRENT_RUN);
+    expect(await u.textContent()).not.toContain('seed 11');
+    expect(await u.locator('svg').count()).toBe(0);
+    expect(await report.locator('section.lr-section-checks').textContent()).not.toContain('whole roof');
+    await expect.poll(() => checks.locator('tr[data-mode=probabilityOfFailure]').count()).toBe(0);
+    expect(await page.evaluate(() => document.getElementById('lamina-print-report')?.textContent ?? '')).not.toContain('seed 11');
+    // back to the inputs of the run (as an undo would): the run is current again
+    await page.evaluate(() => window.__lamina!.editNow('layers[0].unitWeight_kNm3', 26));
+    await expect.poll(() => u.textContent(), { timeout: 30_000 }).toContain('seed 11');
+    await expect.poll(() => checks.locator('tr[data-mode=probabilityOfFailure]').count()).toBe(1);
+    expect(errors).toEqual([]);
+    await context.close();
+  }, 120_000);
 });

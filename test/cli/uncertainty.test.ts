@@ -3,6 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { run } from '../../src/cli/main';
 import type { Io } from '../../src/cli/io';
 import { presetFiles } from '../analysis/fixtures';
+import { rsProject } from '../uncertainty/rs-project';
 
 function fakeIo(files: Record<string, string>, errIsTty = false) {
   const out: string[] = [];
@@ -63,5 +64,43 @@ describe('lamina check with an uncertainty block (METHODS §16)', () => {
     const g = fakeIo({ 'p.json': JSON.stringify({ ...example, uncertainty: { variables: [{ path: 'layers[0].thickness_m', distribution: 'uniform', mean: 0.3, cov: 3 }] } }) });
     expect(await run(['check', 'p.json'], g.io)).toBe(2);
     expect(g.err()).toContain('uncertainty.variables[0].cov');
+  }, 60_000);
+});
+
+/**
+ * The exit code comes from the check table alone (METHODS §16): the R − S arrangement (closed-form
+ * P_f 2.49e-2; Ang & Tang 2007, ch. 6, memory) with every deterministic check met (FS 2 against a
+ * tension target of 1.5), so the acceptable P_f's row decides: 1e-1 is met (exit 0), 1e-3 is not (exit 1).
+ */
+describe('lamina check: the acceptable P_f is a counted row of the check table', () => {
+  const file = (acceptablePf: number | null) => {
+    const p = rsProject('normal', 2000, 1, acceptablePf);
+    p.design.fsTarget.tension = 1.5;
+    return JSON.stringify(p);
+  };
+  it.each([
+    [1e-1, 0, 'meets'],
+    [1e-3, 1, 'below'],
+  ] as const)('acceptable P_f %s: exit %s, the row %s, the governing row still the tension FS', async (acceptable, exit, status) => {
+    const f = fakeIo({ 'p.json': file(acceptable) });
+    expect(await run(['check', 'p.json', '--json'], f.io)).toBe(exit);
+    const report = JSON.parse(f.out());
+    const rows = report.checks.filter((r: { mode: string }) => r.mode === 'probabilityOfFailure');
+    expect(rows).toHaveLength(1);
+    expect(rows[0]).toMatchObject({ layerIndex: null, layer: 'whole roof', counts: true, status, capacity: acceptable, demand: report.uncertainty.pfInterval[1], target: 1 });
+    expect(report.governing.mode).toBe('tension');
+    expect(report.checks.filter((r: { mode: string; status: string }) => r.mode !== 'probabilityOfFailure' && r.status === 'below')).toHaveLength(0);
+    expect(f.out()).not.toMatch(/NaN|Infinity/);
+  }, 60_000);
+  it('without an acceptable P_f there is no row and the deterministic checks decide (exit 0)', async () => {
+    const f = fakeIo({ 'p.json': file(null) });
+    expect(await run(['check', 'p.json', '--json'], f.io)).toBe(0);
+    expect(JSON.parse(f.out()).checks.some((r: { mode: string }) => r.mode === 'probabilityOfFailure')).toBe(false);
+  }, 60_000);
+  it('the text output lists the whole roof row and the verdict names it', async () => {
+    const f = fakeIo({ 'p.json': file(1e-3) });
+    expect(await run(['check', 'p.json'], f.io)).toBe(1);
+    expect(f.out()).toMatch(/Whole roof:\n +check +FS +target +status\n +probability of failure P_f .*below ✗/);
+    expect(f.out()).toMatch(/Result: 1 check below target ✗ — the probability of failure of the whole roof/);
   }, 60_000);
 });

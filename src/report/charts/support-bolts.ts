@@ -94,6 +94,7 @@ export function supportBoltsSvg(project: Project, report: Report | null, options
   const shearRows = report ? report.checks.filter((c) => c.mode === 'interlayerShear') : [];
   const bonded = new Set<number>();
   for (const r of shearRows) {
+    if (r.layerIndex === null) continue;
     bonded.add(r.layerIndex);
     bonded.add(r.layerIndex + 1);
   }

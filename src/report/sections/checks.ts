@@ -12,7 +12,9 @@ import type { SectionContext } from './context';
 function amount(row: CheckRow, value: number | null, ctx: SectionContext): Cell {
   if (value === null || row.unit === null) return { text: MISSING, value: null, numeric: true };
   if (row.unit === 'ratio') return { text: `δ/t = ${numberText(value, 3)}`, value, numeric: true };
-  return { text: quantityText(value, 'stress', ctx.units), value, numeric: true };
+  if (row.unit === 'probability') return { text: `P_f ${numberText(value, 3)}`, value, numeric: true };
+  const quantity = row.unit === 'kN' ? 'boltForce' : row.unit === 'kPa' ? 'pressure' : 'stress';
+  return { text: quantityText(value, quantity, ctx.units), value, numeric: true };
 }
 
 /** True for the row named in `report.governing` (by layer index and mode). */
@@ -59,7 +61,7 @@ export function checksSection(ctx: SectionContext): Section {
     columns: [{ title: 'Layer' }, { title: 'Mode' }, { title: 'Demand' }, { title: 'Capacity' }, { title: 'FS', numeric: true }, { title: 'Target', numeric: true }, { title: 'Status' }, { title: 'Counts' }],
     rows: ctx.rows.map((r) => {
       const c = checkRowCells(r, ctx);
-      return [textCell(`${r.layerIndex + 1} ${report.layers[r.layerIndex]?.name ?? ''}`), ...c.slice(0, 6), textCell(r.reason ? `no: ${r.reason}` : 'yes')];
+      return [textCell(r.layerIndex === null ? r.layer : `${r.layerIndex + 1} ${report.layers[r.layerIndex]?.name ?? ''}`), ...c.slice(0, 6), textCell(r.reason ? `no: ${r.reason}` : 'yes')];
     }),
   });
   const word = ctx.verdict.spanWord;
@@ -95,7 +97,7 @@ export function resultBlocks(ctx: SectionContext): Block[] {
     kind: 'table',
     caption: 'Why each check counts or not, and what it compares',
     columns: [{ title: 'Layer' }, { title: 'Mode' }, { title: 'Note' }],
-    rows: ctx.rows.map((r) => [textCell(`${r.layerIndex + 1}`), textCell(modeLabel(r.mode, ctx.project.opening.type)), textCell(r.reason ? `not counted: ${r.reason} — ${r.note}` : r.note)]),
+    rows: ctx.rows.map((r) => [textCell(r.layerIndex === null ? r.layer : `${r.layerIndex + 1}`), textCell(modeLabel(r.mode, ctx.project.opening.type)), textCell(r.reason ? `not counted: ${r.reason} — ${r.note}` : r.note)]),
   });
   blocks.push({ kind: 'heading', level: 3, text: 'Intact beam results' });
   // An overhang has a root and a free end, no midspan: its bending tension is at the root.

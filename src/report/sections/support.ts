@@ -50,7 +50,7 @@ export function supportSection(ctx: SectionContext): Section | null {
   if (rows.length) {
     blocks.push({
       kind: 'list',
-      items: rows.map((row) => `${MODE_LABEL[row.mode]}, ${layerName(ctx, row.layerIndex)}: FS ${fs(row.fs)} against ${numberText(row.target, 3)} — ${STATUS_TEXT[row.status]}${row.reason ? ` (${row.reason})` : ''}. ${row.note}`),
+      items: rows.map((row) => `${MODE_LABEL[row.mode]}, ${row.layerIndex === null ? row.layer : layerName(ctx, row.layerIndex)}: FS ${fs(row.fs)} against ${numberText(row.target, 3)} — ${STATUS_TEXT[row.status]}${row.reason ? ` (${row.reason})` : ''}. ${row.note}`),
     });
   }
   const n = r.support?.needed;

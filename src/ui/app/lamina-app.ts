@@ -2,7 +2,10 @@
  * `<lamina-app>`: the worksheet shell. Holds the store (the one place the analysis runs),
  * forwards the components' events to it, and lays out the sheet top to bottom:
  * caution · verdict · 1 Opening and loads · 2 Strata · 3 Lab tests · 4 Strength chain ·
- * 5 Checks · 6 Support · 7 Span and thickness · 8 Uncertainty (a study run in a worker) · 9 Report. Results elements (sections 4–9, the trace dialog)
+ * 5 Checks · 6 Support · 7 Span and thickness · 8 Uncertainty (a study run in a worker) · 9 Report.
+ * A finished run that is current for the inputs (`uncertainty/current-run.ts`) adds its P_f row
+ * (with an acceptable P_f) to the checks and the verdict, and its section to the report; a run
+ * made before the latest edit reaches neither. Results elements (sections 4–9, the trace dialog)
  * are rendered by tag; if one is not registered the page still works (it stays empty).
  *
  * Under the project bar it warns of demo text left in a changed project (with a one-click
@@ -35,6 +38,7 @@ import './verdict-line';
 import './project-bar';
 import './verdict-chip';
 import type { UncertaintyRunner } from '../compute/types';
+import { analysisWithRun, type UncertaintyRun } from '../uncertainty/current-run';
 
 const SECTIONS = [
   { id: 'opening', title: 'Opening and loads' },
@@ -71,6 +75,7 @@ export class LaminaApp extends LitElement {
     store: { attribute: false },
     state: { state: true },
     tracePath: { state: true },
+    uncertaintyRun: { state: true },
   };
 
   store!: ProjectStore;
@@ -78,6 +83,10 @@ export class LaminaApp extends LitElement {
   tracePath: string | null = null;
   /** Runs the uncertainty study off the main thread: main.ts passes the compute client's runner (its run worker). */
   runner: UncertaintyRunner | null = null;
+  /** The last finished uncertainty run; it reaches the checks and the report only while current (`current-run.ts`). */
+  uncertaintyRun: UncertaintyRun | null = null;
+  private resultsWithRun = analysisWithRun();
+  private reportWithRun = analysisWithRun();
   private unsubscribe: (() => void) | null = null;
   private lastAnalysis: unknown = null;
   private firstResultsMarked = false;
@@ -378,6 +387,7 @@ export class LaminaApp extends LitElement {
     this.addEventListener('project-file-errors', this.onFileErrors as EventListener);
     this.addEventListener('app-notice', this.onNotice as EventListener);
     this.addEventListener('field-refused', this.onFieldRefused as EventListener);
+    this.addEventListener('uncertainty-result', this.onUncertaintyResult as EventListener);
     window.addEventListener('keydown', this.onKey);
   }
 
@@ -522,6 +532,11 @@ export class LaminaApp extends LitElement {
 
   private onFileErrors = (e: CustomEvent<{ source: string; errors: { path: string; message: string }[] }>): void => {
     this.store.setFileErrors(e.detail.source, e.detail.errors, `${e.detail.source}: not opened — the current project is unchanged.`);
+  };
+
+  private onUncertaintyResult = (e: CustomEvent<UncertaintyRun>): void => {
+    e.stopPropagation();
+    this.uncertaintyRun = e.detail;
   };
 
   private onFieldRefused = (e: CustomEvent<{ path: string; message: string | null }>): void => {
@@ -672,6 +687,8 @@ export class LaminaApp extends LitElement {
     // analysis of an edit is on its way; the sections say "updating…" meanwhile).
     const rp = s.resultsProject ?? p;
     const report = s.analysis?.report ?? null;
+    // With a run of the uncertainty study for these inputs: its P_f row in the check table and the verdict.
+    const ra = this.resultsWithRun(s.analysis, rp, this.uncertaintyRun);
     // A refused file, link or paste gets its own dialog; a refused field is shown beside the
     // field and on the fixed-height status line (so the sheet does not jump while typing).
     const fileErrors = s.fileErrors;
@@ -689,7 +706,7 @@ export class LaminaApp extends LitElement {
           ${s.stale
             ? html`<p class="stale-note" role="status"><span class="stale-word">Stale</span>the verdict and results are for the last accepted values; a field holds a refused value.</p>`
             : nothing}
-          <verdict-line .project=${rp} .analysis=${s.analysis} units=${s.units} ?pending=${s.pending} .error=${s.error}></verdict-line>
+          <verdict-line .project=${rp} .analysis=${ra} units=${s.units} ?pending=${s.pending} .error=${s.error}></verdict-line>
         </div>
         <p class="status-line" role="status" aria-live="polite">
           ${editErrors.length
@@ -704,7 +721,7 @@ export class LaminaApp extends LitElement {
       </div>
       <div class="pin" aria-label="Caution and verdict">
         <caution-banner compact></caution-banner>
-        <verdict-chip .project=${rp} .analysis=${s.analysis} ?stale=${s.stale} ?pending=${s.pending}></verdict-chip>
+        <verdict-chip .project=${rp} .analysis=${ra} ?stale=${s.stale} ?pending=${s.pending}></verdict-chip>
       </div>
       <div class="messages">
         ${this.renderAutosave(s)}
@@ -748,7 +765,7 @@ export class LaminaApp extends LitElement {
       </section>
       <section class="results" aria-labelledby="checks-h">
         ${this.heading(5, s.pending)}
-        <checks-table .project=${rp} .analysis=${s.analysis} .units=${s.units}></checks-table>
+        <checks-table .project=${rp} .analysis=${ra} .units=${s.units}></checks-table>
       </section>
       <section class="results support" aria-labelledby="support-h">
         ${this.heading(6, s.pending || s.supportPending)}
@@ -774,7 +791,7 @@ export class LaminaApp extends LitElement {
       </section>
       <section class="print" aria-labelledby="report-h">
         ${this.heading(SECTIONS.findIndex((x) => x.id === 'report') + 1)}
-        <report-view .project=${rp} .analysis=${this.reportAnalysis(s)} .curve=${s.chartPending ? null : s.curve} .units=${s.units}></report-view>
+        <report-view .project=${rp} .analysis=${this.reportWithRun(this.reportAnalysis(s), rp, this.uncertaintyRun)} .curve=${s.chartPending ? null : s.curve} .units=${s.units}></report-view>
       </section>
       <trace-dialog .report=${report} .path=${this.tracePath ?? ''} .units=${s.units} ?open=${this.tracePath !== null}></trace-dialog>
       <footer><caution-banner></caution-banner></footer>

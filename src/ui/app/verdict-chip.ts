@@ -1,6 +1,8 @@
 /**
  * `<verdict-chip>`: the verdict in one short line for the pinned bar of narrow screens — the
- * governing status (word and symbol, from the check table's vocabulary in `analysis/check-labels.ts`), its factor of safety
+ * status of all counted checks (word and symbol, from the check table's vocabulary in
+ * `analysis/check-labels.ts`; with an uncertainty run's P_f row below, "below" though the
+ * governing FS meets, and it says so), the governing factor of safety
  * against the target, and the governing mode and layer. While a field holds a refused value it
  * says "stale" in words. The full sentence stays in `<verdict-line>`.
  */
@@ -68,12 +70,15 @@ export class VerdictChip extends LitElement {
     const g = a.report.governing;
     if (!g) return html`<p>${staleMark}<span class="verdict">No check applies.</span></p>`;
     const target = g.target;
-    const kind = buildVerdict(this.project, a.report).status ?? 'na';
+    // The status of every counted row together (the P_f row counts without governing).
+    const v = buildVerdict(this.project, a.report);
+    const kind = v.overall ?? v.status ?? 'na';
     const status = { kind, text: STATUS_TEXT[kind] };
+    const also = v.status === 'meets' && v.overall === 'below' ? ` · ${v.below} other counted check${v.below === 1 ? '' : 's'} below` : '';
     const fs = g.mode === 'snapThrough' ? 'snaps through' : `FS ${numberText(g.fs)} / target ${numberText(target)}`;
     return html`<p>
       ${staleMark}<span class="verdict"
-        ><span class="status ${status.kind}">${status.text}</span> ${fs} · ${MODE_NAME[g.mode]}, layer ${g.layerIndex + 1} ${g.layer}${this.pending ? ' (updating…)' : ''}</span
+        ><span class="status ${status.kind}">${status.text}</span> ${fs} · ${MODE_NAME[g.mode]}, layer ${g.layerIndex + 1} ${g.layer}${also}${this.pending ? ' (updating…)' : ''}</span
       >
     </p>`;
   }

@@ -19,7 +19,8 @@ export interface CheckValue {
 
 export interface CheckRowView {
   row: CheckRow;
-  layer: number;
+  /** The layer's index; null for the whole roof's P_f row. */
+  layer: number | null;
   mode: CheckMode;
   /** True for the row `report.governing` names (by layer index and mode). */
   governing: boolean;
@@ -35,11 +36,23 @@ function sameNumber(a: number | null | undefined, b: number | null | undefined):
   return a !== null && a !== undefined && b !== null && b !== undefined && a === b;
 }
 
-/** Every check row, in the report's order (layers, then modes). */
+/** The whole roof's P_f row (METHODS §16): the interval's upper end against the acceptable P_f. */
+function probabilityView(row: CheckRow): CheckRowView {
+  const note = row.note;
+  return {
+    row, layer: null, mode: row.mode, governing: false,
+    demand: row.demand === null ? null : { value: row.demand, quantity: null, path: null, qualifier: 'P_f, 95 % upper end' },
+    capacity: row.capacity === null ? null : { value: row.capacity, quantity: null, path: null, qualifier: 'acceptable P_f' },
+    fsPath: null, note,
+  };
+}
+
+/** Every check row, in the report's order (layers, then modes; the whole roof's P_f row last). */
 export function checkRowViews(report: Report): CheckRowView[] {
   const g = report.governing;
   return report.checks.map((row) => {
     const i = row.layerIndex;
+    if (i === null) return probabilityView(row);
     const lr = report.layers[i]!;
     const v = lr.voussoir;
     let demand: CheckValue | null = null;

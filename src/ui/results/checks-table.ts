@@ -1,6 +1,7 @@
 /**
  * `<checks-table>`: every check of every layer (tension, crushing, sliding, snap-through,
- * deflection) with demand, capacity, FS, target and status (word + symbol), the governing check
+ * deflection, the support rows) and, with a current uncertainty run and an acceptable P_f, the
+ * whole roof's P_f row, with demand, capacity, FS, target and status (word + symbol), the governing check
  * in one sentence, and all warnings with their paths. Renders the report; computes nothing.
  *
  * @fires show-trace - detail `{ path }` when a traced number is clicked
@@ -63,7 +64,7 @@ export class ChecksTable extends DeferOffscreen(LitElement) {
   private row(view: CheckRowView, first: boolean, span: number): TemplateResult {
     const r = view.row;
     return html`<tr
-      data-layer=${view.layer}
+      data-layer=${view.layer === null ? 'roof' : view.layer}
       data-mode=${view.mode}
       data-status=${r.status}
       data-counts=${String(r.counts)}
@@ -86,6 +87,9 @@ export class ChecksTable extends DeferOffscreen(LitElement) {
     if (!a || !p) return html`<p class="empty">No results yet: the analysis has not run.</p>`;
     const report = a.report;
     const byLayer = report.layers.map((_, i) => this.rows.filter((r) => r.layer === i));
+    // The whole roof's row (the P_f of an uncertainty run against the acceptable P_f) comes last.
+    const roof = this.rows.filter((r) => r.layer === null);
+    if (roof.length) byLayer.push(roof);
     return html`
       <p class="verdict" data-role="verdict">
         ${this.verdict.join(' ')}

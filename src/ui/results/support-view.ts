@@ -176,7 +176,7 @@ export class SupportView extends DeferOffscreen(LitElement) {
             <thead><tr><th scope="col">Layer</th><th scope="col">Check</th><th scope="col">FS</th><th scope="col">Target</th><th scope="col">Status</th></tr></thead>
             <tbody>
               ${rows.map((r) => html`<tr data-mode=${r.mode} data-layer=${r.layerIndex} data-status=${r.status}>
-                <td>${name(r.layerIndex)}</td><td>${MODE_LABEL[r.mode]}</td>
+                <td>${r.layerIndex === null ? r.layer : name(r.layerIndex)}</td><td>${MODE_LABEL[r.mode]}</td>
                 <td class="num">${numberText(r.fs, 3)}</td><td class="num">${numberText(r.target, 3)}</td>
                 <td><span class="status ${r.status}" title=${statusDescription(r)}>${STATUS_TEXT[r.status]}</span>${r.reason ? html` <span class="note">${r.reason}</span>` : nothing}</td>
               </tr>`)}

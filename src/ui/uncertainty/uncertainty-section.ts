@@ -6,12 +6,14 @@
  * variable is refused with its field path, shown here). "Run" hands the project to `runner`
  * (the worker of `ui/compute`, so typing stays responsive); a progress bar follows it and
  * "Cancel" aborts it. An edit of the project while a run is going cancels it; a result whose
- * project has since changed is kept on screen marked stale until the next run. Results: P_f
+ * project has since changed is kept on screen marked stale until the next run (and is left out
+ * of the check table and the printed report: `current-run.ts`). Results: P_f
  * with its 95 % interval, β, P(below target), FORM, P_f per mode, the histogram of the
  * governing FS (FS = 1 and the target marked), the sensitivity (tornado) chart and P_f
  * against span — the report's charts. Computes nothing itself.
  *
  * @fires project-edit - { path, value } on `uncertainty`, `uncertainty.variables` or a field of one
+ * @fires uncertainty-result - { result, key } when a run finishes (key: the project it was made for, `current-run.ts`)
  * @fires field-refused - { path, message: null } when the user dismisses a refused edit
  */
 import { openingWords } from '../../model/span-wording';
@@ -38,6 +40,7 @@ import { tokens } from '../styles/tokens';
 import { sheet } from '../styles/sheet';
 import { fieldName, quantityOf, samplablePaths } from './variable-fields';
 import { DeferOffscreen } from '../app/defer-offscreen';
+import { projectKey, type UncertaintyRun } from './current-run';
 
 /** The block a first variable creates (the model's defaults: 20 000 samples, seed 1, Latin hypercube). */
 const NEW_BLOCK: Omit<Uncertainty, 'variables'> = { samples: 20000, seed: 1, method: 'latinHypercube', acceptablePf: null };
@@ -109,7 +112,7 @@ export class UncertaintySection extends DeferOffscreen(LitElement) {
   protected override willUpdate(changed: PropertyValues<this>): void {
     if (changed.has('project')) {
       const p = this.project;
-      this.key = p ? JSON.stringify(p) : '';
+      this.key = p ? projectKey(p) : '';
       this.paths = p ? samplablePaths(p) : [];
       this.brazilian = p
         ? p.layers.flatMap((_, i) => {
@@ -181,6 +184,8 @@ export class UncertaintySection extends DeferOffscreen(LitElement) {
       performance.mark('lamina:uncertainty-result'); // the result is here; rendering it follows
       this.last = { result, key };
       this.run = { kind: 'done', result, key };
+      // The worksheet takes the run into the check table and the report while it is current.
+      fire<UncertaintyRun>(this, 'uncertainty-result', { result, key });
     } catch (err) {
       if (this.abort !== abort && !(err instanceof DOMException && err.name === 'AbortError')) return;
       if (err instanceof DOMException && err.name === 'AbortError') {
@@ -321,7 +326,7 @@ export class UncertaintySection extends DeferOffscreen(LitElement) {
       <ul>
         <li>P(some counted check below its target) = ${prob(u.pBelowTarget)}</li>
         <li>FORM on the governing check: ${u.form ? html`β ${u.form.beta === null ? '—' : numberText(u.form.beta, 3)}, P_f ${u.form.pf === null ? '—' : prob(u.form.pf)}${u.form.converged ? '' : ' (did not converge)'}` : 'not run'}</li>
-        ${u.acceptablePf !== null ? html`<li>Acceptable P_f ${prob(u.acceptablePf)}: ${u.meetsAcceptablePf ? 'met ✓ (the interval’s upper end is below it)' : 'not shown to be met ✗ (the interval’s upper end is above it)'}</li>` : nothing}
+        ${u.acceptablePf !== null ? html`<li>Acceptable P_f ${prob(u.acceptablePf)}: ${u.meetsAcceptablePf ? 'met ✓ (the interval’s upper end is at or below it)' : 'not shown to be met ✗ (the interval’s upper end is above it)'}; a counted row of the check table (5 Checks) while this run is current</li>` : nothing}
         ${u.plateInterpolation ? html`<li>Slab plate coefficients interpolated (largest relative error measured ${numberText(100 * u.plateInterpolation.maxRelativeError, 2)} %)</li>` : nothing}
       </ul>
       <table class="vars" data-role="pf-by-mode">

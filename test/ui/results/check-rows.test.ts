@@ -5,6 +5,9 @@ import { checkRowViews } from '../../../src/ui/results/check-rows';
 import { governingLayerIndex } from '../../../src/ui/state/project-store';
 import { expectClose } from '../../helpers/expect-close';
 import { copy, loadPreset, PRESET_NAMES } from './presets';
+import { withUncertainty } from '../../../src/analysis/probability-row';
+import { runUncertainty } from '../../../src/uncertainty/run';
+import { rsProject } from '../../uncertainty/rs-project';
 
 describe('checkRowViews(report)', () => {
   it.each(PRESET_NAMES)('gives one view per row of the analysis check table, in its order — %s', (name) => {
@@ -68,5 +71,21 @@ describe('checkRowViews(report)', () => {
     const row = r2.checks.find((r) => r.layerIndex === r2.governing!.layerIndex && r.mode === r2.governing!.mode)!;
     expect(row.status === 'below' || row.status === 'meets').toBe(true);
     expect(checkRowViews(r2).filter((v) => v.governing).map((v) => v.layer)).toEqual([r2.governing!.layerIndex]);
+  });
+});
+
+describe('checkRowViews with an uncertainty run (METHODS §16)', () => {
+  it('the whole roof’s P_f row: no layer, never governing, the interval’s upper end against the acceptable P_f', () => {
+    const project = rsProject('normal', 1000, 1, 1e-3);
+    const block = runUncertainty(project, { spanPoints: 0, form: false });
+    const { report } = withUncertainty(analyse(project), block);
+    const views = checkRowViews(report);
+    const v = views.find((x) => x.mode === 'probabilityOfFailure')!;
+    expect(views[views.length - 1]).toBe(v);
+    expect(v.layer).toBe(null);
+    expect(v.governing).toBe(false);
+    expect(v.demand?.value).toBe(block.pfInterval[1]);
+    expect(v.capacity?.value).toBe(1e-3);
+    expect(v.note).toContain('upper end of the 95 % interval');
   });
 });
