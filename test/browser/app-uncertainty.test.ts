@@ -176,6 +176,8 @@ describe('the uncertainty section', () => {
     // the verdict line counts it: with the P_f row below, the tally says so (the deterministic checks of this preset meet)
     expect(nodeRow.status).toBe('below'); // P_f ≈ 0.4 here, far above 1e-3
     await expect.poll(() => page.locator('verdict-line p').first().textContent()).toMatch(/1 of \d+ counted checks below target/);
+    // and its badge gives the result of every counted check (the governing FS meets, the P_f row does not)
+    expect(await page.locator('verdict-line p .status').first().getAttribute('class')).toContain('below');
     // the pinned chip gives the status of every counted check, not only the governing one
     expect(await page.locator('verdict-chip p').first().textContent()).toMatch(/below ✗.*1 other counted check below/s);
 

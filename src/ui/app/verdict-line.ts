@@ -106,8 +106,11 @@ export class VerdictLine extends LitElement {
         : MODE_PATH[g.mode] === undefined
           ? html`FS ${numberText(g.fs, 3)} against a target of ${numberText(g.target, 3)}`
           : html`FS ${tracedValue(`layers[${g.layerIndex}].${MODE_PATH[g.mode]}`, numberText(g.fs, 3), g.fs)} against a target of ${numberText(g.target, 3)}`;
+    // The badge is the result of every counted check, as the chip's: a governing FS that meets
+    // with an acceptable P_f that is not shown to be met reads "below".
+    const badge = v.overall ?? v.status;
     return html`<p data-mode=${g.mode} data-fs=${String(g.fs)} data-layer=${g.layerIndex}>
-      <span class="status ${v.status}" title=${text('governing')}>${STATUS_TEXT[v.status]}</span>
+      <span class="status ${badge}" title=${badge === v.status ? text('governing') : 'Every counted check together: one that never governs (the acceptable P_f) is below'}>${STATUS_TEXT[badge]}</span>
       Governing: ${MODE_NAME[g.mode]} of <strong>${g.layer}</strong> (layer ${g.layerIndex + 1}), ${fsPart}.${tally} ${spanText}${pending}
     </p>
     <div class="basis">${text('intact')} ${text('cracked')}</div>`;
