@@ -83,6 +83,12 @@ function boot(): void {
     }
   });
 
+  // An autosave still waiting for the next paint is written before the page goes away.
+  window.addEventListener('pagehide', () => store.flushAutosave());
+  document.addEventListener('visibilitychange', () => {
+    if (document.visibilityState === 'hidden') store.flushAutosave();
+  });
+
   window.__lamina = {
     state: () => store.getState(),
     store,

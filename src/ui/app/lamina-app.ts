@@ -39,6 +39,7 @@ import './project-bar';
 import './verdict-chip';
 import type { UncertaintyRunner } from '../compute/types';
 import { analysisWithRun, type UncertaintyRun } from '../uncertainty/current-run';
+import { whenSettledAfterPaint } from '../after-paint';
 
 const SECTIONS = [
   { id: 'opening', title: 'Opening and loads' },
@@ -76,6 +77,7 @@ export class LaminaApp extends LitElement {
     state: { state: true },
     tracePath: { state: true },
     uncertaintyRun: { state: true },
+    sheetComplete: { state: true },
   };
 
   store!: ProjectStore;
@@ -90,6 +92,13 @@ export class LaminaApp extends LitElement {
   private unsubscribe: (() => void) | null = null;
   private lastAnalysis: unknown = null;
   private firstResultsMarked = false;
+  /**
+   * False until the first results are painted: the first render holds the top of the sheet
+   * (title, caution, verdict, 1 Opening and loads, 2 Strata) and only the headings of the
+   * sections below, which are out of view at load; they are filled in the task after the
+   * first results are painted (`completeSheet`), so the first results wait for less.
+   */
+  sheetComplete = false;
   /** An accepted edit's state, held back until its results land (or HOLD_MS passes). */
   private held: AppState | null = null;
   private holdTimer: ReturnType<typeof setTimeout> | null = null;
@@ -445,6 +454,29 @@ export class LaminaApp extends LitElement {
     }
   }
 
+  /** Fill in the sections below the top of the sheet (once); marks `lamina:sheet-complete` after their paint. */
+  private completeSheet(): void {
+    if (this.sheetComplete) return;
+    this.sheetComplete = true;
+    void this.updateComplete
+      .then(() => nextFrame())
+      .then(() =>
+        setTimeout(() => {
+          try {
+            performance.mark('lamina:sheet-complete');
+          } catch {
+            /* the timeline is optional */
+          }
+        }, 0),
+      );
+  }
+
+  protected override firstUpdated(): void {
+    // Without first results to wait for (the analysis failed), the sheet is completed once the
+    // page has painted and settled.
+    void whenSettledAfterPaint(500).then(() => this.completeSheet());
+  }
+
   /** After the analysis has been rendered: mark and measure edit → results. */
   private async markResults(): Promise<void> {
     await this.updateComplete;
@@ -459,6 +491,7 @@ export class LaminaApp extends LitElement {
         } catch {
           /* the timeline is optional */
         }
+        this.completeSheet();
         // The uncertainty section (far down the sheet) is not in the first load: its element
         // is defined once the first results are on screen, and upgrades in place.
         void import('../uncertainty/uncertainty-section');
@@ -693,6 +726,8 @@ export class LaminaApp extends LitElement {
     // field and on the fixed-height status line (so the sheet does not jump while typing).
     const fileErrors = s.fileErrors;
     const editErrors = s.fieldErrors;
+    // Sections 3–9 hold only their headings until the first results are painted.
+    const more = this.sheetComplete;
     return html`
       <header>
         <h1>Lamina <small>roof beam worksheet</small></h1>
@@ -757,41 +792,47 @@ export class LaminaApp extends LitElement {
       </section>
       <section class="inputs" aria-labelledby="lab-h">
         ${this.heading(3)}
-        <lab-tests-panel .project=${p} .analysis=${s.analysis} units=${s.units} .fieldErrors=${s.fieldErrors}></lab-tests-panel>
+        ${more ? html`<lab-tests-panel .project=${p} .analysis=${s.analysis} units=${s.units} .fieldErrors=${s.fieldErrors}></lab-tests-panel>` : nothing}
       </section>
       <section class="results" aria-labelledby="strength-h">
         ${this.heading(4, s.pending)}
-        <strength-chain-view .project=${rp} .analysis=${s.analysis} .units=${s.units}></strength-chain-view>
+        ${more ? html`<strength-chain-view .project=${rp} .analysis=${s.analysis} .units=${s.units}></strength-chain-view>` : nothing}
       </section>
       <section class="results" aria-labelledby="checks-h">
         ${this.heading(5, s.pending)}
-        <checks-table .project=${rp} .analysis=${ra} .units=${s.units}></checks-table>
+        ${more ? html`<checks-table .project=${rp} .analysis=${ra} .units=${s.units}></checks-table>` : nothing}
       </section>
       <section class="results support" aria-labelledby="support-h">
         ${this.heading(6, s.pending || s.supportPending)}
-        <support-form .project=${p} units=${s.units} .fieldErrors=${s.fieldErrors}></support-form>
-        <support-view .project=${rp} .analysis=${s.analysis} .units=${s.units} .needed=${s.supportNeeded} ?pending=${s.supportPending}></support-view>
+        ${more
+          ? html`<support-form .project=${p} units=${s.units} .fieldErrors=${s.fieldErrors}></support-form>
+              <support-view .project=${rp} .analysis=${s.analysis} .units=${s.units} .needed=${s.supportNeeded} ?pending=${s.supportPending}></support-view>`
+          : nothing}
       </section>
       <section class="results" aria-labelledby="span-h">
         ${this.heading(7, s.pending || s.chartPending)}
-        <span-finder-view
-          .project=${rp}
-          .analysis=${s.analysis}
-          .units=${s.units}
-          .curve=${s.curve}
-          .chart=${s.chart}
-          .chartLayer=${s.chartLayer}
-          .minThickness=${s.minThickness_m}
-        ></span-finder-view>
-        <beam-charts-view .project=${rp} .analysis=${s.analysis} .units=${s.units} .chart=${s.chart} .chartLayer=${s.chartLayer}></beam-charts-view>
+        ${more
+          ? html`<span-finder-view
+                .project=${rp}
+                .analysis=${s.analysis}
+                .units=${s.units}
+                .curve=${s.curve}
+                .chart=${s.chart}
+                .chartLayer=${s.chartLayer}
+                .minThickness=${s.minThickness_m}
+              ></span-finder-view>
+              <beam-charts-view .project=${rp} .analysis=${s.analysis} .units=${s.units} .chart=${s.chart} .chartLayer=${s.chartLayer}></beam-charts-view>`
+          : nothing}
       </section>
       <section class="results study" aria-labelledby="uncertainty-h">
         ${this.heading(SECTIONS.findIndex((x) => x.id === 'uncertainty') + 1)}
-        <uncertainty-section .project=${p} .runner=${this.runner} .units=${s.units} .fieldErrors=${s.fieldErrors}></uncertainty-section>
+        ${more ? html`<uncertainty-section .project=${p} .runner=${this.runner} .units=${s.units} .fieldErrors=${s.fieldErrors}></uncertainty-section>` : nothing}
       </section>
       <section class="print" aria-labelledby="report-h">
         ${this.heading(SECTIONS.findIndex((x) => x.id === 'report') + 1)}
-        <report-view .project=${rp} .analysis=${this.reportWithRun(this.reportAnalysis(s), rp, this.uncertaintyRun)} .curve=${s.chartPending ? null : s.curve} .units=${s.units}></report-view>
+        ${more
+          ? html`<report-view .project=${rp} .analysis=${this.reportWithRun(this.reportAnalysis(s), rp, this.uncertaintyRun)} .curve=${s.chartPending ? null : s.curve} .units=${s.units}></report-view>`
+          : nothing}
       </section>
       <trace-dialog .report=${report} .path=${this.tracePath ?? ''} .units=${s.units} ?open=${this.tracePath !== null}></trace-dialog>
       <footer><caution-banner></caution-banner></footer>

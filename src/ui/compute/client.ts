@@ -19,7 +19,7 @@ import type { ComputeRequest, ComputeResponse } from './protocol';
 import type { AnalysisOutcome, ChartOutcome, ComputeClient, RunHooks, SupportOutcome, UncertaintyRunRequest } from './types';
 import { analysisJob, chartJob, supportJob, type AnalysisFunctions } from './jobs';
 import { createQuickPath } from './quick-path';
-import { whenSettledAfterPaint } from '../after-paint';
+import { afterNextPaint, whenSettledAfterPaint } from '../after-paint';
 
 export const abortError = (): DOMException => new DOMException('The uncertainty run was cancelled.', 'AbortError');
 
@@ -176,16 +176,16 @@ export function createWorkerClient(makeWorker: WorkerFactory = defaultWorkerFact
   // Charts and the support needed go to a third instance (started on the first such call):
   // a design chart takes tens of milliseconds, and in the edit worker it would sit in front
   // of the next key's analysis.
-  // It starts once the page has painted and settled: the first results never share the
-  // machine with a worker booting for a chart that is off screen.
+  // It starts once the page has painted and settled (the first results never share the
+  // machine with a worker booting for a chart that is off screen), and each request is posted
+  // after the next paint (copying the project to it is not in the way of the edit's frame).
   let asideChannel: WorkerChannel | null = null;
   let asideGate: Promise<void> | null = null;
   const aside = {
     send: (body: RequestBody): Promise<unknown> => {
       if (closed) return Promise.reject(new Error('the compute client was closed'));
-      if (asideChannel) return asideChannel.call(body).promise;
-      asideGate ??= whenSettledAfterPaint();
-      return asideGate.then(() => {
+      const ready = asideChannel ? afterNextPaint() : (asideGate ??= whenSettledAfterPaint());
+      return ready.then(() => {
         if (closed) throw new Error('the compute client was closed');
         asideChannel ??= new WorkerChannel(makeWorker(), onFailure);
         return asideChannel.call(body).promise;

@@ -112,6 +112,11 @@ export interface StoreDeps {
   storage?: KeyValueStorage | null;
   /** Marks for the edit → results measure (performance.mark in the browser). */
   mark?: (name: string) => void;
+  /**
+   * Runs `task` later, out of the way of the edit's own frame (after the next paint in the
+   * browser). Without it the autosave is written at once (tests, node).
+   */
+  later?: (task: () => void) => void;
 }
 
 export type Listener = (state: AppState) => void;
@@ -254,8 +259,8 @@ export class ProjectStore {
       chartPending: true,
       notice: migrationNotice(checked.warnings) ?? (source ? `${/^(File|Demo|Project link)\b/.test(source) ? 'Loaded' : 'Applied'}: ${source}.` : this.state.notice),
     });
-    // The analysis is posted first: the autosave (a synchronous storage write) runs while the
-    // worker computes.
+    // The analysis first; the autosave (a synchronous storage write) after the edit's frame in
+    // the browser (`deps.later`), at once elsewhere.
     this.requestAnalysis();
     this.autosave(checked.project);
     return true;
@@ -280,8 +285,28 @@ export class ProjectStore {
     return true;
   }
 
-  /** Write the project to the autosave unless paused; a refusal is shown, never swallowed. */
+  /** The project waiting to be autosaved after the next paint (several quick edits: one write). */
+  private toSave: Project | null = null;
+
+  /** Autosave the project: at once, or with `deps.later` after the edit's frame. */
   private autosave(project: Project): void {
+    const later = this.deps.later;
+    if (!later) return this.writeAutosave(project);
+    const waiting = this.toSave !== null;
+    this.toSave = project;
+    if (waiting) return;
+    later(() => this.flushAutosave());
+  }
+
+  /** Write an autosave that is still waiting (the page is being hidden or closed). */
+  flushAutosave(): void {
+    const p = this.toSave;
+    this.toSave = null;
+    if (p) this.writeAutosave(p);
+  }
+
+  /** Write the project to the autosave unless paused; a refusal is shown, never swallowed. */
+  private writeAutosave(project: Project): void {
     const storage = this.deps.storage ?? null;
     if (!storage || this.state.autosave.status === 'paused') return;
     const r = saveAutosave(storage, project);

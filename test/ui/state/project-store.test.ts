@@ -105,6 +105,31 @@ describe('ProjectStore', () => {
     expect(st.pending).toBe(false);
   });
 
+  it('with `later`, quick edits share one autosave write after the frame; a waiting write is flushed when the page goes', async () => {
+    const d = deps();
+    const tasks: Array<() => void> = [];
+    let writes = 0;
+    const setItem = d.storage.setItem.bind(d.storage);
+    d.storage.setItem = (k: string, v: string) => {
+      writes++;
+      setItem(k, v);
+    };
+    const s = new ProjectStore({ ...d, later: (t) => tasks.push(t) }, twoLayers());
+    await s.settled();
+    s.edit('layers[0].thickness_m', 0.4);
+    s.edit('layers[0].thickness_m', 0.45);
+    expect(writes).toBe(0); // nothing written in the keys' own tasks
+    expect(tasks).toHaveLength(1); // one write waiting for both edits
+    tasks.shift()!();
+    expect(writes).toBe(1);
+    expect(JSON.parse(d.storage.getItem(AUTOSAVE_KEY) ?? 'null').layers[0].thickness_m).toBe(0.45);
+    s.edit('layers[0].thickness_m', 0.5);
+    s.flushAutosave(); // pagehide before the frame
+    expect(JSON.parse(d.storage.getItem(AUTOSAVE_KEY) ?? 'null').layers[0].thickness_m).toBe(0.5);
+    tasks.shift()!(); // the frame's task then finds nothing to write
+    expect(writes).toBe(2);
+  });
+
   it('an accepted edit lands at once and posts its analysis at once; pending until its answer lands', async () => {
     const d = deps();
     const s = new ProjectStore(d, twoLayers());
