@@ -2,7 +2,7 @@
  * Web app benchmark: the page stays responsive while an uncertainty study runs (issue: "it
  * runs in a Web Worker: typing elsewhere stays responsive while 1e5 samples run").
  *
- * In headless chromium on the Vite dev server, the drift-limestone preset with a 1e5-sample
+ * In headless chromium on the production build (`vite build`, served by `vite preview`), the drift-limestone preset with a 1e5-sample
  * study (3 variables, P_f at 12 span points, FORM) is run from the uncertainty section's Run
  * button while the test types into the project title (text that is not committed, so the
  * project does not change and the run is not cancelled) until the result has rendered. The
@@ -20,7 +20,7 @@ import { readFileSync } from 'node:fs';
 import { pathToFileURL } from 'node:url';
 import type { Page } from 'playwright-core';
 import { launchChromium } from '../browser/chromium';
-import { startApp } from '../browser/app-server';
+import { startBuiltApp } from '../browser/app-server';
 import { median } from './timing';
 import type { BenchResult } from './types';
 
@@ -96,7 +96,7 @@ export async function benchUncertaintyUi(): Promise<BenchResult[]> {
       { path: 'opening.span_m', distribution: 'normal', cov: 0.1 },
     ],
   };
-  const server = await startApp();
+  const server = await startBuiltApp();
   const browser = await launchChromium();
   try {
     const page = await (await browser.newContext({ viewport: { width: 1280, height: 900 } })).newPage();
@@ -114,7 +114,10 @@ export async function benchUncertaintyUi(): Promise<BenchResult[]> {
       await startProbe(page);
       const t0 = Date.now();
       await section.locator('[data-role=start-run]').click();
+      // done: this run's result has arrived (the probe cleared the mark) and the section shows
+      // it again with its Run button (a result on screen from the previous run does not count)
       const done = page.waitForFunction(() => {
+        if (performance.getEntriesByName('lamina:uncertainty-result').length === 0) return false;
         const s = document.querySelector('lamina-app')?.shadowRoot?.querySelector('uncertainty-section')?.shadowRoot;
         return s !== null && s !== undefined && s.querySelector('[data-role=start-run]') !== null && s.querySelector('[data-role=uncertainty-result]') !== null;
       }, null, { timeout: 120_000, polling: 100 });
@@ -126,6 +129,7 @@ export async function benchUncertaintyUi(): Promise<BenchResult[]> {
       await typeUntil(page, new Promise((r) => setTimeout(r, ms)));
       const longestIdle = await stopProbe(page);
       await page.keyboard.press('Escape');
+      if (process.env.LAMINA_BENCH_VERBOSE) console.error(`run ${k}: ${ms} ms, longest ${longestRun.longest} (before the result ${longestRun.beforeResult}), typing alone ${longestIdle.longest}`);
       if (k === 0) continue; // warm-up
       during.push(longestRun.longest);
       running.push(longestRun.beforeResult);

@@ -25,3 +25,31 @@ export async function startApp(): Promise<AppServer> {
   if (!url) throw new Error('vite dev server did not report a local URL');
   return { url, close: () => server.close() };
 }
+
+/**
+ * Serve the production build (`vite build` into a temporary folder, then `vite preview`), as
+ * users get it from `npm run build`: for benchmarks that time the page.
+ */
+export async function startBuiltApp(): Promise<AppServer> {
+  const { build, preview } = await import('vite');
+  const { mkdtemp, rm } = await import('node:fs/promises');
+  const { tmpdir } = await import('node:os');
+  const outDir = await mkdtemp(resolve(tmpdir(), 'lamina-built-'));
+  await build({ root, configFile: resolve(root, 'vite.config.ts'), logLevel: 'error', build: { outDir, emptyOutDir: true } });
+  const server = await preview({
+    root,
+    configFile: resolve(root, 'vite.config.ts'),
+    logLevel: 'error',
+    build: { outDir },
+    preview: { host: '127.0.0.1', port: 0, strictPort: false, open: false },
+  });
+  const url = server.resolvedUrls?.local[0];
+  if (!url) throw new Error('vite preview did not report a local URL');
+  return {
+    url,
+    close: async () => {
+      await new Promise<void>((r) => server.httpServer.close(() => r()));
+      await rm(outDir, { recursive: true, force: true });
+    },
+  };
+}

@@ -113,7 +113,9 @@ describe('the uncertainty section', () => {
     expect(await result.locator('[data-role=pf]').textContent()).toContain(`P_f = ${+inNode.pf.toPrecision(3)}`);
     expect(await result.locator('[data-role=beta]').textContent()).toContain('β =');
     expect(await result.locator('[data-role=pf-by-mode] tbody tr').count()).toBe(Object.keys(inNode.byMode).length);
-    expect(await result.locator('[data-role=fs-histogram] svg').count()).toBe(1);
+    // the charts are drawn in a task after the numbers are painted
+    await expect.poll(() => result.locator('[data-role=fs-histogram] svg').count()).toBe(1);
+    expect(await result.locator('[data-role=charts-pending]').count()).toBe(0);
     expect(await result.locator('[data-role=sensitivity] svg').count()).toBe(1);
     expect(await result.locator('[data-role=pf-span] svg').count()).toBe(1);
     expect(await result.getAttribute('data-stale')).toBe('false');
@@ -146,6 +148,30 @@ describe('the uncertainty section', () => {
     expect(errors).toEqual([]);
     await context.close();
   }, 90_000);
+
+  it('Run pressed while another field still holds an edit: the edit lands first and the run is for the edited project, never cancelled by it', async () => {
+    const { page, context, errors } = await openApp(session.browser, session.url);
+    const raw = presetRaw('drift-limestone');
+    raw.uncertainty = { samples: 2000, seed: 3, method: 'latinHypercube', acceptablePf: null, variables: [{ path: 'layers[0].thickness_m', distribution: 'lognormal', cov: 0.2 }] };
+    await load(page, raw);
+    const sec = section(page);
+    for (let k = 0; k < 3; k++) {
+      // the title holds typed text (committed when it loses focus: at the press on Run); the
+      // section is out of view until Run is scrolled to and pressed
+      await page.evaluate(() => window.scrollTo(0, 0));
+      const title = page.locator('lamina-app input[data-path="title"]');
+      await title.click();
+      await page.keyboard.press('End');
+      await page.keyboard.type(` ${k}`);
+      await sec.locator('[data-role=start-run]').click();
+      await expect.poll(() => project(page).then((p) => p.title.endsWith(` ${k}`))).toBe(true);
+      const result = sec.locator('[data-role=uncertainty-result][data-stale=false]');
+      await expect.poll(() => result.count(), { timeout: 60_000 }).toBe(1);
+      expect(await sec.locator('[data-role=run-note]').count()).toBe(0); // not cancelled
+    }
+    expect(errors).toEqual([]);
+    await context.close();
+  }, 120_000);
 
   it('a current run is in the checks (the acceptable P_f row) and in the report with its method and seed; after an edit the report prints no old numbers', async () => {
     const { page, context, errors } = await openApp(session.browser, session.url);

@@ -20,8 +20,22 @@ export function DeferOffscreen<T extends LitConstructor>(Base: T) {
     protected onScreen = true;
     private screenObserver: IntersectionObserver | null = null;
 
+    /**
+     * A user reaching into the view (a press, a focus, a key) may come before the observer has
+     * said it is on screen: it then counts as on screen, and an update held back is done at
+     * once, so the view never acts on values a frame old.
+     */
+    private readonly onUse = (): void => {
+      this.onScreen = true;
+      this.wakeUp?.();
+      if (this.isUpdatePending) this.performUpdate();
+    };
+    /** Ends the wait of an update held back for the next paint (lit runs updates one after another). */
+    private wakeUp: (() => void) | null = null;
+
     override connectedCallback(): void {
       super.connectedCallback();
+      for (const type of ['pointerdown', 'focusin', 'keydown']) this.addEventListener(type, this.onUse, true);
       if (typeof IntersectionObserver === 'undefined' || typeof requestAnimationFrame === 'undefined') return;
       this.screenObserver = new IntersectionObserver((entries) => {
         this.onScreen = entries[entries.length - 1].isIntersecting;
@@ -31,13 +45,20 @@ export function DeferOffscreen<T extends LitConstructor>(Base: T) {
 
     override disconnectedCallback(): void {
       super.disconnectedCallback();
+      for (const type of ['pointerdown', 'focusin', 'keydown']) this.removeEventListener(type, this.onUse, true);
       this.screenObserver?.disconnect();
       this.screenObserver = null;
       this.onScreen = true;
     }
 
     protected override async scheduleUpdate(): Promise<unknown> {
-      if (!this.onScreen) await afterNextPaint();
+      if (!this.onScreen) {
+        await new Promise<void>((resolve) => {
+          this.wakeUp = resolve;
+          void afterNextPaint().then(resolve);
+        });
+        this.wakeUp = null;
+      }
       return super.scheduleUpdate();
     }
   }

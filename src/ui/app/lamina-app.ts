@@ -70,6 +70,8 @@ const nextTask = (): Promise<void> =>
  * costs a frame that delays the results behind it.
  */
 const HOLD_MS = 100;
+/** Events that release a held edit before they reach their target (`onUse`). */
+const USE_EVENTS = ['pointerdown', 'click', 'keydown', 'focusin'] as const;
 
 export class LaminaApp extends LitElement {
   static override properties = {
@@ -398,6 +400,7 @@ export class LaminaApp extends LitElement {
     this.addEventListener('field-refused', this.onFieldRefused as EventListener);
     this.addEventListener('uncertainty-result', this.onUncertaintyResult as EventListener);
     window.addEventListener('keydown', this.onKey);
+    for (const type of USE_EVENTS) this.addEventListener(type, this.onUse, true);
   }
 
   override disconnectedCallback(): void {
@@ -406,6 +409,7 @@ export class LaminaApp extends LitElement {
     if (this.holdTimer !== null) clearTimeout(this.holdTimer);
     this.holdTimer = null;
     window.removeEventListener('keydown', this.onKey);
+    for (const type of USE_EVENTS) this.removeEventListener(type, this.onUse, true);
   }
 
   private onState(s: AppState): void {
@@ -447,12 +451,24 @@ export class LaminaApp extends LitElement {
   }
 
   private releaseHeld(): void {
+    if (this.holdTimer !== null) clearTimeout(this.holdTimer);
     this.holdTimer = null;
     if (this.held) {
       this.state = this.held;
       this.held = null;
     }
   }
+
+  /**
+   * A press, click, key or focus anywhere in the sheet while an edit is held: show it at once
+   * (a synchronous render, before the event reaches its target), so no control acts on values
+   * older than the project (e.g. Run pressed right after another field was committed).
+   */
+  private readonly onUse = (): void => {
+    if (!this.held) return;
+    this.releaseHeld();
+    this.performUpdate();
+  };
 
   /** Fill in the sections below the top of the sheet (once); marks `lamina:sheet-complete` after their paint. */
   private completeSheet(): void {

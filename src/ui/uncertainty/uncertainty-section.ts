@@ -41,6 +41,7 @@ import { sheet } from '../styles/sheet';
 import { fieldName, quantityOf, samplablePaths } from './variable-fields';
 import { DeferOffscreen } from '../app/defer-offscreen';
 import { projectKey, type UncertaintyRun } from './current-run';
+import { afterNextPaint } from '../after-paint';
 
 /** The block a first variable creates (the model's defaults: 20 000 samples, seed 1, Latin hypercube). */
 const NEW_BLOCK: Omit<Uncertainty, 'variables'> = { samples: 20000, seed: 1, method: 'latinHypercube', acceptablePf: null };
@@ -102,6 +103,8 @@ export class UncertaintySection extends DeferOffscreen(LitElement) {
   private key = '';
   /** Chart strings of the shown result, rebuilt only when the result, the units or the span change. */
   private charts: { for: unknown; units: UnitSystem; span: number; histogram: string; sensitivity: string; pfSpan: string | null } | null = null;
+  /** The charts asked for and not drawn yet: drawn in a task after the numbers are painted. */
+  private chartsWanted: { for: unknown; units: UnitSystem; span: number } | null = null;
   /** Progress reported by the worker, shown at most once per animation frame. */
   private pendingProgress: { done: number; total: number } | null = null;
   private progressFrame = 0;
@@ -161,7 +164,8 @@ export class UncertaintySection extends DeferOffscreen(LitElement) {
   private async start(): Promise<void> {
     if (!this.project || !this.runner || this.run.kind === 'running') return;
     const project = this.project;
-    const key = this.key;
+    // the key of the project run now (not `this.key`, which an update still to come may hold for older values)
+    const key = projectKey(project);
     const abort = new AbortController();
     this.abort = abort;
     this.runningKey = key;
@@ -307,16 +311,26 @@ export class UncertaintySection extends DeferOffscreen(LitElement) {
     const stale = last.key !== this.key;
     const modes = Object.keys(u.byMode) as Mode[];
     const span = project.opening.span_m;
-    if (!this.charts || this.charts.for !== u || this.charts.units !== this.units || this.charts.span !== span) {
+    const current = (c: { for: unknown; units: UnitSystem; span: number } | null) => c !== null && c.for === u && c.units === this.units && c.span === span;
+    if (!current(this.charts) && !current(this.chartsWanted)) {
+      // The numbers first; the three charts (tens of milliseconds of SVG) in a task of their own
+      // after the numbers are painted, so drawing a result never holds typing up for long.
+      const want = { for: u, units: this.units, span };
+      this.chartsWanted = want;
       const spanWord = openingWords(project.opening.type).span;
-      this.charts = {
-        for: u, units: this.units, span,
-        histogram: fsHistogramSvg(u, { target: u.governing?.target ?? null }),
-        sensitivity: sensitivitySvg(u),
-        pfSpan: u.pfVersusSpan.length > 1 ? pfSpanSvg(u, { units: this.units, currentSpan_m: span, spanWord }) : null,
-      };
+      void afterNextPaint().then(() => {
+        if (this.chartsWanted !== want) return;
+        this.chartsWanted = null;
+        this.charts = {
+          ...want,
+          histogram: fsHistogramSvg(u, { target: u.governing?.target ?? null }),
+          sensitivity: sensitivitySvg(u),
+          pfSpan: u.pfVersusSpan.length > 1 ? pfSpanSvg(u, { units: want.units, currentSpan_m: span, spanWord }) : null,
+        };
+        this.requestUpdate();
+      });
     }
-    const charts = this.charts;
+    const charts = current(this.charts) ? this.charts : null;
     return html`<div data-role="uncertainty-result" data-stale=${stale ? 'true' : 'false'}>
       ${stale ? html`<p class="stale" role="status">Stale: the project changed after this run — these numbers are for the earlier project. Run again.</p>` : nothing}
       <p><span class="pf" data-role="pf">P_f = ${prob(u.pf)}</span>
@@ -336,9 +350,11 @@ export class UncertaintySection extends DeferOffscreen(LitElement) {
           <td>${u.byModeInterval[m] ? `${prob(u.byModeInterval[m]![0])} – ${prob(u.byModeInterval[m]![1])}` : '—'}</td></tr>`)}</tbody>
       </table>
       <div class="charts">
-        <div data-role="fs-histogram">${unsafeSVG(charts.histogram)}</div>
-        <div data-role="sensitivity">${unsafeSVG(charts.sensitivity)}</div>
-        ${charts.pfSpan ? html`<div data-role="pf-span">${unsafeSVG(charts.pfSpan)}</div>` : nothing}
+        ${charts
+          ? html`<div data-role="fs-histogram">${unsafeSVG(charts.histogram)}</div>
+              <div data-role="sensitivity">${unsafeSVG(charts.sensitivity)}</div>
+              ${charts.pfSpan ? html`<div data-role="pf-span">${unsafeSVG(charts.pfSpan)}</div>` : nothing}`
+          : html`<p class="muted" data-role="charts-pending" aria-busy="true">Drawing the charts…</p>`}
       </div>
       <details><summary>What P_f means</summary><p>${PF_MEANING}</p></details>
     </div>`;
