@@ -119,7 +119,9 @@ describe('boltAnchorage — properties', () => {
         if (r.kind !== 'anchored') return;
         const k = r.anchorLayer;
         expect(ts[k]).toBeGreaterThanOrEqual(a - 1e-9);
-        const longer = L + (tops[k] - L) * v;
+        // a tip up to the top of layer k (L can sit a rounding error above that top, within the
+        // kernel's tolerance: never make the "longer" tip shorter than L)
+        const longer = L + Math.max(0, tops[k] - L) * v;
         const r2 = boltAnchorage(ts, longer, a);
         expect(r2.kind === 'anchored' && r2.anchorLayer).toBe(k);
         const j = k + (pick % (ts.length - k));
