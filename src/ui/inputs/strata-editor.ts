@@ -181,6 +181,13 @@ export class StrataEditor extends DeferOffscreen(LitElement) {
         vertical-align: bottom;
         min-width: 9.5rem;
       }
+      /* Field names wrap in a column of their own width, so a long name (the fracture
+         frequency's) does not push the layers' columns out of view on a desktop screen. */
+      th[scope='row'] {
+        width: 14rem;
+        min-width: 10rem;
+        white-space: normal;
+      }
       .pos {
         font-weight: 400;
         color: var(--lam-muted);
