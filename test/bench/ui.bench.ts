@@ -29,18 +29,16 @@
  *
  * Run with `npm run bench` (or `npx tsx test/bench/ui.bench.ts`).
  */
-import { build, preview } from 'vite';
-import { mkdtemp, readFile, rm, writeFile } from 'node:fs/promises';
-import { tmpdir } from 'node:os';
-import { join, resolve, dirname } from 'node:path';
+import { readFile } from 'node:fs/promises';
+import { join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { gzipSync } from 'node:zlib';
 import type { Browser, Page } from 'playwright-core';
 import { launchChromium } from '../browser/chromium';
+import { startBuiltApp } from '../browser/app-server';
 import { median } from './timing';
 import type { BenchResult } from './types';
 
-const root = resolve(dirname(fileURLToPath(import.meta.url)), '../..');
 const FIRST_LOAD_TARGET_KB = 150;
 const FIRST_RESULTS_TARGET_MS = 500;
 const FIRST_RESULTS_RATIO_TARGET = 3;
@@ -116,21 +114,9 @@ const PROBE = `(() => {
 
 export async function benchUi(): Promise<BenchResult[]> {
   const results: BenchResult[] = [];
-  const outDir = await mkdtemp(join(tmpdir(), 'lamina-ui-bench-'));
+  const server = await startBuiltApp({ 'blank.html': BLANK_HTML, 'blank.js': BLANK_JS });
+  const { url, outDir } = server;
   try {
-    await build({ root, configFile: resolve(root, 'vite.config.ts'), logLevel: 'error', build: { outDir, emptyOutDir: true } });
-    await writeFile(join(outDir, 'blank.html'), BLANK_HTML);
-    await writeFile(join(outDir, 'blank.js'), BLANK_JS);
-
-    const server = await preview({
-      root,
-      configFile: resolve(root, 'vite.config.ts'),
-      logLevel: 'error',
-      build: { outDir },
-      preview: { host: '127.0.0.1', port: 0, strictPort: false, open: false },
-    });
-    const url = server.resolvedUrls?.local[0];
-    if (!url) throw new Error('vite preview did not report a local URL');
     const browser = await launchChromium();
     try {
       // 1. first-load JavaScript, and 5. elements before the report is opened
@@ -304,10 +290,9 @@ export async function benchUi(): Promise<BenchResult[]> {
       }
     } finally {
       await browser.close();
-      await new Promise<void>((r) => server.httpServer.close(() => r()));
     }
   } finally {
-    await rm(outDir, { recursive: true, force: true });
+    await server.close();
   }
   return results;
 }

@@ -28,14 +28,17 @@ export async function startApp(): Promise<AppServer> {
 
 /**
  * Serve the production build (`vite build` into a temporary folder, then `vite preview`), as
- * users get it from `npm run build`: for benchmarks that time the page.
+ * users get it from `npm run build`: for benchmarks that time the page. `extraFiles` (name →
+ * text) are written beside the build before it is served; `outDir` is the folder (removed on
+ * close).
  */
-export async function startBuiltApp(): Promise<AppServer> {
+export async function startBuiltApp(extraFiles: Record<string, string> = {}): Promise<AppServer & { outDir: string }> {
   const { build, preview } = await import('vite');
-  const { mkdtemp, rm } = await import('node:fs/promises');
+  const { mkdtemp, rm, writeFile } = await import('node:fs/promises');
   const { tmpdir } = await import('node:os');
   const outDir = await mkdtemp(resolve(tmpdir(), 'lamina-built-'));
   await build({ root, configFile: resolve(root, 'vite.config.ts'), logLevel: 'error', build: { outDir, emptyOutDir: true } });
+  for (const [name, text] of Object.entries(extraFiles)) await writeFile(resolve(outDir, name), text);
   const server = await preview({
     root,
     configFile: resolve(root, 'vite.config.ts'),
@@ -47,6 +50,7 @@ export async function startBuiltApp(): Promise<AppServer> {
   if (!url) throw new Error('vite preview did not report a local URL');
   return {
     url,
+    outDir,
     close: async () => {
       await new Promise<void>((r) => server.httpServer.close(() => r()));
       await rm(outDir, { recursive: true, force: true });

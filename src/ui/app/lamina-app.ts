@@ -39,7 +39,7 @@ import './project-bar';
 import './verdict-chip';
 import type { UncertaintyRunner } from '../compute/types';
 import { analysisWithRun, type UncertaintyRun } from '../uncertainty/current-run';
-import { whenSettledAfterPaint } from '../after-paint';
+import { afterNextPaint, whenSettledAfterPaint } from '../after-paint';
 
 const SECTIONS = [
   { id: 'opening', title: 'Opening and loads' },
@@ -475,16 +475,14 @@ export class LaminaApp extends LitElement {
     if (this.sheetComplete) return;
     this.sheetComplete = true;
     void this.updateComplete
-      .then(() => nextFrame())
-      .then(() =>
-        setTimeout(() => {
-          try {
-            performance.mark('lamina:sheet-complete');
-          } catch {
-            /* the timeline is optional */
-          }
-        }, 0),
-      );
+      .then(() => afterNextPaint())
+      .then(() => {
+        try {
+          performance.mark('lamina:sheet-complete');
+        } catch {
+          /* the timeline is optional */
+        }
+      });
   }
 
   protected override firstUpdated(): void {
