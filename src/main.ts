@@ -1,8 +1,8 @@
 /// <reference types="vite/client" />
 /**
  * Browser entry: choose the first project (share link > autosave > demo), build the store,
- * register the elements and mount `<lamina-app>`. The results elements are loaded through a
- * glob so the worksheet still runs (with empty result sections) if they are missing.
+ * register the elements of the top of the sheet and mount `<lamina-app>`. The elements of the
+ * sections below load once the first results are painted (`ui/app/sheet-below.ts`).
  */
 import { validateProject } from './model/validate';
 import { ProjectStore, type AppState } from './ui/state/project-store';
@@ -14,8 +14,6 @@ import { writeAutosave, type KeyValueStorage } from './ui/state/autosave';
 import { SHARE_PREFIX, decodeShareHash } from './ui/state/share-link';
 import './ui/app/lamina-app';
 import type { LaminaApp } from './ui/app/lamina-app';
-
-import.meta.glob('./ui/results/index.ts', { eager: true });
 
 function browserStorage(): KeyValueStorage | null {
   try {

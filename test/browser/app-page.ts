@@ -37,16 +37,27 @@ export async function openApp(browser: Browser, url: string, options: { context?
   return { page, context, errors, external };
 }
 
-/** Wait until the store holds a finished analysis and the page has rendered it. */
+/**
+ * Wait until the store holds a finished analysis and the page has rendered it: the whole sheet
+ * (its lower sections load after the first results: `lamina:sheet-complete`), and the views out
+ * of view, which update once the page is idle after the paint (`DeferOffscreen`).
+ */
 export async function waitForResults(page: Page): Promise<void> {
   await page.waitForFunction(() => {
     const hook = window.__lamina;
     if (!hook) return false;
     const s = hook.state();
-    return s.analysis !== null && !s.pending;
+    return s.analysis !== null && !s.pending && performance.getEntriesByName('lamina:sheet-complete').length > 0;
   }, null, { timeout: 30_000 });
   await page.evaluate(() => window.__lamina!.app.updateComplete);
-  await page.evaluate(() => new Promise((r) => requestAnimationFrame(() => r(null))));
+  await settle(page);
+}
+
+/** The next frame has painted and the page has been idle once after it (at most 1 s). */
+export async function settle(page: Page): Promise<void> {
+  await page.evaluate(
+    () => new Promise((r) => requestAnimationFrame(() => setTimeout(() => requestIdleCallback(() => r(null), { timeout: 1000 }), 0))),
+  );
 }
 
 /** The current project JSON held by the store. */

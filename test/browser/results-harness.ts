@@ -69,6 +69,14 @@ export async function waitForResults(page: Page): Promise<void> {
     return !!s && s.analysis !== null && !s.pending;
   }, undefined, { timeout: 30_000 });
   await page.locator('checks-table tr[data-mode]').first().waitFor({ timeout: 30_000 });
+  await settle(page);
+}
+
+/** The next frame has painted and the page has been idle once after it (at most 1 s): views out of view update then (`DeferOffscreen`). */
+export async function settle(page: Page): Promise<void> {
+  await page.evaluate(
+    () => new Promise((r) => requestAnimationFrame(() => setTimeout(() => requestIdleCallback(() => r(null), { timeout: 1000 }), 0))),
+  );
 }
 
 /** Apply an edit through the app's test hook and wait for the results to render. */

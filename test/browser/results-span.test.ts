@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { resolve } from 'node:path';
-import { ARTIFACTS, startHarness, type Harness, text, renderAllSections } from './results-harness';
+import { ARTIFACTS, startHarness, type Harness, text, renderAllSections, settle } from './results-harness';
 
 let h: Harness;
 beforeAll(async () => {
@@ -104,6 +104,7 @@ describe('<beam-charts-view> in the app', () => {
       const s = window.__lamina?.state();
       return !!s && !s.chartPending && s.chart !== null;
     });
+    await settle(page); // the view, out of view, takes the chart once the page is idle
     const boxes = () =>
       page.evaluate(() => {
         const view = document.querySelector('lamina-app')!.shadowRoot!.querySelector('beam-charts-view')!.shadowRoot!;

@@ -2,15 +2,19 @@
  * Off-screen parts of the sheet update after the next paint, not before it. When an edit's
  * results land, every section gets new values; the ones on screen render in the same task
  * (so the results a user is looking at are painted in the next frame) and the ones out of view
- * render in a task of their own once that frame has been painted. Nothing is skipped: an
- * off-screen part is up to date one frame later, long before anyone can scroll to it.
+ * render once that frame has been painted and the page is idle (at most `OFFSCREEN_IDLE_MS`
+ * later), so they are never in the way of the next key either. Nothing is skipped: an
+ * off-screen part is up to date a frame or two later, long before anyone can scroll to it.
  *
  * `DeferOffscreen(LitElement)` gives a component this behaviour. Whether it is on screen comes
  * from an IntersectionObserver on the host (no margin); until the first observation, and where
  * there is no IntersectionObserver (tests in node), it counts as on screen.
  */
 import type { LitElement } from 'lit';
-import { afterNextPaint } from '../after-paint';
+import { whenSettledAfterPaint } from '../after-paint';
+
+/** The longest an off-screen update waits for an idle moment after the paint (ms). */
+export const OFFSCREEN_IDLE_MS = 250;
 
 type LitConstructor = abstract new (...args: any[]) => LitElement; // eslint-disable-line @typescript-eslint/no-explicit-any
 
@@ -55,7 +59,7 @@ export function DeferOffscreen<T extends LitConstructor>(Base: T) {
       if (!this.onScreen) {
         await new Promise<void>((resolve) => {
           this.wakeUp = resolve;
-          void afterNextPaint().then(resolve);
+          void whenSettledAfterPaint(OFFSCREEN_IDLE_MS).then(resolve);
         });
         this.wakeUp = null;
       }

@@ -30,9 +30,6 @@ import { sheet } from '../styles/sheet';
 import { textField } from '../inputs/field-templates';
 import { downloadText } from './download';
 import '../inputs/opening-loads-form';
-import '../inputs/strata-editor';
-import '../inputs/lab-tests-panel';
-import '../inputs/support-form';
 import './caution-banner';
 import './verdict-line';
 import './project-bar';
@@ -96,11 +93,13 @@ export class LaminaApp extends LitElement {
   private firstResultsMarked = false;
   /**
    * False until the first results are painted: the first render holds the top of the sheet
-   * (title, caution, verdict, 1 Opening and loads, 2 Strata) and only the headings of the
-   * sections below, which are out of view at load; they are filled in the task after the
-   * first results are painted (`completeSheet`), so the first results wait for less.
+   * (title, caution, verdict, 1 Opening and loads) and only the headings of the sections
+   * below, which are out of view at load; their elements load after the first results
+   * are painted, and the sections are filled in then (`completeSheet`), so the first results
+   * wait for less.
    */
   sheetComplete = false;
+  private sheetLoading = false;
   /** An accepted edit's state, held back until its results land (or HOLD_MS passes). */
   private held: AppState | null = null;
   private holdTimer: ReturnType<typeof setTimeout> | null = null;
@@ -470,11 +469,23 @@ export class LaminaApp extends LitElement {
     this.performUpdate();
   };
 
-  /** Fill in the sections below the top of the sheet (once); marks `lamina:sheet-complete` after their paint. */
+  /**
+   * Fill in the sections below the top of the sheet (once), when their elements have loaded
+   * (`sheet-below.ts`, not in the first load); marks `lamina:sheet-complete` after their paint.
+   * Should the module fail to load, the sections are rendered all the same (their elements stay
+   * empty) and the failure is said on the status line.
+   */
   private completeSheet(): void {
-    if (this.sheetComplete) return;
-    this.sheetComplete = true;
-    void this.updateComplete
+    if (this.sheetLoading) return;
+    this.sheetLoading = true;
+    void import('./sheet-below')
+      .catch((err: unknown) => {
+        this.store.setNotice(`Part of the worksheet could not be loaded (${err instanceof Error ? err.message : String(err)}); reload the page.`);
+      })
+      .then(() => {
+        this.sheetComplete = true;
+        return this.updateComplete;
+      })
       .then(() => afterNextPaint())
       .then(() => {
         try {
@@ -506,9 +517,6 @@ export class LaminaApp extends LitElement {
           /* the timeline is optional */
         }
         this.completeSheet();
-        // The uncertainty section (far down the sheet) is not in the first load: its element
-        // is defined once the first results are on screen, and upgrades in place.
-        void import('../uncertainty/uncertainty-section');
       }, 0);
     }
     try {
@@ -740,7 +748,7 @@ export class LaminaApp extends LitElement {
     // field and on the fixed-height status line (so the sheet does not jump while typing).
     const fileErrors = s.fileErrors;
     const editErrors = s.fieldErrors;
-    // Sections 3–9 hold only their headings until the first results are painted.
+    // Sections 2–9 hold only their headings until the first results are painted.
     const more = this.sheetComplete;
     return html`
       <header>
@@ -802,7 +810,7 @@ export class LaminaApp extends LitElement {
       </section>
       <section class="inputs" aria-labelledby="strata-h">
         ${this.heading(2)}
-        <strata-editor .project=${p} .analysis=${s.analysis} units=${s.units} .fieldErrors=${s.fieldErrors}></strata-editor>
+        ${more ? html`<strata-editor .project=${p} .analysis=${s.analysis} units=${s.units} .fieldErrors=${s.fieldErrors}></strata-editor>` : nothing}
       </section>
       <section class="inputs" aria-labelledby="lab-h">
         ${this.heading(3)}

@@ -19,7 +19,7 @@ import type { ComputeRequest, ComputeResponse } from './protocol';
 import type { AnalysisOutcome, ChartOutcome, ComputeClient, RunHooks, SupportOutcome, UncertaintyRunRequest } from './types';
 import { analysisJob, chartJob, supportJob, type AnalysisFunctions } from './jobs';
 import { createQuickPath } from './quick-path';
-import { afterNextPaint, whenSettledAfterPaint } from '../after-paint';
+import { whenSettledAfterPaint } from '../after-paint';
 
 export const abortError = (): DOMException => new DOMException('The uncertainty run was cancelled.', 'AbortError');
 
@@ -178,13 +178,14 @@ export function createWorkerClient(makeWorker: WorkerFactory = defaultWorkerFact
   // of the next key's analysis.
   // It starts once the page has painted and settled (the first results never share the
   // machine with a worker booting for a chart that is off screen), and each request is posted
-  // after the next paint (copying the project to it is not in the way of the edit's frame).
+  // after the next paint, in an idle moment (at most ASIDE_IDLE_MS later): copying the project
+  // to it is in the way of neither the edit's frame nor the next key.
   let asideChannel: WorkerChannel | null = null;
   let asideGate: Promise<void> | null = null;
   const aside = {
     send: (body: RequestBody): Promise<unknown> => {
       if (closed) return Promise.reject(new Error('the compute client was closed'));
-      const ready = asideChannel ? afterNextPaint() : (asideGate ??= whenSettledAfterPaint());
+      const ready = asideChannel ? whenSettledAfterPaint(ASIDE_IDLE_MS) : (asideGate ??= whenSettledAfterPaint());
       return ready.then(() => {
         if (closed) throw new Error('the compute client was closed');
         asideChannel ??= new WorkerChannel(makeWorker(), onFailure);
@@ -233,6 +234,8 @@ export function createWorkerClient(makeWorker: WorkerFactory = defaultWorkerFact
   };
 }
 
+/** The longest a chart or support request waits for an idle moment after the paint (ms). */
+const ASIDE_IDLE_MS = 100;
 const macrotask = (): Promise<void> => new Promise((resolve) => setTimeout(resolve, 0));
 
 /**

@@ -8,10 +8,10 @@ import { unsafeSVG } from 'lit/directives/unsafe-svg.js';
 import type { Project } from '../../model/types';
 import type { UnitSystem } from '../../model/units';
 import type { Analysis } from '../../analysis/types';
-import { strataColumnSvg } from '../../report/charts/strata-column';
+import type { strataColumnSvg } from '../../report/charts/strata-column';
 import { tokens } from '../styles/tokens';
 import { sheet } from '../styles/sheet';
-import { afterNextPaint } from '../after-paint';
+import { afterNextPaint, whenSettledAfterPaint } from '../after-paint';
 
 /**
  * What the strata column draws of an analysis (`strataColumnSvg` reads only these): the bending
@@ -22,12 +22,23 @@ export function columnAnalysisKey(analysis: Analysis | null): string {
   return JSON.stringify([analysis.groups?.map((g) => [g.first, g.last]) ?? null, analysis.report.layers.map((l) => l.group), analysis.separations]);
 }
 
+type Draw = typeof strataColumnSvg;
+/** The drawing code (the shared charts and their scales) is not in the first load: it loads on first use. */
+let draw: Draw | null = null;
+let loading: Promise<Draw> | null = null;
+/** Loads after the next paint, so the first results are never behind it. */
+const loadDraw = (): Promise<Draw> =>
+  (loading ??= afterNextPaint()
+    .then(() => import('../../report/charts/strata-column'))
+    .then((m) => (draw = m.strataColumnSvg)));
+
 export class StrataColumn extends LitElement {
   static override properties = {
     project: { attribute: false },
     analysis: { attribute: false },
     units: { type: String },
     svg: { state: true },
+    drawReady: { state: true },
   };
 
   project: Project | null = null;
@@ -35,6 +46,8 @@ export class StrataColumn extends LitElement {
   units: UnitSystem = 'SI';
   private svg = '';
   private failure = '';
+  /** Whether the drawing code has loaded (`loadDraw`). */
+  private drawReady = draw !== null;
   /** The inputs of the drawn SVG: it is redrawn only when one of them changes. */
   private drawn: { project: Project; units: UnitSystem; key: string } | null = null;
 
@@ -49,16 +62,17 @@ export class StrataColumn extends LitElement {
   ];
 
   /**
-   * Once drawn, the column is redrawn in a task after the next paint: an edit's results (the
-   * verdict, the checks) are painted first, the drawing of the inputs one frame later.
+   * Once drawn, the column is redrawn after the next paint, when the page is idle: an edit's
+   * results (the verdict, the checks) are painted first, the drawing of the inputs a frame or
+   * two later (at most 250 ms).
    */
   protected override async scheduleUpdate(): Promise<unknown> {
-    if (this.hasUpdated) await afterNextPaint();
+    if (this.hasUpdated) await whenSettledAfterPaint(250);
     return super.scheduleUpdate();
   }
 
   protected override willUpdate(changed: PropertyValues<this>): void {
-    if (changed.has('project') || changed.has('analysis') || changed.has('units')) {
+    if (changed.has('project') || changed.has('analysis') || changed.has('units') || (changed as Map<PropertyKey, unknown>).has('drawReady')) {
       if (!this.project) {
         this.svg = '';
         this.drawn = null;
@@ -71,9 +85,19 @@ export class StrataColumn extends LitElement {
       const key = columnAnalysisKey(analysis);
       const d = this.drawn;
       if (d && d.project === this.project && d.units === this.units && d.key === key) return;
+      if (!draw) {
+        loadDraw().then(
+          () => (this.drawReady = true),
+          (err: unknown) => {
+            this.failure = err instanceof Error ? err.message : String(err);
+            this.requestUpdate();
+          },
+        );
+        return;
+      }
       this.drawn = { project: this.project, units: this.units, key };
       try {
-        this.svg = strataColumnSvg(this.project, analysis, { units: this.units });
+        this.svg = draw(this.project, analysis, { units: this.units });
         this.failure = '';
       } catch (err) {
         this.svg = '';
