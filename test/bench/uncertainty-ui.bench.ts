@@ -101,7 +101,8 @@ export async function benchUncertaintyUi(): Promise<BenchResult[]> {
   try {
     const page = await (await browser.newContext({ viewport: { width: 1280, height: 900 } })).newPage();
     await page.goto(server.url);
-    await page.waitForFunction(() => window.__lamina?.state().analysis != null);
+    // the whole sheet: sections 2–9 are rendered once their elements have loaded
+    await page.waitForFunction(() => window.__lamina?.state().analysis != null && performance.getEntriesByName('lamina:sheet-complete').length > 0);
     await page.evaluate((p) => window.__lamina!.store.replace(p, 'Benchmark'), raw);
     await page.waitForFunction(() => !window.__lamina!.state().pending);
     const section = page.locator('uncertainty-section');

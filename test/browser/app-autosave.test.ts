@@ -44,7 +44,8 @@ describe('app: autosave under the storage quota', () => {
     // then resumes: the current project is autosaved again and the message goes
     await alert.locator('#autosave-resume').click();
     await expect.poll(() => alert.count()).toBe(0);
-    expect(await page.evaluate((key) => JSON.parse(localStorage.getItem(key)!).opening.span_m, KEY)).toBe(7);
+    // (the autosave is written once the page is idle after the paint)
+    await expect.poll(() => page.evaluate((key) => JSON.parse(localStorage.getItem(key)!).opening?.span_m, KEY)).toBe(7);
     expect(errors).toEqual([]);
     await context.close();
   });

@@ -50,4 +50,29 @@ describe('app: first load', () => {
     expect(unlabelled).toEqual([]);
     await context.close();
   });
+
+  it('nothing on screen moves while the sheet loads (no layout shift), on a desktop, a phone and a tall screen', async () => {
+    // The sheet is shown in steps (its top with the first results, then section 1, then the
+    // sections below once their elements have loaded); each step only adds below what is laid
+    // out. A layout-shift entry is what chromium reports when a visible element moves.
+    for (const viewport of [
+      { width: 1280, height: 900 },
+      { width: 390, height: 844 },
+      { width: 1280, height: 2400 },
+    ]) {
+      const { page, context } = await openApp(session.browser, session.url, { viewport });
+      const shifts = await page.evaluate(
+        () =>
+          new Promise<string[]>((resolve) => {
+            const out: string[] = [];
+            new PerformanceObserver((list) => {
+              for (const e of list.getEntries() as (PerformanceEntry & { value: number })[]) out.push(`${e.value.toFixed(4)} at ${e.startTime.toFixed(0)} ms`);
+            }).observe({ type: 'layout-shift', buffered: true });
+            setTimeout(() => resolve(out), 300);
+          }),
+      );
+      expect(shifts, `${viewport.width} × ${viewport.height}`).toEqual([]);
+      await context.close();
+    }
+  });
 });

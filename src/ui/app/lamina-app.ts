@@ -77,6 +77,7 @@ export class LaminaApp extends LitElement {
     tracePath: { state: true },
     uncertaintyRun: { state: true },
     sheetComplete: { state: true },
+    sheetStarted: { state: true },
   };
 
   store!: ProjectStore;
@@ -92,14 +93,18 @@ export class LaminaApp extends LitElement {
   private lastAnalysis: unknown = null;
   private firstResultsMarked = false;
   /**
-   * False until the first results are painted: the first render holds the top of the sheet
-   * (title, caution, verdict, 1 Opening and loads) and only the headings of the sections
-   * below, which are out of view at load; their elements load after the first results
-   * are painted, and the sections are filled in then (`completeSheet`), so the first results
-   * wait for less.
+   * The sheet is shown in three steps, so the first results wait for as little as possible.
+   * The first frame holds only its top: the title, the project bar, the caution, the verdict
+   * and the section list. Once the first results are painted (`completeSheet`), section 1 is
+   * rendered (`sheetStarted`) and the elements of sections 2–9 load; those sections are
+   * rendered when they have loaded (`sheetComplete`). Each step only adds below what is laid
+   * out, so nothing on screen moves (a section's heading is never shown before its contents).
    */
   sheetComplete = false;
+  sheetStarted = false;
   private sheetLoading = false;
+  /** Resolves once the sheet's lower sections have loaded (or failed to) and are set to render. */
+  private sheetLoaded: Promise<void> = Promise.resolve();
   /** An accepted edit's state, held back until its results land (or HOLD_MS passes). */
   private held: AppState | null = null;
   private holdTimer: ReturnType<typeof setTimeout> | null = null;
@@ -478,14 +483,16 @@ export class LaminaApp extends LitElement {
   private completeSheet(): void {
     if (this.sheetLoading) return;
     this.sheetLoading = true;
-    void import('./sheet-below')
+    this.sheetStarted = true;
+    this.sheetLoaded = import('./sheet-below')
       .catch((err: unknown) => {
         this.store.setNotice(`Part of the worksheet could not be loaded (${err instanceof Error ? err.message : String(err)}); reload the page.`);
       })
       .then(() => {
         this.sheetComplete = true;
-        return this.updateComplete;
-      })
+      });
+    void this.sheetLoaded
+      .then(() => this.updateComplete)
       .then(() => afterNextPaint())
       .then(() => {
         try {
@@ -677,8 +684,14 @@ export class LaminaApp extends LitElement {
     }
   };
 
-  private goTo(e: Event, id: string): void {
+  private async goTo(e: Event, id: string): Promise<void> {
     e.preventDefault();
+    // the sections below the first are rendered once their elements have loaded
+    if (!this.sheetComplete) {
+      this.completeSheet();
+      await this.sheetLoaded;
+      await this.updateComplete;
+    }
     const heading = this.renderRoot.querySelector<HTMLElement>(`#${id}-h`);
     heading?.scrollIntoView({ block: 'start' });
     heading?.focus({ preventScroll: true });
@@ -741,15 +754,12 @@ export class LaminaApp extends LitElement {
     // Results render against the project they were computed for (the previous one while the
     // analysis of an edit is on its way; the sections say "updating…" meanwhile).
     const rp = s.resultsProject ?? p;
-    const report = s.analysis?.report ?? null;
     // With a run of the uncertainty study for these inputs: its P_f row in the check table and the verdict.
     const ra = this.resultsWithRun(s.analysis, rp, this.uncertaintyRun);
     // A refused file, link or paste gets its own dialog; a refused field is shown beside the
     // field and on the fixed-height status line (so the sheet does not jump while typing).
     const fileErrors = s.fileErrors;
     const editErrors = s.fieldErrors;
-    // Sections 2–9 hold only their headings until the first results are painted.
-    const more = this.sheetComplete;
     return html`
       <header>
         <h1>Lamina <small>roof beam worksheet</small></h1>
@@ -772,7 +782,7 @@ export class LaminaApp extends LitElement {
         </p>
         <nav aria-label="Worksheet sections">
           <ol>
-            ${SECTIONS.map((sec, i) => html`<li><a href="#${sec.id}" @click=${(e: Event) => this.goTo(e, sec.id)}>${i + 1} ${sec.title}</a></li>`)}
+            ${SECTIONS.map((sec, i) => html`<li><a href="#${sec.id}" @click=${(e: Event) => void this.goTo(e, sec.id)}>${i + 1} ${sec.title}</a></li>`)}
           </ol>
         </nav>
       </div>
@@ -804,37 +814,51 @@ export class LaminaApp extends LitElement {
           </details>`
         : nothing}
 
-      <section class="inputs" aria-labelledby="opening-h">
-        ${this.heading(1)}
-        <opening-loads-form .project=${p} units=${s.units} .fieldErrors=${s.fieldErrors}></opening-loads-form>
-      </section>
+      ${this.sheetStarted ? this.renderSheet(s) : nothing}
+    `;
+  }
+
+  /**
+   * The sheet below its top: section 1 from the frame after the first results; sections 2–9,
+   * the trace dialog and the closing caution once their elements have loaded. Each step only
+   * adds below what is already laid out, so nothing on screen moves.
+   */
+  private renderSheet(s: AppState) {
+    const p = s.project;
+    const rp = s.resultsProject ?? p;
+    const report = s.analysis?.report ?? null;
+    const ra = this.resultsWithRun(s.analysis, rp, this.uncertaintyRun);
+    const opening = html`<section class="inputs" aria-labelledby="opening-h">
+      ${this.heading(1)}
+      <opening-loads-form .project=${p} units=${s.units} .fieldErrors=${s.fieldErrors}></opening-loads-form>
+    </section>`;
+    if (!this.sheetComplete) return opening;
+    return html`
+      ${opening}
       <section class="inputs" aria-labelledby="strata-h">
         ${this.heading(2)}
-        ${more ? html`<strata-editor .project=${p} .analysis=${s.analysis} units=${s.units} .fieldErrors=${s.fieldErrors}></strata-editor>` : nothing}
+        <strata-editor .project=${p} .analysis=${s.analysis} units=${s.units} .fieldErrors=${s.fieldErrors}></strata-editor>
       </section>
       <section class="inputs" aria-labelledby="lab-h">
         ${this.heading(3)}
-        ${more ? html`<lab-tests-panel .project=${p} .analysis=${s.analysis} units=${s.units} .fieldErrors=${s.fieldErrors}></lab-tests-panel>` : nothing}
+        <lab-tests-panel .project=${p} .analysis=${s.analysis} units=${s.units} .fieldErrors=${s.fieldErrors}></lab-tests-panel>
       </section>
       <section class="results" aria-labelledby="strength-h">
         ${this.heading(4, s.pending)}
-        ${more ? html`<strength-chain-view .project=${rp} .analysis=${s.analysis} .units=${s.units}></strength-chain-view>` : nothing}
+        <strength-chain-view .project=${rp} .analysis=${s.analysis} .units=${s.units}></strength-chain-view>
       </section>
       <section class="results" aria-labelledby="checks-h">
         ${this.heading(5, s.pending)}
-        ${more ? html`<checks-table .project=${rp} .analysis=${ra} .units=${s.units}></checks-table>` : nothing}
+        <checks-table .project=${rp} .analysis=${ra} .units=${s.units}></checks-table>
       </section>
       <section class="results support" aria-labelledby="support-h">
         ${this.heading(6, s.pending || s.supportPending)}
-        ${more
-          ? html`<support-form .project=${p} units=${s.units} .fieldErrors=${s.fieldErrors}></support-form>
-              <support-view .project=${rp} .analysis=${s.analysis} .units=${s.units} .needed=${s.supportNeeded} ?pending=${s.supportPending}></support-view>`
-          : nothing}
+        <support-form .project=${p} units=${s.units} .fieldErrors=${s.fieldErrors}></support-form>
+              <support-view .project=${rp} .analysis=${s.analysis} .units=${s.units} .needed=${s.supportNeeded} ?pending=${s.supportPending}></support-view>
       </section>
       <section class="results" aria-labelledby="span-h">
         ${this.heading(7, s.pending || s.chartPending)}
-        ${more
-          ? html`<span-finder-view
+        <span-finder-view
                 .project=${rp}
                 .analysis=${s.analysis}
                 .units=${s.units}
@@ -843,18 +867,15 @@ export class LaminaApp extends LitElement {
                 .chartLayer=${s.chartLayer}
                 .minThickness=${s.minThickness_m}
               ></span-finder-view>
-              <beam-charts-view .project=${rp} .analysis=${s.analysis} .units=${s.units} .chart=${s.chart} .chartLayer=${s.chartLayer}></beam-charts-view>`
-          : nothing}
+              <beam-charts-view .project=${rp} .analysis=${s.analysis} .units=${s.units} .chart=${s.chart} .chartLayer=${s.chartLayer}></beam-charts-view>
       </section>
       <section class="results study" aria-labelledby="uncertainty-h">
         ${this.heading(SECTIONS.findIndex((x) => x.id === 'uncertainty') + 1)}
-        ${more ? html`<uncertainty-section .project=${p} .runner=${this.runner} .units=${s.units} .fieldErrors=${s.fieldErrors}></uncertainty-section>` : nothing}
+        <uncertainty-section .project=${p} .runner=${this.runner} .units=${s.units} .fieldErrors=${s.fieldErrors}></uncertainty-section>
       </section>
       <section class="print" aria-labelledby="report-h">
         ${this.heading(SECTIONS.findIndex((x) => x.id === 'report') + 1)}
-        ${more
-          ? html`<report-view .project=${rp} .analysis=${this.reportWithRun(this.reportAnalysis(s), rp, this.uncertaintyRun)} .curve=${s.chartPending ? null : s.curve} .units=${s.units}></report-view>`
-          : nothing}
+        <report-view .project=${rp} .analysis=${this.reportWithRun(this.reportAnalysis(s), rp, this.uncertaintyRun)} .curve=${s.chartPending ? null : s.curve} .units=${s.units}></report-view>
       </section>
       <trace-dialog .report=${report} .path=${this.tracePath ?? ''} .units=${s.units} ?open=${this.tracePath !== null}></trace-dialog>
       <footer><caution-banner></caution-banner></footer>

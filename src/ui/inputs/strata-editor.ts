@@ -57,8 +57,8 @@ const ROWS: Row[] = [
     key: 'modulusBasis',
     get: (l) => l.modulusBasis,
     choices: [
-      { value: 'mass', label: 'rock mass, use as given' },
-      { value: 'intact', label: 'intact, reduce with GSI' },
+      { value: 'mass', label: 'rock mass, as given' },
+      { value: 'intact', label: 'intact, GSI-reduced' },
     ],
   },
   { kind: 'number', label: 'Poisson’s ratio ν', key: 'poisson', get: (l) => l.poisson, unitText: '—' },
