@@ -1,7 +1,10 @@
 import { defineConfig } from 'vitest/config';
+import { precompressed } from './build/precompressed';
 
 export default defineConfig({
   base: './',
+  // gzip and brotli copies of the built assets, sent by `vite preview` (build/precompressed.ts)
+  plugins: [precompressed()],
   build: { target: 'es2022', outDir: 'dist', reportCompressedSize: true },
   // ES-module workers may load chunks on demand (the compute worker loads the uncertainty code
   // only for a study: src/ui/compute/compute-core.ts).
