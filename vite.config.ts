@@ -5,7 +5,16 @@ export default defineConfig({
   base: './',
   // gzip and brotli copies of the built assets, sent by `vite preview` (build/precompressed.ts)
   plugins: [precompressed()],
-  build: { target: 'es2022', outDir: 'dist', reportCompressedSize: true },
+  build: {
+    target: 'es2022',
+    outDir: 'dist',
+    reportCompressedSize: true,
+    // Everything the page needs before its first results goes in the entry file: one request
+    // instead of six (the entry and the shared pieces the later sections also import). Measured
+    // in headless chromium on this machine, cold cache: first results 210–217 → 173–179 ms
+    // (medians of 30 alternating loads); the bytes fetched are the same.
+    rolldownOptions: { output: { codeSplitting: { groups: [{ name: 'index', tags: ['$initial'] }] } } },
+  },
   // ES-module workers may load chunks on demand (the compute worker loads the uncertainty code
   // only for a study: src/ui/compute/compute-core.ts).
   worker: { format: 'es' },

@@ -33,19 +33,38 @@ export interface DemoLeftover {
 
 interface KnownDemo {
   id: string;
-  project: Project;
+  /** The demo's title and description as shipped (the validated project keeps them as they are: test). */
+  title: unknown;
+  description: unknown;
+  /** The demo validated (defaults filled in, as any loaded project), on first use. */
+  project(): Project | null;
 }
 
 let known: KnownDemo[] | null = null;
 
-/** The demos, validated once (defaults filled in, as any loaded project). */
+/**
+ * The demos. Each is validated only when a project's values are compared with it: a project
+ * carrying one demo's text costs one validation, not one per demo (this runs on the app's
+ * first render).
+ */
 function demos(): KnownDemo[] {
   if (known) return known;
-  known = [];
-  for (const d of DEMO_PRESETS) {
-    const r = validateProject(structuredClone(d.data));
-    if (r.ok) known.push({ id: d.id, project: r.project });
-  }
+  known = DEMO_PRESETS.map((d) => {
+    const raw = d.data as Record<string, unknown>;
+    let validated: Project | null | undefined;
+    return {
+      id: d.id,
+      title: raw.title,
+      description: raw.description,
+      project: () => {
+        if (validated === undefined) {
+          const r = validateProject(structuredClone(d.data));
+          validated = r.ok ? r.project : null;
+        }
+        return validated;
+      },
+    };
+  });
   return known;
 }
 
@@ -72,15 +91,18 @@ export function demoLeftover(project: Project): DemoLeftover | null {
   for (const field of ['title', 'description'] as const) {
     const text = project[field];
     if (!text) continue;
-    const owners = list.filter((d) => d.project[field] === text);
+    const owners = list.filter((d) => d[field] === text);
     if (owners.length > 0 || DEMO_MARK.test(text)) fields.push(field);
     for (const o of owners) carriers.add(o);
   }
   if (fields.length === 0) return null;
   const candidates = carriers.size > 0 ? [...carriers] : list;
-  if (candidates.some((d) => same(values(d.project), values(project)))) return null;
+  if (candidates.some((d) => {
+    const demo = d.project();
+    return demo !== null && same(values(demo), values(project));
+  })) return null;
   const first = carriers.size > 0 ? [...carriers][0] : null;
-  return { preset: first?.id ?? null, presetTitle: first?.project.title ?? null, fields };
+  return { preset: first?.id ?? null, presetTitle: typeof first?.title === 'string' ? first.title : null, fields };
 }
 
 /** The project without its demo text: the default title, no description. */

@@ -23,6 +23,16 @@ describe('demoLeftover', () => {
     });
   });
 
+  it("matching a demo's text on the file as shipped is matching it on the loaded project (validation keeps the title and description as they are)", () => {
+    // demoLeftover reads the demos' text from the shipped files and validates a demo only to
+    // compare values with it, so the two must agree for every demo
+    DEMO_PRESETS.forEach((d, i) => {
+      const raw = d.data as { title?: unknown; description?: unknown };
+      expect(raw.title, d.id).toBe(load(i).title);
+      expect(raw.description, d.id).toBe(load(i).description);
+    });
+  });
+
   it('a changed demo that keeps its title and description is flagged, naming the demo', () => {
     const p = load(0);
     p.opening.span_m = 7;
