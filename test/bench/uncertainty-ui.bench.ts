@@ -6,19 +6,27 @@
  * study (3 variables, P_f at 12 span points, FORM) is run from the uncertainty section's Run
  * button while the test types into the project title (text that is not committed, so the
  * project does not change and the run is not cancelled) until the result has rendered. The
- * figure is the longest main-thread task over the run: the longest `longtask` entry (the Long
- * Tasks API reports tasks ≥ 50 ms) or, when there is none, the longest gap between the ticks
- * of a MessageChannel loop (a task can only block it for its own length). Baseline in the same
- * session: the same typing for the same time with no run. A second figure splits off the long
- * tasks that started before the result arrived (the section's `lamina:uncertainty-result`
- * mark): the run itself, as opposed to drawing its result. 5 timed runs after one warm-up;
- * each run is ≥ 1 s. Target: the longest task during a run ≤ 50 ms (median of the runs).
+ * figure is the longest task of the page's main thread over the run, read from chromium's own
+ * trace of that thread (category `toplevel`: each `ThreadControllerImpl::RunTask`, from the
+ * click on Run to the rendered result). Baseline in the same session: the same typing for the
+ * same time with no run, traced the same way. A second figure splits off the tasks that
+ * started before the result arrived (the section's `lamina:uncertainty-result` mark): the run
+ * itself, as opposed to drawing its result. 5 timed runs after one warm-up; each run is ≥ 1 s.
+ * Target: the longest task during a run ≤ 50 ms (median of the runs).
+ *
+ * For information, a third figure is the longest pause between the ticks of a MessageChannel
+ * loop in the page over the same run (how this benchmark measured until December 2026). It is
+ * not a task's length: chromium runs input and frames ahead of posted messages, so one pause
+ * can span several tasks in a row, and on a 2-core machine whose other core the worker keeps
+ * busy it also counts time the OS gives other processes. In the runs that prompted the change
+ * it read 28–82 ms while the Long Tasks API reported no task of 50 ms or more; traced, the
+ * longest tasks of such runs were 16–38 ms.
  *
  * Run with `npm run bench` (or `npx tsx test/bench/uncertainty-ui.bench.ts`).
  */
 import { readFileSync } from 'node:fs';
 import { pathToFileURL } from 'node:url';
-import type { Page } from 'playwright-core';
+import type { Browser, Page } from 'playwright-core';
 import { launchChromium } from '../browser/chromium';
 import { startBuiltApp } from '../browser/app-server';
 import { median } from './timing';
@@ -29,46 +37,63 @@ const RUNS = 5;
 
 declare global {
   interface Window {
-    __probe?: { longest: number; gap: number; stop: boolean; tasks: [number, number][] };
+    __probe?: { gap: number; stop: boolean };
   }
 }
 
-/** Start recording long tasks and the largest gap between MessageChannel ticks. */
-async function startProbe(page: Page): Promise<void> {
+interface TraceEvent { name: string; ph: string; pid: number; tid: number; ts: number; dur?: number }
+
+/**
+ * Start tracing the page's threads (chromium's `toplevel` tasks and the page's performance
+ * marks) and the MessageChannel tick loop; marks `bench:probe-start` in the page.
+ */
+async function startProbe(browser: Browser, page: Page): Promise<void> {
+  await browser.startTracing(page, { categories: ['toplevel', 'blink.user_timing'] });
   await page.evaluate(() => {
-    const probe = { longest: 0, gap: 0, stop: false, tasks: [] as [number, number][] };
+    const probe = { gap: 0, stop: false };
     window.__probe = probe;
     performance.clearMarks('lamina:uncertainty-result');
-    const observer = new PerformanceObserver((list) => {
-      for (const e of list.getEntries()) {
-        probe.longest = Math.max(probe.longest, e.duration);
-        probe.tasks.push([e.startTime, e.duration]);
-      }
-    });
-    observer.observe({ type: 'longtask', buffered: false });
     const ch = new MessageChannel();
     let last = performance.now();
     ch.port1.onmessage = () => {
       const now = performance.now();
       probe.gap = Math.max(probe.gap, now - last);
       last = now;
-      if (probe.stop) observer.disconnect();
-      else ch.port2.postMessage(null);
+      if (!probe.stop) ch.port2.postMessage(null);
     };
     ch.port2.postMessage(null);
+    performance.mark('bench:probe-start');
   });
 }
 
-/** The longest task (or tick gap) overall, and the longest long task that started before the result arrived. */
-async function stopProbe(page: Page): Promise<{ longest: number; beforeResult: number }> {
-  return page.evaluate(async () => {
+/**
+ * Stop: the longest main-thread task between the probe's start and stop marks (ms), the longest
+ * of those that started before the result arrived, and the longest tick pause (for information).
+ */
+async function stopProbe(browser: Browser, page: Page): Promise<{ longest: number; beforeResult: number; gap: number }> {
+  const gap = await page.evaluate(async () => {
     const p = window.__probe!;
     p.stop = true;
     await new Promise((r) => setTimeout(r, 20));
-    const mark = performance.getEntriesByName('lamina:uncertainty-result')[0]?.startTime ?? Infinity;
-    const before = p.tasks.filter(([t]) => t < mark).reduce((m, [, d]) => Math.max(m, d), 0);
-    return { longest: Math.max(p.longest, p.gap), beforeResult: before };
+    performance.mark('bench:probe-stop');
+    return p.gap;
   });
+  const trace = JSON.parse((await browser.stopTracing()).toString()) as { traceEvents: TraceEvent[] } | TraceEvent[];
+  const events = Array.isArray(trace) ? trace : trace.traceEvents;
+  const at = (name: string) => events.find((e) => e.name === name);
+  const start = at('bench:probe-start');
+  const stop = at('bench:probe-stop');
+  if (!start || !stop) throw new Error('the trace holds no probe marks');
+  const result = at('lamina:uncertainty-result');
+  // the page's main thread is the one its marks were made on
+  const tasks = events.filter((e) => e.pid === start.pid && e.tid === start.tid && e.ph === 'X' && e.name === 'ThreadControllerImpl::RunTask' && e.ts >= start.ts && e.ts <= stop.ts);
+  if (tasks.length === 0) throw new Error('the trace holds no main-thread tasks');
+  const longestOf = (list: TraceEvent[]) => list.reduce((m, e) => Math.max(m, (e.dur ?? 0) / 1000), 0);
+  return {
+    longest: longestOf(tasks),
+    beforeResult: longestOf(result ? tasks.filter((e) => e.ts < result.ts) : tasks),
+    gap,
+  };
 }
 
 /** Type into the title box (uncommitted) until `done` resolves; returns the keys typed. */
@@ -109,10 +134,11 @@ export async function benchUncertaintyUi(): Promise<BenchResult[]> {
     const during: number[] = [];
     const running: number[] = [];
     const idle: number[] = [];
+    const gaps: number[] = [];
     const runMs: number[] = [];
     for (let k = 0; k <= RUNS; k++) {
       // one run: click Run, type until the result has rendered
-      await startProbe(page);
+      await startProbe(browser, page);
       const t0 = Date.now();
       await section.locator('[data-role=start-run]').click();
       // done: this run's result has arrived (the probe cleared the mark) and the section shows
@@ -124,17 +150,18 @@ export async function benchUncertaintyUi(): Promise<BenchResult[]> {
       }, null, { timeout: 120_000, polling: 100 });
       await typeUntil(page, done);
       const ms = Date.now() - t0;
-      const longestRun = await stopProbe(page);
+      const longestRun = await stopProbe(browser, page);
       // the same typing for as long with no run
-      await startProbe(page);
+      await startProbe(browser, page);
       await typeUntil(page, new Promise((r) => setTimeout(r, ms)));
-      const longestIdle = await stopProbe(page);
+      const longestIdle = await stopProbe(browser, page);
       await page.keyboard.press('Escape');
-      if (process.env.LAMINA_BENCH_VERBOSE) console.error(`run ${k}: ${ms} ms, longest ${longestRun.longest} (before the result ${longestRun.beforeResult}), typing alone ${longestIdle.longest}`);
+      if (process.env.LAMINA_BENCH_VERBOSE) console.error(`run ${k}: ${ms} ms, longest task ${longestRun.longest} (before the result ${longestRun.beforeResult}), typing alone ${longestIdle.longest}; longest tick pause ${longestRun.gap} (typing alone ${longestIdle.gap})`);
       if (k === 0) continue; // warm-up
       during.push(longestRun.longest);
       running.push(longestRun.beforeResult);
       idle.push(longestIdle.longest);
+      gaps.push(longestRun.gap);
       runMs.push(ms);
     }
     const m = median(during);
@@ -148,9 +175,13 @@ export async function benchUncertaintyUi(): Promise<BenchResult[]> {
       target: `≤ ${TARGET_MS} ms`,
       pass: m <= TARGET_MS,
     }, {
-      name: 'of which the longest long task before the result arrived (the run itself; after it: drawing the result) — 0: none ≥ 50 ms',
+      name: 'of which the longest task that started before the result arrived (the run itself; after it: drawing the result)',
       median_us: median(running) * 1e3,
       min_us: Math.min(...running) * 1e3,
+    }, {
+      name: 'for information: the longest pause between MessageChannel ticks over the same runs (not a task length: it spans tasks chromium runs ahead of posted messages, and time the OS gives other processes)',
+      median_us: median(gaps) * 1e3,
+      min_us: Math.min(...gaps) * 1e3,
     }];
   } finally {
     await browser.close();
