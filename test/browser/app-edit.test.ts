@@ -142,4 +142,29 @@ describe('app: editing', () => {
     expect(errors).toEqual([]);
     await context.close();
   });
+
+  it('the design options say what the chosen basis means; switching the tensile basis to lab moves a default tension target from 2 to 4 and says so (METHODS §10)', async () => {
+    const { page, context, errors } = await openApp(session.browser, session.url);
+    const form = page.locator('opening-loads-form');
+    const basis = form.locator('select[data-path="design.basis"]');
+    const tensile = form.locator('select[data-path="design.tensileBasis"]');
+    const noteOf = (select: import('playwright-core').Locator) => select.locator('xpath=following-sibling::span[contains(@class, "choice-note")]').textContent();
+    // the demo: intact basis, rock-mass tensile basis with its default target 2
+    expect(await noteOf(basis)).toMatch(/uncracked layer must not crack/);
+    expect(await noteOf(tensile)).toMatch(/Hoek–Brown rock-mass strength/);
+    expect(JSON.parse(await projectJson(page)).design.fsTarget.tension).toBe(2);
+    await tensile.selectOption('lab');
+    await waitForResults(page);
+    const design = JSON.parse(await projectJson(page)).design;
+    expect(design.tensileBasis).toBe('lab');
+    expect(design.fsTarget.tension).toBe(4); // METHODS §10: default 4 on the lab basis (Obert & Duvall)
+    await expect.poll(() => noteOf(tensile)).toMatch(/characteristic lab strength with the size effect/);
+    await expect.poll(() => page.locator('lamina-app .status-line').textContent()).toMatch(/tension target went from 2 to 4/);
+    await basis.selectOption('jointed');
+    await waitForResults(page);
+    expect(JSON.parse(await projectJson(page)).design.basis).toBe('jointed');
+    await expect.poll(() => noteOf(basis)).toMatch(/whole roof is taken as cracked/);
+    expect(errors).toEqual([]);
+    await context.close();
+  });
 });

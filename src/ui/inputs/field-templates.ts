@@ -12,6 +12,8 @@ const nextId = (): string => `f${++counter}`;
 export interface Choice<T extends string> {
   value: T;
   label: string;
+  /** A sentence shown under the select while this choice is chosen (keeps the label short enough to read in the select). */
+  note?: string;
 }
 
 export function selectField<T extends string>(
@@ -30,8 +32,15 @@ export function selectField<T extends string>(
     >
       ${opts.choices.map((c) => html`<option value=${c.value} ?selected=${c.value === opts.value}>${c.label}</option>`)}
     </select>
+    ${choiceNote(opts.choices, opts.value)}
     ${opts.error ? html`<span class="error" role="alert">${opts.label}: ${opts.error}</span>` : nothing}
   </span>`;
+}
+
+/** The chosen choice's note, as a hint line under its select (nothing when it has none). */
+export function choiceNote<T extends string>(choices: ReadonlyArray<Choice<T>>, value: T) {
+  const note = choices.find((c) => c.value === value)?.note;
+  return note ? html`<span class="hint choice-note">${note}</span>` : nothing;
 }
 
 export function checkboxField(host: EventTarget, opts: { label: string; path: string; value: boolean; compact?: boolean; hint?: string }) {

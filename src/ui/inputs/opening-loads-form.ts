@@ -14,7 +14,7 @@ import type { UnitSystem } from '../../model/units';
 import { tokens } from '../styles/tokens';
 import { sheet } from '../styles/sheet';
 import { formGrid } from '../styles/form-grid';
-import { checkboxField, errorFor, quantityField, selectField } from './field-templates';
+import { checkboxField, choiceNote, errorFor, quantityField, selectField } from './field-templates';
 import { fireReplace } from './events';
 import './quantity-input';
 import { isOverhang, openingWords } from '../../model/span-wording';
@@ -34,8 +34,16 @@ const EDGE_CHOICES = [
 ] as const;
 
 const TENSILE_BASIS_CHOICES = [
-  { value: 'rockMass', label: 'Rock mass — lab strength scaled by Hoek–Brown (default target 2)' },
-  { value: 'lab', label: 'Lab — characteristic strength with the size effect (default target 4)' },
+  {
+    value: 'rockMass',
+    label: 'Rock mass (default target 2)',
+    note: 'The lab strength scaled down to the rock mass: the smaller of the block strength and the Hoek–Brown rock-mass strength.',
+  },
+  {
+    value: 'lab',
+    label: 'Lab (default target 4)',
+    note: 'The characteristic lab strength with the size effect: the basis of Obert and Duvall’s tension factors of 4–8.',
+  },
 ] as const;
 
 const CRUSHING_CHOICES = [
@@ -56,8 +64,8 @@ const CHARACTERISTIC_CHOICES = [
 ] as const;
 
 const BASIS_CHOICES = [
-  { value: 'intact', label: 'Intact — an uncracked layer must not crack (its tension counts)' },
-  { value: 'jointed', label: 'Jointed — the whole roof taken as cracked (voussoir checks count)' },
+  { value: 'intact', label: 'Intact (tension counts)', note: 'An uncracked layer must not crack: its tension check counts.' },
+  { value: 'jointed', label: 'Jointed (voussoir checks count)', note: 'The whole roof is taken as cracked: the voussoir checks count, tension does not.' },
 ] as const;
 
 export class OpeningLoadsForm extends DeferOffscreen(LitElement) {
@@ -185,6 +193,7 @@ export class OpeningLoadsForm extends DeferOffscreen(LitElement) {
           <select id="tensile-basis" data-path="design.tensileBasis" @change=${(e: Event) => this.changeTensileBasis((e.target as HTMLSelectElement).value as TensileBasis)}>
             ${TENSILE_BASIS_CHOICES.map((c) => html`<option value=${c.value} ?selected=${c.value === p.design.tensileBasis}>${c.label}</option>`)}
           </select>
+          ${choiceNote(TENSILE_BASIS_CHOICES, p.design.tensileBasis)}
         </span>
         <span class="line">${selectField(this, { label: 'Crushing strength (voussoir)', path: 'design.crushingStrength', value: p.design.crushingStrength, choices: CRUSHING_CHOICES })}</span>
         <span class="line">${checkboxField(this, {

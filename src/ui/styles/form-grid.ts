@@ -36,4 +36,7 @@ export const formGrid = css`
   select {
     max-width: 100%;
   }
+  .choice-note {
+    display: block;
+  }
 `;
