@@ -6,6 +6,7 @@
  */
 import type { EmpiricalReport, Project, SupportNeededReport, SupportReport, Warning } from '../model/types';
 import { boltLengthRule, qValue, unsupportedSpan } from '../strength/q-system';
+import { qSpanWord } from '../model/span-wording';
 import type { State } from './evaluate';
 import type { ProjectSI } from './inputs';
 import { SOURCES, type TraceBuilder } from './trace';
@@ -21,6 +22,11 @@ export const SUPPORT_SOURCES = {
 
 export const EMPIRICAL_NOTE =
   'Empirical spans summarise case histories, not this roof’s mechanics: shown beside the mechanistic answer, never counted.';
+
+/** The note for an overhang: the Q system's width is for the roofs of openings. */
+export const EMPIRICAL_OVERHANG_NOTE =
+  'The Q system’s largest unsupported width is for the roof of an opening, not the reach of an overhang: it sets no limit on this overhang. ' +
+  'Empirical values summarise case histories, not this overhang’s mechanics: shown beside the mechanistic answer, never counted.';
 
 const round = (x: number): number => +x.toPrecision(3);
 
@@ -90,12 +96,13 @@ export function empiricalReport(project: Project, p: ProjectSI, state: State, tr
   const q = qValue({ rqd, jn: r.jn, jr: r.jr, ja: r.ja, jw: r.jw, srf: r.srf });
   const span = unsupportedSpan(q, r.esr);
   const bolt = boltLengthRule(p.entrySpan, r.esr);
+  const note = project.opening.type === 'cantilever' ? EMPIRICAL_OVERHANG_NOTE : EMPIRICAL_NOTE;
   trace.add('empirical.q', 'Q (rock mass quality)', '(max(RQD, 10) / J_n) * (J_r / J_a) * (J_w / SRF)',
     { RQD: [rqd, ''], J_n: [r.jn, ''], J_r: [r.jr, ''], J_a: [r.ja, ''], J_w: [r.jw, ''], SRF: [r.srf, ''] }, q, '', SUPPORT_SOURCES.q,
-    `RQD of the immediate roof (layer 1). ${EMPIRICAL_NOTE}`);
-  trace.add('empirical.unsupportedSpan_m', 'Largest unsupported span (Q system)', '2 * ESR * Q^0.4 * 1 m', { ESR: [r.esr, ''], Q: [q, ''] }, span, 'm', SUPPORT_SOURCES.q, EMPIRICAL_NOTE);
-  trace.add('empirical.boltLength_m', 'Bolt length rule (Q system)', '2 m + 0.15 * B / ESR', { B: [p.entrySpan, 'm'], ESR: [r.esr, ''] }, bolt, 'm', SUPPORT_SOURCES.q, EMPIRICAL_NOTE);
-  return { q, unsupportedSpan_m: span, boltLength_m: bolt, note: EMPIRICAL_NOTE };
+    `RQD of the immediate roof (layer 1). ${note}`);
+  trace.add('empirical.unsupportedSpan_m', `Largest unsupported ${qSpanWord(project.opening.type)} (Q system)`, '2 * ESR * Q^0.4 * 1 m', { ESR: [r.esr, ''], Q: [q, ''] }, span, 'm', SUPPORT_SOURCES.q, note);
+  trace.add('empirical.boltLength_m', 'Bolt length rule (Q system)', '2 m + 0.15 * B / ESR', { B: [p.entrySpan, 'm'], ESR: [r.esr, ''] }, bolt, 'm', SUPPORT_SOURCES.q, note);
+  return { q, unsupportedSpan_m: span, boltLength_m: bolt, note };
 }
 
 export { SOURCES };

@@ -5,7 +5,7 @@ import { CAUTION } from '../model/caution';
 import { formatQuantity, type UnitSystem } from '../model/units';
 import { modeLabel, STATUS_TEXT } from '../analysis/check-labels';
 import { buildVerdict } from '../analysis/verdict';
-import { openingWords } from '../model/span-wording';
+import { openingWords, qSpanWord } from '../model/span-wording';
 import { numberText } from '../report/number-text';
 
 const fs = (x: number | null) => (x === null ? '—' : numberText(x, 3));
@@ -74,7 +74,7 @@ export function supportLines(project: Project, report: Report, units: UnitSystem
   const e = report.empirical;
   if (e) {
     lines.push(
-      `Empirical cross-check (Q system, not counted): Q ${numberText(e.q, 3)}; largest unsupported ${words.span} ${formatQuantity(e.unsupportedSpan_m, 'length', units)}; bolt length ${formatQuantity(e.boltLength_m, 'length', units)}.`,
+      `Empirical cross-check (Q system, not counted): Q ${numberText(e.q, 3)}; largest unsupported ${qSpanWord(project.opening.type)} ${formatQuantity(e.unsupportedSpan_m, 'length', units)}; bolt length ${formatQuantity(e.boltLength_m, 'length', units)}.`,
       `  ${e.note}`,
     );
   }

@@ -34,6 +34,15 @@ export function openingWords(openingType: string): OpeningWords {
   return WORDS[openingType === 'cantilever' ? 'overhang' : openingType === 'intersection' ? 'entry width' : 'span'];
 }
 
+/**
+ * The Q system's unsupported dimension in a sentence: the opening's own word ("span", "entry
+ * width"), but "roof width" for an overhang, whose reach it does not limit (the system's
+ * spans are for the roofs of openings).
+ */
+export function qSpanWord(openingType: string): string {
+  return isOverhang(openingType) ? 'roof width' : openingWords(openingType).span;
+}
+
 /** True for an overhang (a cantilever), the one opening type that has no span. */
 export function isOverhang(openingType: string): boolean {
   return openingType === 'cantilever';

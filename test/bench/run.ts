@@ -27,7 +27,7 @@ const groups: [string, () => Promise<BenchResult[]>][] = [
 const uiModule = './ui.bench';
 const ui = (await import(uiModule).catch(() => null)) as { benchUi?: () => Promise<BenchResult[]> } | null;
 if (ui?.benchUi) groups.push(['web app', ui.benchUi]);
-// The uncertainty study in the app (chromium, the Vite dev server): the main thread during a run.
+// The uncertainty study in the app (chromium, the production build): the main thread during a run.
 const uncertaintyUiModule = './uncertainty-ui.bench';
 const uncertaintyUi = (await import(uncertaintyUiModule).catch(() => null)) as { benchUncertaintyUi?: () => Promise<BenchResult[]> } | null;
 if (uncertaintyUi?.benchUncertaintyUi) groups.push(['uncertainty in the web app', uncertaintyUi.benchUncertaintyUi]);
@@ -37,7 +37,16 @@ let failed = 0;
 console.log(`Lamina benchmarks — node ${process.version}, ${new Date().toISOString()}`);
 for (const [name, run] of groups) {
   console.log(`\n## ${name}`);
-  for (const r of await run()) {
+  let rows: BenchResult[];
+  try {
+    rows = await run();
+  } catch (e) {
+    // one broken benchmark must not hide the others' figures: report it as a failure and go on
+    failed++;
+    console.log(`✗ ${name}: the benchmark failed: ${e instanceof Error ? (e.stack ?? e.message) : String(e)}`);
+    continue;
+  }
+  for (const r of rows) {
     if (r.pass === false) failed++;
     const ratio = r.ratio === undefined ? '' : `  ×${r.ratio.toFixed(1)} vs ${r.baseline ?? 'baseline'}`;
     console.log(`${r.pass === false ? '✗' : r.pass ? '✓' : ' '} ${r.name}: ${r.min_us === undefined ? fmt(r.median_us) : `${fmt(r.min_us)} / ${fmt(r.median_us)} (min / median)`}${ratio}${r.target ? `  (target ${r.target})` : ''}`);

@@ -95,4 +95,26 @@ describe('app: an overhang is called an overhang', () => {
     expect(errors).toEqual([]);
     await context.close();
   }, 240_000);
+
+  it('quarry bench with Q ratings: the empirical cross-check gives a roof width, says it is no limit on the overhang, and names no span', async () => {
+    const { page, context, errors } = await openApp(session.browser, session.url, { viewport: { width: 1280, height: 900 } });
+    await unstick(page);
+    await page.locator('project-bar #preset').selectOption('quarry-bench-overhang');
+    await waitForResults(page);
+    // ratings from DESIGN.md's example of `empirical.q`
+    await page.evaluate(() => {
+      const p = structuredClone(window.__lamina!.state().project);
+      p.empirical = { q: { jn: 9, jr: 1.5, ja: 1, jw: 1, srf: 1, esr: 1.6 } };
+      window.__lamina!.store.replace(p, 'Q ratings');
+    });
+    await waitForResults(page);
+    const view = () => page.evaluate(deepText('.not-counted.empirical'), '.not-counted.empirical');
+    await expect.poll(view, { timeout: 30_000 }).toContain('Largest unsupported roof width');
+    const text = await view();
+    expect(text).toContain('(no limit on an overhang)');
+    expect(text).toContain('not the reach of an overhang');
+    expect(spanWords(text)).toEqual([]);
+    expect(errors).toEqual([]);
+    await context.close();
+  });
 });

@@ -107,6 +107,28 @@ describe('overhang wording (quarry-bench-overhang, a cantilever)', () => {
     expect(md).toContain('maxSpan_m.governing');
   });
 
+  it('with Q ratings, the Q system\'s unsupported width is a roof width, not a limit on the overhang; a beam keeps its span (CLI and report)', async () => {
+    // ratings from DESIGN.md's example of `empirical.q`
+    const withQ = (path: string) => {
+      const p = JSON.parse(readFileSync(path, 'utf8'));
+      p.empirical = { q: { jn: 9, jr: 1.5, ja: 1, jw: 1, srf: 1, esr: 1.6 } };
+      return JSON.stringify(p);
+    };
+    const overhang = await cli(['check', 'q.json'], { 'q.json': withQ(OVERHANG) });
+    expect(overhang).toMatch(/largest unsupported roof width \d/);
+    expect(overhang).toContain('not the reach of an overhang');
+    expect(spanWords(overhang)).toEqual([]);
+    const { project } = readProjectText(withQ(OVERHANG));
+    const doc = buildReportDocument({ project, analysis: analyse(project), projectText: withQ(OVERHANG), units: 'SI', version: '0.1.0', date: '2026-12-02' });
+    const md = renderMarkdown(doc);
+    expect(md).toContain('largest unsupported roof width');
+    expect(md).toContain('Largest unsupported roof width (Q system)');
+    expect(spanWords(md)).toEqual([]);
+    const beam = await cli(['check', 'q.json'], { 'q.json': withQ(BEAM) });
+    expect(beam).toMatch(/largest unsupported span \d/);
+    expect(beam).not.toContain('reach of an overhang');
+  });
+
   it('a beam preset still says span, abutment and midspan', async () => {
     const text = await cli(['check', BEAM]);
     expect(text).toContain('Largest span meeting every counted target');

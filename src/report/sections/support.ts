@@ -6,7 +6,7 @@
  * drawing (`charts/support-bolts.ts`) follows the pattern's results.
  */
 import { MODE_LABEL, STATUS_TEXT, SUPPORT_MODES } from '../../analysis/check-labels';
-import { openingWords } from '../../model/span-wording';
+import { openingWords, qSpanWord } from '../../model/span-wording';
 import { formatQuantity } from '../../model/units';
 import { numberText } from '../number-text';
 import { supportBoltsSvg } from '../charts/support-bolts';
@@ -67,7 +67,7 @@ export function supportSection(ctx: SectionContext): Section | null {
   }
   const e = r.empirical;
   if (e) {
-    blocks.push({ kind: 'paragraph', text: `Empirical cross-check (Q system, not counted): Q ${numberText(e.q, 3)}; largest unsupported ${openingWords(ctx.project.opening.type).span} ${L(e.unsupportedSpan_m)}; bolt length ${L(e.boltLength_m)}. ${e.note}` });
+    blocks.push({ kind: 'paragraph', text: `Empirical cross-check (Q system, not counted): Q ${numberText(e.q, 3)}; largest unsupported ${qSpanWord(ctx.project.opening.type)} ${L(e.unsupportedSpan_m)}; bolt length ${L(e.boltLength_m)}. ${e.note}` });
   }
   return { id: 'support', title: 'Support', blocks };
 }

@@ -190,7 +190,9 @@ export class SupportView extends DeferOffscreen(LitElement) {
             <h3>Empirical cross-check <span class="tag">not counted</span></h3>
             <dl>
               <dt>Q</dt><dd>${numberText(e.q, 3)}</dd>
-              <dt>Largest unsupported span</dt><dd>${displayText(e.unsupportedSpan_m, 'length', this.units)} (this opening: ${displayText(report.opening.designSpan_m ?? p.opening.span_m, 'length', this.units)})</dd>
+              ${p.opening.type === 'cantilever'
+                ? html`<dt>Largest unsupported roof width</dt><dd>${displayText(e.unsupportedSpan_m, 'length', this.units)} (no limit on an overhang)</dd>`
+                : html`<dt>Largest unsupported span</dt><dd>${displayText(e.unsupportedSpan_m, 'length', this.units)} (this opening: ${displayText(report.opening.designSpan_m ?? p.opening.span_m, 'length', this.units)})</dd>`}
               <dt>Bolt length (rule)</dt><dd>${displayText(e.boltLength_m, 'length', this.units)}${b ? ` (this pattern: ${displayText(b.length_m, 'length', this.units)})` : ''}</dd>
             </dl>
             <p class="hint">${e.note}</p>
