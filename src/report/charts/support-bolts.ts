@@ -13,7 +13,7 @@ import { scaleLinear } from 'd3-scale';
 import type { Project, Report } from '../../model/types';
 import type { UnitSystem } from '../../model/units';
 import { ID, INK, PALETTE, axis, axisLabel, dimension, displayUnit, emptyNote, escapeXml, formatValue, legend, line, num, svgDocument, text } from './svg';
-import { openingWords } from '../../model/span-wording';
+import { isOverhang, openingWords } from '../../model/span-wording';
 
 export interface SupportBoltsOptions {
   units: UnitSystem;
@@ -67,7 +67,9 @@ export function supportBoltsSvg(project: Project, report: Report | null, options
   thick.reduce((acc, t, i) => ((base[i] = acc), acc + t), 0);
   const span = project.opening.type === 'intersection' && report ? report.opening.designSpan_m ?? project.opening.span_m : project.opening.span_m;
 
-  // Frame: ribs of fixed width either side of the span; the strata above the roof line.
+  // Frame: ribs of fixed width either side of the span (an overhang: at its root only); the
+  // strata above the roof line.
+  const overhang = isOverhang(project.opening.type);
   const left = 70;
   const ribW = 34;
   const plotW = width - left - 200 - 2 * ribW;
@@ -112,14 +114,14 @@ export function supportBoltsSvg(project: Project, report: Report | null, options
     const r = role(i);
     const fill = r === 'suspended' ? 'hang' : r === 'bonded' ? 'bond' : 'plain';
     parts.push(
-      `<rect class="layer" data-layer="${i}" data-role="${r}" x="${num(left)}" y="${num(yTop)}" width="${num(x1 + ribW - left)}" height="${num(h)}" ` +
+      `<rect class="layer" data-layer="${i}" data-role="${r}" x="${num(left)}" y="${num(yTop)}" width="${num((overhang ? x1 : x1 + ribW) - left)}" height="${num(h)}" ` +
         `fill="url(#${ID}${fill})" stroke="${INK.axis}" stroke-width="0.8"><title>${escapeXml(`${layer.name}: ${formatValue(len.convert(layer.thickness_m))} ${len.unit}`)}</title></rect>`,
     );
   });
-  // Ribs and the opening below the roof line.
+  // Ribs (an overhang: its root only) and the opening below the roof line.
   const voidDepth = 40;
-  parts.push(`<rect x="${num(left)}" y="${num(roofY)}" width="${num(ribW)}" height="${num(voidDepth)}" fill="url(#${ID}rib)" stroke="${INK.axis}" stroke-width="0.8"/>`);
-  parts.push(`<rect x="${num(x1)}" y="${num(roofY)}" width="${num(ribW)}" height="${num(voidDepth)}" fill="url(#${ID}rib)" stroke="${INK.axis}" stroke-width="0.8"/>`);
+  parts.push(`<rect class="rib" x="${num(left)}" y="${num(roofY)}" width="${num(ribW)}" height="${num(voidDepth)}" fill="url(#${ID}rib)" stroke="${INK.axis}" stroke-width="0.8"/>`);
+  if (!overhang) parts.push(`<rect class="rib" x="${num(x1)}" y="${num(roofY)}" width="${num(ribW)}" height="${num(voidDepth)}" fill="url(#${ID}rib)" stroke="${INK.axis}" stroke-width="0.8"/>`);
   parts.push(text(x1 - 6, roofY + voidDepth - 6, 'opening', { anchor: 'end', size: 10, fill: INK.muted }));
 
   // Bolts: shank from the roof line to the tip, the anchorage zone drawn wide at the tip, a plate at the collar.
@@ -140,7 +142,7 @@ export function supportBoltsSvg(project: Project, report: Report | null, options
     const pb = x0 + xs[1] * kH;
     parts.push(dimension(pa, roofY + 12, pb, roofY + 12, 'S', { x: (pa + pb) / 2, y: roofY + 25 }));
   }
-  parts.push(dimension(x0, roofY + voidDepth + 12, x1, roofY + voidDepth + 12, `span ${formatValue(len.convert(span))} ${len.unit}`, { x: (x0 + x1) / 2, y: roofY + voidDepth + 26 }));
+  parts.push(dimension(x0, roofY + voidDepth + 12, x1, roofY + voidDepth + 12, `${openingWords(project.opening.type).span} ${formatValue(len.convert(span))} ${len.unit}`, { x: (x0 + x1) / 2, y: roofY + voidDepth + 26 }));
   const action = bolts.action === 'suspension' ? 'suspension' : 'beam building';
   parts.push(text(left, roofY + voidDepth + 44,
     `Bolts ${formatValue(len.convert(bolts.length_m))} ${len.unit} long, anchorage ${formatValue(len.convert(bolts.anchorage_m))} ${len.unit}, ` +

@@ -61,6 +61,25 @@ describe('supportBoltsSvg', () => {
     expectLabels(loose, ['bonded beam, not credited']);
   });
 
+  it('an overhang is held at its root only: one rib, the strata end at the free end, the length dimensioned as the overhang (common practice: a cantilever has one fixed end)', () => {
+    const quarry = readProjectText(readFileSync(new URL('../../../presets/quarry-bench-overhang.lamina.json', import.meta.url), 'utf8')).project;
+    const p: Project = { ...quarry, support: { standing_kPa: 0, bolts: { length_m: 1.8, capacity_kN: 100, spacingAcross_m: 0.5, spacingAlong_m: 0.5, anchorage_m: 0.3, action: 'suspension', shearCapacity_kN: 60, pretension_kN: 0 } } };
+    const svg = draw(p);
+    expectWellFormed(svg);
+    expectNoBadNumbers(svg);
+    expect(svg.match(/<rect class="rib"/g)).toHaveLength(1);
+    expectLabels(svg, [`overhang ${quarry.opening.span_m} m`]);
+    expect(svg).not.toMatch(/>span /);
+    // the layers end where the overhang does: at the right end of its dimension line
+    const layer = /<rect class="layer"[^>]*>/.exec(svg)![0];
+    const rib = /<rect class="rib"[^>]*>/.exec(svg)![0];
+    const pxPerM = (attr(layer, 'width') - attr(rib, 'width')) / quarry.opening.span_m;
+    const bolts = [...svg.matchAll(/<g class="bolt"><line x1="([\d.]+)"/g)].map((m) => Number(m[1]));
+    expect((bolts[1] - bolts[0]) / pxPerM).toBeCloseTo(0.5, 1);
+    // a beam keeps both ribs
+    expect(draw(bolted()).match(/<rect class="rib"/g)).toHaveLength(2);
+  });
+
   it('US units: heights and spacing in ft (1.2 m / 0.3048 = 3.94 ft, METHODS §13)', () => {
     expectLabels(draw(bolted(), 'US'), ['Height above the roof line (ft)', 'spacing across S = 3.94 ft']);
   });
