@@ -189,7 +189,7 @@ export function designChartSvg(chart: DesignChart, mode: Mode, options: DesignCh
       { label: 'with support', style: SUPPORT_STYLE.withSupport },
       { label: 'without support', style: SUPPORT_STYLE.unsupported },
     ], kx, ky + 6, 120, 1));
-    parts.push(text(kx, ky + 44, 'largest span meeting', { size: 9, fill: INK.muted }));
+    parts.push(text(kx, ky + 44, `largest ${options.spanWord ?? 'span'} meeting`, { size: 9, fill: INK.muted }));
     parts.push(text(kx, ky + 56, 'every counted check', { size: 9, fill: INK.muted }));
   }
 

@@ -59,5 +59,17 @@ describe('designChartSvg with support', () => {
     expect(svg).toMatch(/<path class="support-curve with-support" d="M[\d.,]+L[\d.,]+"/);
     expect(svg).not.toMatch(/<path class="support-curve unsupported" d="M[\d.,]+L/); // one point only: no line
     expect(designChartSvg(c, 'tension', { units: 'SI' })).not.toContain('support-curve');
+    expectLabels(svg, ['largest span meeting']);
+  });
+
+  it('for an overhang the axis, the key and the description say overhang, never span (an overhang is not a span: common practice)', () => {
+    const c = design();
+    const t = c.thicknesses_m;
+    const s = c.spans_m;
+    const withCurve = { ...c, support: { thicknesses_m: [t[0], t[t.length - 1]], withSupport_m: [s[s.length - 1], s[1]], unsupported_m: [s[0], s[0]] } };
+    const svg = designChartSvg(withCurve, 'tension', { units: 'SI', spanWord: 'overhang' });
+    expectLabels(svg, ['Overhang (m)', 'largest overhang meeting']);
+    expect(svg).toContain('Also the largest overhang meeting every counted check');
+    expect(svg.replace(/<[^>]+>/g, ' ')).not.toMatch(/\bspans?\b/i);
   });
 });
