@@ -7,7 +7,7 @@ import { version } from '../../package.json';
 import { analyse, analyseWithSupportNeeded, meetsTargets } from '../analysis/analyse';
 import { spanCurve } from '../analysis/span-curve';
 import { withUncertainty } from '../analysis/probability-row';
-import { minimumThickness } from '../analysis/thickness';
+import { minimumThickness, THICKNESS_MIN_M } from '../analysis/thickness';
 import type { Analysis } from '../analysis/types';
 import type { Project } from '../model/types';
 import { formatQuantity, type UnitSystem } from '../model/units';
@@ -185,7 +185,13 @@ export async function runSpan(args: ParsedArgs, io: Io): Promise<ExitCode> {
       `Current ${words.span}: ${formatQuantity(project.opening.span_m, 'length', units)}${project.opening.type === 'slab' ? ' (slab: aspect ratio held fixed)' : ''}`,
       ...spanLines(maxSpan, units, words.span),
       '',
-      `Minimum thickness of layer ${layer} (${project.layers[layer - 1].name}) at the current ${words.span}: ${minT === null ? 'none up to the search limit meets every target' : formatQuantity(minT, 'length', units)} (now ${formatQuantity(project.layers[layer - 1].thickness_m, 'length', units)})`,
+      `Minimum thickness of layer ${layer} (${project.layers[layer - 1].name}) at the current ${words.span}: ${
+        minT === null
+          ? 'none up to the search limit meets every target'
+          : minT <= THICKNESS_MIN_M
+            ? `every thickness down to ${formatQuantity(THICKNESS_MIN_M, 'length', units)} (the thinnest searched) meets every target: its thickness does not limit this design`
+            : formatQuantity(minT, 'length', units)
+      } (now ${formatQuantity(project.layers[layer - 1].thickness_m, 'length', units)})`,
       '',
       caution(),
       '',

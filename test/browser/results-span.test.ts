@@ -89,6 +89,11 @@ describe('<span-finder-view> in the app (coal-room demo)', () => {
     await page.waitForFunction(() => (window as any).__lamina.state().chartLayer === 1);
     const s = await state(page);
     await expect.poll(() => text(page.locator('span-finder-view [data-role="min-thickness"]'))).toContain(s.project.layers[1].name);
+    // the demo's sandstone meets every target at any thickness searched (minimumThickness gives
+    // the floor of the search, 0.01 m): said as such, not as a "thinnest" thickness
+    expect((await text(page.locator('span-finder-view [data-role="min-thickness"]'))).replace(/\s+/g, ' ')).toMatch(
+      /Every thickness of Channel sandstone down to 0\.01 m \(the thinnest searched\) meets every target at the current span \(now [\d.]+ m\): its thickness does not limit this design\./,
+    );
     await expect.poll(() => page.locator('beam-charts-view select[data-role="chart-layer"]').inputValue()).toBe('1');
     await renderAllSections(page);
     await page.locator('beam-charts-view').screenshot({ path: resolve(ARTIFACTS, 'results-beam-charts.png') });

@@ -144,6 +144,17 @@ describe('lamina CLI', () => {
     expect(h.out()).toContain('Minimum thickness');
     expect(h.out()).toContain(CAUTION);
   });
+  it('span: a layer whose thickness does not limit the design is said so, not given the search floor as its minimum', async () => {
+    // the coal-room demo's sandstone (layer 2) meets every target at the floor of the thickness
+    // search (minimumThickness gives 0.01 m)
+    const coal = presetFiles().find((p) => p.includes('coal-room'))!;
+    const f = fakeIo();
+    await run(['span', coal, '--layer', '2'], f.io);
+    expect(f.out()).toMatch(/Minimum thickness of layer 2 \(Channel sandstone\) at the current span: every thickness down to 0\.01 m \(the thinnest searched\) meets every target: its thickness does not limit this design \(now [\d.]+ m\)/);
+    const g = fakeIo();
+    await run(['span', coal, '--layer', '1'], g.io);
+    expect(g.out()).toMatch(/Minimum thickness of layer 1 \(Laminated grey shale\) at the current span: \d+(\.\d+)? m \(now 0\.5 m\)/);
+  });
   it('--csv writes the results table and the span curve, both parseable', async () => {
     const f = fakeIo();
     await run(['check', presetFiles()[0], '--csv', 'out.csv'], f.io);

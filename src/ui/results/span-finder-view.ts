@@ -171,11 +171,14 @@ export class SpanFinderView extends DeferOffscreen(LitElement) {
         ${this.minThickness === null
           ? html`No thickness of <strong>${p.layers[layerIndex]?.name ?? ''}</strong> meets every target at the current ${spanWord}
               (or the thickness does not control it).`
-          : html`Thinnest <strong>${p.layers[layerIndex]?.name ?? ''}</strong> that meets every target at the current ${spanWord}:
-              <strong data-si-value=${this.minThickness}>${this.minThickness <= THICKNESS_MIN_M
-                ? `${displayText(THICKNESS_MIN_M, 'length', u, 3)} or less (the thinnest searched)`
-                : displayText(this.minThickness, 'length', u, 3)}</strong>
-              (now ${displayText(p.layers[layerIndex]?.thickness_m ?? null, 'length', u, 3)}).`}
+          : this.minThickness <= THICKNESS_MIN_M
+            ? html`Every thickness of <strong>${p.layers[layerIndex]?.name ?? ''}</strong> down to
+                <strong data-si-value=${this.minThickness}>${displayText(THICKNESS_MIN_M, 'length', u, 3)}</strong> (the thinnest searched)
+                meets every target at the current ${spanWord} (now ${displayText(p.layers[layerIndex]?.thickness_m ?? null, 'length', u, 3)}):
+                its thickness does not limit this design.`
+            : html`Thinnest <strong>${p.layers[layerIndex]?.name ?? ''}</strong> that meets every target at the current ${spanWord}:
+                <strong data-si-value=${this.minThickness}>${displayText(this.minThickness, 'length', u, 3)}</strong>
+                (now ${displayText(p.layers[layerIndex]?.thickness_m ?? null, 'length', u, 3)}).`}
       </p>
     `;
   }
