@@ -91,9 +91,19 @@ describe('<span-finder-view> in the app (coal-room demo)', () => {
     await expect.poll(() => text(page.locator('span-finder-view [data-role="min-thickness"]'))).toContain(s.project.layers[1].name);
     // the demo's sandstone meets every target at any thickness searched (minimumThickness gives
     // the floor of the search, 0.01 m): said as such, not as a "thinnest" thickness
-    expect((await text(page.locator('span-finder-view [data-role="min-thickness"]'))).replace(/\s+/g, ' ')).toMatch(
+    await expect.poll(async () => (await text(page.locator('span-finder-view [data-role="min-thickness"]'))).replace(/\s+/g, ' ')).toMatch(
       /Every thickness of Channel sandstone down to 0\.01 m \(the thinnest searched\) meets every target at the current span \(now [\d.]+ m\): its thickness does not limit this design\./,
     );
+    // while the chosen layer's answer is being computed, no old or missing value is shown as its
+    // result (a null meant "no thickness meets every target")
+    await page.locator('span-finder-view').scrollIntoViewIfNeeded();
+    const shown: string = await page.locator('span-finder-view').evaluate(async (el: any) => {
+      el.pending = true;
+      el.minThickness = null;
+      await el.updateComplete;
+      return el.shadowRoot.querySelector('[data-role="min-thickness"]').textContent;
+    });
+    expect(shown.replace(/\s+/g, ' ').trim()).toBe('Thinnest Channel sandstone that meets every target at the current span: updating…');
     await expect.poll(() => page.locator('beam-charts-view select[data-role="chart-layer"]').inputValue()).toBe('1');
     await renderAllSections(page);
     await page.locator('beam-charts-view').screenshot({ path: resolve(ARTIFACTS, 'results-beam-charts.png') });

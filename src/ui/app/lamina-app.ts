@@ -866,6 +866,7 @@ export class LaminaApp extends LitElement {
                 .chart=${s.chart}
                 .chartLayer=${s.chartLayer}
                 .minThickness=${s.minThickness_m}
+                ?pending=${s.chartPending}
               ></span-finder-view>
               <beam-charts-view .project=${rp} .analysis=${s.analysis} .units=${s.units} .chart=${s.chart} .chartLayer=${s.chartLayer}></beam-charts-view>
       </section>

@@ -48,6 +48,8 @@ export class SpanFinderView extends DeferOffscreen(LitElement) {
   @property({ attribute: false }) curve: SpanCurve | null = null;
   @property() units: UnitSystem = 'SI';
   @property({ attribute: false }) minThickness: number | null = null;
+  /** True while the curve and the minimum thickness for the current project and layer are being computed: `minThickness` is then not theirs. */
+  @property({ type: Boolean }) pending = false;
   @property({ type: Number }) chartLayer = 0;
 
   private spanChartSvg = '';
@@ -168,7 +170,9 @@ export class SpanFinderView extends DeferOffscreen(LitElement) {
         </select>
       </div>
       <p data-role="min-thickness">
-        ${this.minThickness === null
+        ${this.pending
+          ? html`Thinnest <strong>${p.layers[layerIndex]?.name ?? ''}</strong> that meets every target at the current ${spanWord}: <span class="updating">updating…</span>`
+          : this.minThickness === null
           ? html`No thickness of <strong>${p.layers[layerIndex]?.name ?? ''}</strong> meets every target at the current ${spanWord}
               (or the thickness does not control it).`
           : this.minThickness <= THICKNESS_MIN_M
