@@ -104,6 +104,14 @@ describe('<span-finder-view> in the app (coal-room demo)', () => {
       return el.shadowRoot.querySelector('[data-role="min-thickness"]').textContent;
     });
     expect(shown.replace(/\s+/g, ' ').trim()).toBe('Thinnest Channel sandstone that meets every target at the current span: updating…');
+    // and a computation that failed says so
+    const failed: string = await page.locator('span-finder-view').evaluate(async (el: any) => {
+      el.pending = false;
+      el.chartError = 'the computation failed: worker gone';
+      await el.updateComplete;
+      return el.shadowRoot.querySelector('[data-role="min-thickness"]').textContent;
+    });
+    expect(failed.replace(/\s+/g, ' ').trim()).toBe('Thinnest Channel sandstone that meets every target at the current span: not known (the computation failed: worker gone).');
     await expect.poll(() => page.locator('beam-charts-view select[data-role="chart-layer"]').inputValue()).toBe('1');
     await renderAllSections(page);
     await page.locator('beam-charts-view').screenshot({ path: resolve(ARTIFACTS, 'results-beam-charts.png') });

@@ -867,6 +867,7 @@ export class LaminaApp extends LitElement {
                 .chartLayer=${s.chartLayer}
                 .minThickness=${s.minThickness_m}
                 ?pending=${s.chartPending}
+                .chartError=${s.chartError}
               ></span-finder-view>
               <beam-charts-view .project=${rp} .analysis=${s.analysis} .units=${s.units} .chart=${s.chart} .chartLayer=${s.chartLayer}></beam-charts-view>
       </section>

@@ -50,6 +50,8 @@ export class SpanFinderView extends DeferOffscreen(LitElement) {
   @property({ attribute: false }) minThickness: number | null = null;
   /** True while the curve and the minimum thickness for the current project and layer are being computed: `minThickness` is then not theirs. */
   @property({ type: Boolean }) pending = false;
+  /** Why the minimum thickness (with the curve) could not be computed; null when it was. */
+  @property({ attribute: false }) chartError: string | null = null;
   @property({ type: Number }) chartLayer = 0;
 
   private spanChartSvg = '';
@@ -172,7 +174,9 @@ export class SpanFinderView extends DeferOffscreen(LitElement) {
       <p data-role="min-thickness">
         ${this.pending
           ? html`Thinnest <strong>${p.layers[layerIndex]?.name ?? ''}</strong> that meets every target at the current ${spanWord}: <span class="updating">updating…</span>`
-          : this.minThickness === null
+          : this.chartError !== null
+            ? html`Thinnest <strong>${p.layers[layerIndex]?.name ?? ''}</strong> that meets every target at the current ${spanWord}: <span class="error">not known (${this.chartError})</span>.`
+            : this.minThickness === null
           ? html`No thickness of <strong>${p.layers[layerIndex]?.name ?? ''}</strong> meets every target at the current ${spanWord}
               (or the thickness does not control it).`
           : this.minThickness <= THICKNESS_MIN_M

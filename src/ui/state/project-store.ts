@@ -63,6 +63,8 @@ export interface AppState {
   chart: DesignChart | null;
   chartLayer: number;
   minThickness_m: number | null;
+  /** Why the curve, the design chart and the minimum thickness could not be computed (null: they were, or are pending). */
+  chartError: string | null;
   error: string | null;
   /** Fields holding a refused value (unparsable text or a value the model refused). */
   fieldErrors: FieldError[];
@@ -152,6 +154,7 @@ export class ProjectStore {
       chart: null,
       chartLayer: 0,
       minThickness_m: null,
+      chartError: null,
       error: null,
       fieldErrors: [],
       stale: false,
@@ -400,7 +403,7 @@ export class ProjectStore {
       // after the results and the chart, in the same worker: never in their way
       if (supportPending) this.requestSupport(project);
     } else {
-      this.set({ analysis: null, resultsProject: project, curve: null, error: out.error, chartLayer, pending: false, chart: null, minThickness_m: null, chartPending: false, supportPending: false, timings });
+      this.set({ analysis: null, resultsProject: project, curve: null, error: out.error, chartLayer, pending: false, chart: null, minThickness_m: null, chartError: null, chartPending: false, supportPending: false, timings });
     }
   }
 
@@ -424,12 +427,13 @@ export class ProjectStore {
 
   private requestChart(project: Project, layer: number): void {
     const seq = ++this.chartSeq;
-    const landed = (out: ChartOutcome | null) => {
+    const landed = (out: ChartOutcome | null, chartError: string | null = null) => {
       if (out === null || seq !== this.chartSeq || project !== this.state.project || layer !== this.state.chartLayer) return;
-      this.set({ curve: out.curve, chart: out.chart, minThickness_m: out.minThickness_m, chartPending: false, timings: { ...this.state.timings, ...out.timings } });
+      this.set({ curve: out.curve, chart: out.chart, minThickness_m: out.minThickness_m, chartError, chartPending: false, timings: { ...this.state.timings, ...out.timings } });
     };
-    this.deps.compute.chart(project, layer).then(landed, () =>
-      landed({ layer, curve: null, chart: null, minThickness_m: null, timings: { curve: 0, chart: 0, minThickness: 0 } }),
+    this.deps.compute.chart(project, layer).then(
+      (out) => landed(out),
+      (err: unknown) => landed({ layer, curve: null, chart: null, minThickness_m: null, timings: { curve: 0, chart: 0, minThickness: 0 } }, `the computation failed: ${errorText(err)}`),
     );
   }
 

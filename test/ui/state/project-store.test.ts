@@ -309,6 +309,24 @@ describe('ProjectStore', () => {
     await broken.settled();
     expect(broken.getState().error).toBe('The analysis failed: worker gone');
   });
+
+  it('a chart computation that fails says why (not "no thickness meets"); the next that succeeds clears it', async () => {
+    const good = deps().compute;
+    let fail = true;
+    const s = new ProjectStore({
+      validate,
+      compute: { analyse: good.analyse, chart: (p: Project, layer: number) => (fail ? Promise.reject(new Error('worker gone')) : good.chart(p, layer)) },
+    }, twoLayers());
+    await s.settled();
+    expect(s.getState().analysis).not.toBeNull();
+    expect(s.getState().chartPending).toBe(false);
+    expect(s.getState().minThickness_m).toBeNull();
+    expect(s.getState().chartError).toBe('the computation failed: worker gone');
+    fail = false;
+    s.edit('layers[0].thickness_m', 0.6);
+    await s.settled();
+    expect(s.getState().chartError).toBeNull();
+  });
 });
 
 describe('ProjectStore: the support needed runs after the results, never in their way', () => {
