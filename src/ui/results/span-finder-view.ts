@@ -171,24 +171,25 @@ export class SpanFinderView extends DeferOffscreen(LitElement) {
           ${p.layers.map((l, i) => html`<option value=${i} ?selected=${i === layerIndex}>${i + 1}. ${l.name}</option>`)}
         </select>
       </div>
-      <p data-role="min-thickness">
-        ${this.pending
-          ? html`Thinnest <strong>${p.layers[layerIndex]?.name ?? ''}</strong> that meets every target at the current ${spanWord}: <span class="updating">updating…</span>`
-          : this.chartError !== null
-            ? html`Thinnest <strong>${p.layers[layerIndex]?.name ?? ''}</strong> that meets every target at the current ${spanWord}: <span class="error">not known (${this.chartError})</span>.`
-            : this.minThickness === null
-          ? html`No thickness of <strong>${p.layers[layerIndex]?.name ?? ''}</strong> meets every target at the current ${spanWord}
-              (or the thickness does not control it).`
-          : this.minThickness <= THICKNESS_MIN_M
-            ? html`Every thickness of <strong>${p.layers[layerIndex]?.name ?? ''}</strong> down to
-                <strong data-si-value=${this.minThickness}>${displayText(THICKNESS_MIN_M, 'length', u, 3)}</strong> (the thinnest searched)
-                meets every target at the current ${spanWord} (now ${displayText(p.layers[layerIndex]?.thickness_m ?? null, 'length', u, 3)}):
-                its thickness does not limit this design.`
-            : html`Thinnest <strong>${p.layers[layerIndex]?.name ?? ''}</strong> that meets every target at the current ${spanWord}:
-                <strong data-si-value=${this.minThickness}>${displayText(this.minThickness, 'length', u, 3)}</strong>
-                (now ${displayText(p.layers[layerIndex]?.thickness_m ?? null, 'length', u, 3)}).`}
-      </p>
+      <p data-role="min-thickness">${this.minThicknessText(p.layers[layerIndex], spanWord)}</p>
     `;
+  }
+
+  /** The minimum thickness of the chosen layer, in a sentence: pending, not known, none, not limiting, or the value. */
+  private minThicknessText(layer: Project['layers'][number] | undefined, spanWord: string) {
+    const u = this.units;
+    const name = html`<strong>${layer?.name ?? ''}</strong>`;
+    const now = displayText(layer?.thickness_m ?? null, 'length', u, 3);
+    const thinnest = html`Thinnest ${name} that meets every target at the current ${spanWord}:`;
+    const t = this.minThickness;
+    if (this.pending) return html`${thinnest} <span class="updating">updating…</span>`;
+    if (this.chartError !== null) return html`${thinnest} <span class="error">not known (${this.chartError})</span>.`;
+    if (t === null) return html`No thickness of ${name} meets every target at the current ${spanWord} (or the thickness does not control it).`;
+    if (t <= THICKNESS_MIN_M) {
+      return html`Every thickness of ${name} down to <strong data-si-value=${t}>${displayText(THICKNESS_MIN_M, 'length', u, 3)}</strong>
+        (the thinnest searched) meets every target at the current ${spanWord} (now ${now}): its thickness does not limit this design.`;
+    }
+    return html`${thinnest} <strong data-si-value=${t}>${displayText(t, 'length', u, 3)}</strong> (now ${now}).`;
   }
 }
 

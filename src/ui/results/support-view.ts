@@ -21,7 +21,7 @@ import { tokens } from '../styles/tokens';
 import { sheet } from '../styles/sheet';
 import { resultsStyles } from './results-styles';
 import { displayText } from './display-value';
-import { openingWords } from '../../model/span-wording';
+import { isOverhang, openingWords } from '../../model/span-wording';
 import { DeferOffscreen } from '../app/defer-offscreen';
 
 export interface SupportNeededState {
@@ -190,7 +190,7 @@ export class SupportView extends DeferOffscreen(LitElement) {
             <h3>Empirical cross-check <span class="tag">not counted</span></h3>
             <dl>
               <dt>Q</dt><dd>${numberText(e.q, 3)}</dd>
-              ${p.opening.type === 'cantilever'
+              ${isOverhang(p.opening.type)
                 ? html`<dt>Largest unsupported roof width</dt><dd>${displayText(e.unsupportedSpan_m, 'length', this.units)} (no limit on an overhang)</dd>`
                 : html`<dt>Largest unsupported span</dt><dd>${displayText(e.unsupportedSpan_m, 'length', this.units)} (this opening: ${displayText(report.opening.designSpan_m ?? p.opening.span_m, 'length', this.units)})</dd>`}
               <dt>Bolt length (rule)</dt><dd>${displayText(e.boltLength_m, 'length', this.units)}${b ? ` (this pattern: ${displayText(b.length_m, 'length', this.units)})` : ''}</dd>
